@@ -1,0 +1,24 @@
+import type { Metadata } from 'next';
+import { SiteHeader } from '@/components/shell/site-header';
+import { figuresFont, uiFont } from './fonts';
+import './globals.css';
+
+export const metadata: Metadata = {
+  title: { default: 'Rimscale — true-scale degree wheels and timing strips', template: '%s · Rimscale' },
+  description:
+    'Print true-scale degree wheels, flange rings and rim timing strips for small two-stroke engines, and keep a shop’s engine templates and build records.',
+};
+
+export default function RootLayout({ children }: { children: React.ReactNode }) {
+  return (
+    <html lang="en" className={`${uiFont.variable} ${figuresFont.variable}`}>
+      <body className="min-h-screen font-sans antialiased">
+        <SiteHeader />
+        <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
+        <footer className="mx-auto max-w-7xl px-4 py-8 text-xs text-steel-500">
+          Rimscale sheets are aids, not specifications: the engine maker’s manual and local regulations come first.
+        </footer>
+      </body>
+    </html>
+  );
+}

@@ -1,0 +1,23 @@
+import type { Knex } from 'knex';
+import * as createAccounts from './migrations/20261201000000_create_accounts';
+
+type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
+
+/**
+ * Inside the Next bundle knex cannot read the migrations folder, so the app lists
+ * them here. Names match the files (extension included) so the CLI and the app
+ * agree on what has run. Add each new migration to this list.
+ */
+const MIGRATIONS: Record<string, Migration> = {
+  '20261201000000_create_accounts.ts': createAccounts,
+};
+
+export const staticMigrationSource: Knex.MigrationSource<string> = {
+  getMigrations: async () => Object.keys(MIGRATIONS).sort(),
+  getMigrationName: (name) => name,
+  getMigration: async (name) => {
+    const migration = MIGRATIONS[name];
+    if (!migration) throw new Error(`Unknown migration ${name}`);
+    return migration;
+  },
+};
