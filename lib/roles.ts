@@ -1,0 +1,7 @@
+/** Membership roles, weakest first: each role can do everything the ones before it can. */
+export const ROLES = ['viewer', 'technician', 'owner'] as const;
+export type Role = (typeof ROLES)[number];
+
+export function roleAtLeast(role: Role, minimum: Role): boolean {
+  return ROLES.indexOf(role) >= ROLES.indexOf(minimum);
+}
