@@ -1,5 +1,8 @@
 import type { Knex } from 'knex';
 import * as createAccounts from './migrations/20261201000000_create_accounts';
+import * as createAccountRecords from './migrations/20261201000100_create_account_records';
+import * as createPrinterProfiles from './migrations/20261201000200_create_printer_profiles';
+import * as createTemplates from './migrations/20261201000600_create_templates';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
 
@@ -10,6 +13,9 @@ type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Prom
  */
 const MIGRATIONS: Record<string, Migration> = {
   '20261201000000_create_accounts.ts': createAccounts,
+  '20261201000100_create_account_records.ts': createAccountRecords,
+  '20261201000200_create_printer_profiles.ts': createPrinterProfiles,
+  '20261201000600_create_templates.ts': createTemplates,
 };
 
 export const staticMigrationSource: Knex.MigrationSource<string> = {

@@ -3,4 +3,11 @@ export const TABLES = {
   users: 'users',
   workspaces: 'workspaces',
   memberships: 'memberships',
+  oneTimeTokens: 'one_time_tokens',
+  invitations: 'invitations',
+  auditLog: 'audit_log',
+  printerProfiles: 'printer_profiles',
+  templates: 'templates',
+  templatePhotos: 'template_photos',
+  templateRevisions: 'template_revisions',
 } as const;

@@ -1,0 +1,47 @@
+import 'server-only';
+import type { NextAuthOptions } from 'next-auth';
+import CredentialsProvider from 'next-auth/providers/credentials';
+import { authSecret } from './auth-secret';
+import { signInWithPassword } from './password-sign-in';
+import { clientAddress } from './rate-limit';
+
+// next-auth 4 takes its origin from NEXTAUTH_URL, or from the Host header when this is set:
+// the app then works on whatever host and port it is served from without configuration.
+process.env.AUTH_TRUST_HOST ??= 'true';
+
+export const SIGN_IN_PATH = '/sign-in';
+
+export const authOptions: NextAuthOptions = {
+  // A getter: read per request, so `next build` needs no secret and production without one fails loudly.
+  get secret() {
+    return authSecret();
+  },
+  session: { strategy: 'jwt', maxAge: 30 * 24 * 60 * 60 },
+  pages: { signIn: SIGN_IN_PATH, error: SIGN_IN_PATH },
+  providers: [
+    CredentialsProvider({
+      name: 'E-mail and password',
+      credentials: {
+        email: { label: 'E-mail', type: 'email' },
+        password: { label: 'Password', type: 'password' },
+      },
+      authorize: (credentials, req) => signInWithPassword(credentials, clientAddress(req.headers ?? {})),
+    }),
+  ],
+  callbacks: {
+    jwt({ token, user }) {
+      if (user) token.sub = user.id;
+      return token;
+    },
+    session({ session, token }) {
+      session.user = { id: token.sub ?? '', email: token.email ?? '', name: token.name ?? '' };
+      return session;
+    },
+  },
+  logger: {
+    // next-auth's own messages never carry the submitted password; keep them terse.
+    error: (code) => console.error(`[auth] ${code}`),
+    warn: () => undefined,
+    debug: () => undefined,
+  },
+};
