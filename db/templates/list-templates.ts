@@ -1,0 +1,51 @@
+import 'server-only';
+import { db } from '@/db/knex';
+import { TABLES } from '@/db/tables';
+import type { TemplateListQuery } from '@/lib/templates/list-query';
+import type { TemplatePage } from '@/lib/templates/template';
+import type { TemplateFields } from '@/lib/templates/template-schema';
+import { selectTemplates } from './select-templates';
+import { rowToFields, rowToTemplate, SORT_COLUMNS, type TemplateRow } from './template-row';
+
+/** LIKE pattern for a search term, with the wildcards in the term escaped. */
+function likePattern(term: string): string {
+  return `%${term.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+/** One page of a workspace's templates: filtered, searched and sorted in SQL (limit/offset). */
+export async function listTemplates(workspaceId: number, query: TemplateListQuery): Promise<TemplatePage> {
+  const knex = db();
+  const filtered = () => {
+    const q = knex(`${TABLES.templates} as t`).where('t.workspace_id', workspaceId);
+    if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true' ? 1 : 0);
+    if (query.q) {
+      const pattern = likePattern(query.q);
+      q.andWhere((w) => w.whereRaw("t.name LIKE ? ESCAPE '\\'", [pattern]).orWhereRaw("t.description LIKE ? ESCAPE '\\'", [pattern]));
+    }
+    return q;
+  };
+  const [counted] = (await filtered().count({ total: '*' })) as Array<{ total: number }>;
+  const total = counted?.total ?? 0;
+  const column = `t.${SORT_COLUMNS[query.sort]}`;
+  const text = query.sort === 'name' || query.sort === 'description';
+  const idRows: Array<{ id: number }> = await filtered()
+    .select('t.id')
+    .orderByRaw(`${column} IS NULL`) // unknown measurements last in either direction
+    .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
+    .orderBy('t.id', query.dir)
+    .limit(query.pageSize)
+    .offset((query.page - 1) * query.pageSize);
+  const rows: TemplateRow[] = await selectTemplates(knex, workspaceId).whereIn(
+    't.id',
+    idRows.map((r) => r.id),
+  );
+  const byId = new Map(rows.map((r) => [r.id, r]));
+  const ordered = idRows.flatMap((r) => byId.get(r.id) ?? []);
+  return { items: ordered.map(rowToTemplate), total: Number(total), page: query.page, pageSize: query.pageSize };
+}
+
+/** Every template of a workspace (for CSV export), archived ones included, in name order. */
+export async function allTemplateFields(workspaceId: number): Promise<TemplateFields[]> {
+  const rows: TemplateRow[] = await db()(TABLES.templates).where('workspace_id', workspaceId).orderBy([{ column: 'name' }, { column: 'id' }]);
+  return rows.map(rowToFields);
+}

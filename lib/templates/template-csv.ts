@@ -1,0 +1,134 @@
+import Papa from 'papaparse';
+import { CSV_COLUMNS, CSV_COLUMN_SPECS, columnForField, type CsvColumn, type CsvColumnSpec } from './csv-columns';
+import {
+  readBooleanCell,
+  readListCell,
+  readNumberCell,
+  readPortsCell,
+  readTextCell,
+  writeListCell,
+  writeNumberCell,
+  writePortsCell,
+  writeTextCell,
+  type CellResult,
+} from './csv-cells';
+import { templateSchema, type TemplateFields } from './template-schema';
+
+export const MAX_IMPORT_ROWS = 20_000;
+
+/** One problem in an import: `row` is the spreadsheet row (the header is row 1). */
+export type CsvProblem = { row: number; column: string; message: string };
+
+export type CsvImportResult = { ok: true; templates: TemplateFields[] } | { ok: false; problems: CsvProblem[] };
+
+function readCell(spec: CsvColumnSpec, cell: string): CellResult<unknown> {
+  switch (spec.kind) {
+    case 'number':
+      return readNumberCell(cell, spec.column);
+    case 'list':
+      return readListCell(cell, spec.column);
+    case 'ports':
+      return readPortsCell(cell, spec.column);
+    case 'boolean':
+      return readBooleanCell(cell, spec.column);
+    case 'rotation':
+      return { ok: true, value: cell.trim() === '' ? 'cw' : cell.trim().toLowerCase() };
+    case 'text':
+      return { ok: true, value: readTextCell(cell) };
+  }
+}
+
+function headerProblems(headers: string[]): CsvProblem[] {
+  const problems: CsvProblem[] = [];
+  const known = new Set<string>(CSV_COLUMNS);
+  for (const header of headers)
+    if (!known.has(header))
+      problems.push({ row: 1, column: header, message: `Unknown column "${header}"; the columns are: ${CSV_COLUMNS.join(', ')}` });
+  const seen = new Set<string>();
+  for (const header of headers) {
+    if (seen.has(header)) problems.push({ row: 1, column: header, message: `Column "${header}" appears twice` });
+    seen.add(header);
+  }
+  if (!headers.includes('name')) problems.push({ row: 1, column: 'name', message: 'The header row must have a "name" column' });
+  return problems;
+}
+
+function rowToTemplate(record: Record<string, string>, row: number, problems: CsvProblem[]): TemplateFields | null {
+  const raw: Record<string, unknown> = {};
+  let cellsOk = true;
+  for (const spec of CSV_COLUMN_SPECS) {
+    const cell = record[spec.column];
+    if (cell === undefined) continue;
+    const result = readCell(spec, cell);
+    if (result.ok) raw[spec.field] = result.value;
+    else {
+      problems.push({ row, column: spec.column, message: result.message });
+      cellsOk = false;
+    }
+  }
+  const parsed = templateSchema.safeParse(raw);
+  if (!parsed.success) {
+    for (const issue of parsed.error.issues) {
+      const field = String(issue.path[0] ?? 'name');
+      if (!cellsOk && raw[field] === undefined) continue; // already reported as an unreadable cell
+      problems.push({ row, column: columnForField(field) ?? field, message: issue.message });
+    }
+    return null;
+  }
+  return cellsOk ? parsed.data : null;
+}
+
+/**
+ * Reads a template CSV (column set in csv-columns.ts). Every row is checked and
+ * every problem reported; templates come back only when all rows pass.
+ */
+export function parseTemplatesCsv(text: string): CsvImportResult {
+  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
+    header: true,
+    skipEmptyLines: 'greedy',
+    transformHeader: (h) => h.trim().toLowerCase(),
+  });
+  const headers = parsed.meta.fields ?? [];
+  const problems = headerProblems(headers);
+  for (const error of parsed.errors)
+    problems.push({ row: (error.row ?? -1) + 2, column: '(row)', message: `CSV format: ${error.message}` });
+  if (problems.length > 0) return { ok: false, problems };
+  if (parsed.data.length === 0) return { ok: false, problems: [{ row: 2, column: '(row)', message: 'The file has no template rows' }] };
+  if (parsed.data.length > MAX_IMPORT_ROWS)
+    return { ok: false, problems: [{ row: MAX_IMPORT_ROWS + 2, column: '(row)', message: `At most ${MAX_IMPORT_ROWS} rows per import` }] };
+
+  const templates: TemplateFields[] = [];
+  parsed.data.forEach((record, index) => {
+    const template = rowToTemplate(record, index + 2, problems);
+    if (template) templates.push(template);
+  });
+  return problems.length > 0 ? { ok: false, problems } : { ok: true, templates };
+}
+
+function templateToRecord(t: TemplateFields): Record<CsvColumn, string> {
+  return {
+    name: writeTextCell(t.name),
+    description: writeTextCell(t.description),
+    bore_mm: writeNumberCell(t.boreMm),
+    stroke_mm: writeNumberCell(t.strokeMm),
+    rod_mm: writeNumberCell(t.rodMm),
+    rotation: t.rotation,
+    rim_diameter_mm: writeNumberCell(t.rimDiameterMm),
+    face_diameter_mm: writeNumberCell(t.faceDiameterMm),
+    flange_diameter_mm: writeNumberCell(t.flangeDiameterMm),
+    hub_hole_mm: writeNumberCell(t.hubHoleMm),
+    static_advance_deg_btdc: writeNumberCell(t.staticAdvanceDeg),
+    advance_marks_deg_btdc: writeListCell(t.advanceMarksDeg),
+    port_targets: writePortsCell(t.portTargets),
+    notes: writeTextCell(t.notes),
+    archived: t.archived ? 'true' : 'false',
+  };
+}
+
+/** Writes templates in the documented column set, header first, CRLF line ends (RFC 4180). */
+export function templatesToCsv(templates: TemplateFields[]): string {
+  return Papa.unparse(
+    { fields: [...CSV_COLUMNS], data: templates.map((t) => CSV_COLUMNS.map((c) => templateToRecord(t)[c])) },
+    { newline: '\r\n', quotes: false },
+  );
+}
