@@ -22,3 +22,8 @@ export function sinDeg(deg: number): number {
 export function cosDeg(deg: number): number {
   return Math.cos(degToRad(deg));
 }
+
+/** The angle of the point (x, y) in degrees, (−180, 180]: Math.atan2 with the answer in degrees. */
+export function atan2Deg(y: number, x: number): number {
+  return radToDeg(Math.atan2(y, x));
+}

@@ -1,0 +1,52 @@
+import { z } from 'zod';
+import { crankGeometryProblem } from './slider-crank';
+
+/**
+ * Field builders shared by the calculator schemas. Every message names the field
+ * (label and JSON name) and its allowed range, in the style of the sheet request schema.
+ */
+
+export const STROKE_RANGE_MM = { min: 1, max: 300 } as const;
+export const ROD_RANGE_MM = { min: 1, max: 1000 } as const;
+export const DECK_RANGE_MM = { min: -20, max: 20 } as const;
+export const PORT_HEIGHT_RANGE_MM = { min: 0, max: 400 } as const;
+export const MAX_CALC_PORTS = 12;
+
+function withUnit(value: number, unit: string): string {
+  if (!unit) return String(value);
+  return unit.startsWith('°') ? `${value}${unit}` : `${value} ${unit}`;
+}
+
+export function numberField(label: string, field: string, min: number, max: number, unit: string) {
+  const range = min < 0 ? `${min} to ${withUnit(max, unit)}` : `${min}–${withUnit(max, unit)}`;
+  return z
+    .number({ error: `${label} (${field}) must be a number, ${range}` })
+    .min(min, `${label} (${field}) must be at least ${withUnit(min, unit)} (allowed ${range})`)
+    .max(max, `${label} (${field}) must be at most ${withUnit(max, unit)} (allowed ${range})`);
+}
+
+export const strokeField = () => numberField('Stroke', 'strokeMm', STROKE_RANGE_MM.min, STROKE_RANGE_MM.max, 'mm');
+export const rodField = () => numberField('Con-rod length', 'rodMm', ROD_RANGE_MM.min, ROD_RANGE_MM.max, 'mm');
+
+type RefineContext = { addIssue: (issue: { code: 'custom'; path: string[]; message: string }) => void };
+
+/**
+ * Adds the "rod must be longer than the crank throw" issue, with the allowed range.
+ * Zod runs object refinements after range failures too, so a stroke already out of
+ * range is left to its own message. Returns whether the geometry is usable.
+ */
+export function checkCrankGeometry(value: { strokeMm: number; rodMm: number }, ctx: RefineContext): boolean {
+  if (!strokeInRange(value.strokeMm)) return false;
+  const problem = crankGeometryProblem(value);
+  if (!problem) return true;
+  ctx.addIssue({
+    code: 'custom',
+    path: [problem.field],
+    message: `${problem.message}: allowed over ${value.strokeMm / 2} up to ${ROD_RANGE_MM.max} mm`,
+  });
+  return false;
+}
+
+export function strokeInRange(strokeMm: number): boolean {
+  return strokeMm >= STROKE_RANGE_MM.min && strokeMm <= STROKE_RANGE_MM.max;
+}
