@@ -1,0 +1,30 @@
+import { z } from 'zod';
+import { parseJsonBody } from '@/app/lib/api';
+import { requireRole } from '@/app/lib/authz';
+import { findTemplate } from '@/db/templates/find-template';
+import { updateTemplate } from '@/db/templates/update-template';
+import { versionSchema } from '@/lib/templates/template-schema';
+import { handle, parseId, templateNotFound, type TemplateParams } from '../../_shared/handle';
+import { updateResponse } from '../../_shared/responses';
+
+const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.boolean().default(true) }).strict();
+
+/**
+ * POST …/templates/[id]/archive — technician or above. Body `{ version?, archived? }`:
+ * archives (or with `archived: false` restores to the list); with a version, a stale one answers 409.
+ */
+export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace, id } = await params;
+    const access = await requireRole(workspace, 'technician');
+    const templateId = parseId(id);
+    const current = templateId ? await findTemplate(access.workspace.id, templateId) : null;
+    if (!current) return templateNotFound();
+    // An empty body means "archive at whatever version it is now".
+    const text = await request.text();
+    const body = await parseJsonBody(new Request(request.url, { method: 'POST', body: text.trim() || '{}' }), archiveSchema);
+    if (!body.ok) return body.response;
+    const version = body.data.version ?? current.version;
+    return updateResponse(await updateTemplate(access.workspace.id, current.id, access.user.id, version, { archived: body.data.archived }));
+  });
+}

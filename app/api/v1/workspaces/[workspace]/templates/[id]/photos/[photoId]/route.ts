@@ -1,0 +1,46 @@
+import { requireRole } from '@/app/lib/authz';
+import { deleteObject, getObject } from '@/app/lib/storage';
+import { findTemplate } from '@/db/templates/find-template';
+import { deletePhotoRow, findPhoto } from '@/db/templates/photos';
+import { handle, parseId, templateNotFound } from '../../../_shared/handle';
+
+type Params = { params: Promise<{ workspace: string; id: string; photoId: string }> };
+
+async function locate(params: Params['params'], minimum: 'viewer' | 'technician') {
+  const { workspace, id, photoId } = await params;
+  const access = await requireRole(workspace, minimum);
+  const templateId = parseId(id);
+  const photoNumber = parseId(photoId);
+  const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
+  return template && photoNumber ? findPhoto(template.id, photoNumber) : null;
+}
+
+/** GET …/photos/[photoId] (`?size=thumb` for the WebP thumbnail) — the stored image, viewer or above. */
+export async function GET(request: Request, { params }: Params): Promise<Response> {
+  return handle(async () => {
+    const photo = await locate(params, 'viewer');
+    if (!photo) return templateNotFound();
+    const thumb = new URL(request.url).searchParams.get('size') === 'thumb';
+    const data = await getObject(thumb ? photo.thumbKey : photo.storageKey);
+    if (!data) return templateNotFound();
+    return new Response(new Uint8Array(data), {
+      headers: {
+        'Content-Type': thumb ? 'image/webp' : photo.contentType,
+        'Content-Length': String(data.length),
+        'Cache-Control': 'private, max-age=3600',
+        'X-Content-Type-Options': 'nosniff',
+      },
+    });
+  });
+}
+
+/** DELETE …/photos/[photoId] — technician or above; removes the row and both files. */
+export async function DELETE(_request: Request, { params }: Params): Promise<Response> {
+  return handle(async () => {
+    const photo = await locate(params, 'technician');
+    if (!photo) return templateNotFound();
+    await deletePhotoRow(photo.id);
+    await Promise.all([deleteObject(photo.storageKey), deleteObject(photo.thumbKey)]);
+    return new Response(null, { status: 204 });
+  });
+}

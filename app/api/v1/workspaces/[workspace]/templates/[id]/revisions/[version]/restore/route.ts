@@ -1,0 +1,37 @@
+import { z } from 'zod';
+import { parseJsonBody } from '@/app/lib/api';
+import { requireRole } from '@/app/lib/authz';
+import { findTemplate } from '@/db/templates/find-template';
+import { revisionSnapshot } from '@/db/templates/revisions';
+import { updateTemplate } from '@/db/templates/update-template';
+import { versionSchema } from '@/lib/templates/template-schema';
+import { handle, parseId, templateNotFound } from '../../../../_shared/handle';
+import { updateResponse } from '../../../../_shared/responses';
+
+type Params = { params: Promise<{ workspace: string; id: string; version: string }> };
+
+const restoreSchema = z.object({ version: versionSchema }).strict();
+
+/**
+ * POST …/templates/[id]/revisions/[version]/restore — body `{ version }` (the current version the
+ * caller saw). Brings back the template as it was at revision [version], recorded as a new revision.
+ */
+export async function POST(request: Request, { params }: Params): Promise<Response> {
+  return handle(async () => {
+    const { workspace, id, version } = await params;
+    const access = await requireRole(workspace, 'technician');
+    const templateId = parseId(id);
+    const revision = parseId(version);
+    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
+    const snapshot = template && revision ? await revisionSnapshot(template.id, revision) : null;
+    if (!template || !snapshot || !revision) return templateNotFound();
+    const body = await parseJsonBody(request, restoreSchema);
+    if (!body.ok) return body.response;
+    return updateResponse(
+      await updateTemplate(access.workspace.id, template.id, access.user.id, body.data.version, snapshot, {
+        action: 'restore',
+        restoredFromVersion: revision,
+      }),
+    );
+  });
+}

@@ -1,0 +1,54 @@
+import { parseJsonBody } from '@/app/lib/api';
+import { requireRole } from '@/app/lib/authz';
+import { deleteObject } from '@/app/lib/storage';
+import { deleteTemplate } from '@/db/templates/delete-template';
+import { findTemplate } from '@/db/templates/find-template';
+import { listPhotos, publicPhoto } from '@/db/templates/photos';
+import { updateTemplate } from '@/db/templates/update-template';
+import { templatePatchSchema } from '@/lib/templates/template-schema';
+import { handle, parseId, templateNotFound, type TemplateParams } from '../_shared/handle';
+import { updateResponse } from '../_shared/responses';
+
+/** GET …/templates/[id] — the template and its photos, viewer or above. */
+export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace, id } = await params;
+    const access = await requireRole(workspace, 'viewer');
+    const templateId = parseId(id);
+    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
+    if (!template) return templateNotFound();
+    const photos = (await listPhotos(template.id)).map(publicPhoto);
+    return Response.json({ template, photos });
+  });
+}
+
+/**
+ * PATCH …/templates/[id] — `{ version, ...fields }`, technician or above. The version is the
+ * one the edit started from; if someone saved in between the answer is 409 and nothing is written.
+ * `{ version, archived: true }` archives.
+ */
+export async function PATCH(request: Request, { params }: TemplateParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace, id } = await params;
+    const access = await requireRole(workspace, 'technician');
+    const templateId = parseId(id);
+    if (!templateId) return templateNotFound();
+    const body = await parseJsonBody(request, templatePatchSchema);
+    if (!body.ok) return body.response;
+    const { version, ...changes } = body.data;
+    return updateResponse(await updateTemplate(access.workspace.id, templateId, access.user.id, version, changes));
+  });
+}
+
+/** DELETE …/templates/[id] — owner only: removes the template, its history and its photo files. */
+export async function DELETE(_request: Request, { params }: TemplateParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace, id } = await params;
+    const access = await requireRole(workspace, 'owner');
+    const templateId = parseId(id);
+    const keys = templateId ? await deleteTemplate(access.workspace.id, templateId) : null;
+    if (!keys) return templateNotFound();
+    await Promise.all(keys.map(deleteObject));
+    return new Response(null, { status: 204 });
+  });
+}

@@ -1,0 +1,22 @@
+import 'server-only';
+import type { Template } from '@/lib/templates/template';
+import type { UpdateOutcome } from '@/db/templates/update-template';
+import { jsonError } from '@/app/lib/api';
+import { templateNotFound } from './handle';
+
+/** "changed by X at T — reload": a stale save never overwrites; the caller gets the current state back. */
+export function conflictResponse(current: Template): Response {
+  const who = current.updatedBy?.name || 'someone';
+  const error = `This template was changed by ${who} at ${current.updatedAt} (now version ${current.version}) — reload to see the changes, then apply yours again`;
+  return Response.json(
+    { error, issues: [{ path: 'version', message: error }], current },
+    { status: 409 },
+  );
+}
+
+export function updateResponse(outcome: UpdateOutcome): Response {
+  if (outcome.ok) return Response.json({ template: outcome.template, changed: outcome.changed });
+  if (outcome.reason === 'not-found') return templateNotFound();
+  if (outcome.reason === 'conflict') return conflictResponse(outcome.current);
+  return jsonError(400, 'Some fields are not valid', outcome.issues);
+}

@@ -1,0 +1,19 @@
+import { requireRole } from '@/app/lib/authz';
+import { allTemplateFields } from '@/db/templates/list-templates';
+import { templatesToCsv } from '@/lib/templates/template-csv';
+import { handle, type WorkspaceParams } from '../_shared/handle';
+
+/** GET …/templates/export — every template of the workspace as CSV (column set in lib/templates/csv-columns.ts). */
+export async function GET(_request: Request, { params }: WorkspaceParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace } = await params;
+    const access = await requireRole(workspace, 'viewer');
+    const csv = templatesToCsv(await allTemplateFields(access.workspace.id));
+    return new Response(csv, {
+      headers: {
+        'Content-Type': 'text/csv; charset=utf-8',
+        'Content-Disposition': `attachment; filename="${access.workspace.slug}-templates.csv"`,
+      },
+    });
+  });
+}

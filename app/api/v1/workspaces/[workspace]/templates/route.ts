@@ -1,0 +1,31 @@
+import { jsonError, parseJsonBody } from '@/app/lib/api';
+import { requireRole } from '@/app/lib/authz';
+import { createTemplate } from '@/db/templates/create-template';
+import { listTemplates } from '@/db/templates/list-templates';
+import { toFieldIssues } from '@/lib/sheet/sheet-request';
+import { listQueryFromParams } from '@/lib/templates/list-query';
+import { templateSchema } from '@/lib/templates/template-schema';
+import { handle, type WorkspaceParams } from './_shared/handle';
+
+/** GET …/templates?q=&sort=&dir=&archived=false|true|all&page=&pageSize= — one page, viewer or above. */
+export async function GET(request: Request, { params }: WorkspaceParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace } = await params;
+    const access = await requireRole(workspace, 'viewer');
+    const query = listQueryFromParams(new URL(request.url).searchParams);
+    if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
+    return Response.json(await listTemplates(access.workspace.id, query.data));
+  });
+}
+
+/** POST …/templates — create (technician or above); answers 201 with the template at version 1. */
+export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace } = await params;
+    const access = await requireRole(workspace, 'technician');
+    const body = await parseJsonBody(request, templateSchema);
+    if (!body.ok) return body.response;
+    const template = await createTemplate(access.workspace.id, access.user.id, body.data);
+    return Response.json({ template }, { status: 201, headers: { Location: `${new URL(request.url).pathname}/${template.id}` } });
+  });
+}
