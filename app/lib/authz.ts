@@ -57,3 +57,14 @@ export async function requireRole(workspaceSlug: string, minimum: Role): Promise
 export function accessErrorResponse(err: unknown): Response | null {
   return err instanceof AccessError ? jsonError(err.status, err.message) : null;
 }
+
+/** Runs a route handler body, answering AccessErrors in the API shape and rethrowing the rest. */
+export async function guarded(body: () => Promise<Response>): Promise<Response> {
+  try {
+    return await body();
+  } catch (err) {
+    const response = accessErrorResponse(err);
+    if (response) return response;
+    throw err;
+  }
+}

@@ -1,0 +1,12 @@
+import { sendVerification } from '@/app/lib/account-service';
+import { appOrigin } from '@/app/lib/app-origin';
+import { guarded, requireUser } from '@/app/lib/authz';
+
+/** POST: mails the signed-in user a new confirmation link (nothing if already confirmed). */
+export async function POST(request: Request) {
+  return guarded(async () => {
+    const user = await requireUser();
+    await sendVerification(user.id, appOrigin(request));
+    return Response.json({ sent: true }, { status: 202 });
+  });
+}

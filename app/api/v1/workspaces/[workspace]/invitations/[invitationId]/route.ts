@@ -1,0 +1,19 @@
+import { jsonError } from '@/app/lib/api';
+import { guarded, requireRole } from '@/app/lib/authz';
+import { idParam } from '@/app/lib/service-response';
+import { revokeInvitation } from '@/db/invitations';
+
+type Context = { params: Promise<{ workspace: string; invitationId: string }> };
+
+/** DELETE: owners withdraw a pending invitation; its link stops working. */
+export async function DELETE(_request: Request, { params }: Context) {
+  return guarded(async () => {
+    const { workspace, invitationId } = await params;
+    const access = await requireRole(workspace, 'owner');
+    const id = idParam(invitationId);
+    if (id === null || !(await revokeInvitation(access.workspace.id, id))) {
+      return jsonError(404, 'No such pending invitation in this workspace');
+    }
+    return new Response(null, { status: 204 });
+  });
+}

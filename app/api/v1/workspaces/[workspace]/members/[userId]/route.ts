@@ -1,0 +1,33 @@
+import { jsonError, parseJsonBody } from '@/app/lib/api';
+import { guarded, requireRole } from '@/app/lib/authz';
+import { idParam, serviceResponse } from '@/app/lib/service-response';
+import { changeRole, removeMember } from '@/app/lib/workspace-service';
+import { roleChangeSchema } from '@/lib/account-forms';
+
+type Context = { params: Promise<{ workspace: string; userId: string }> };
+
+const NO_MEMBER = 'No such member in this workspace';
+
+/** PATCH { role }: owners change a member's role; the last owner cannot be demoted. */
+export async function PATCH(request: Request, { params }: Context) {
+  return guarded(async () => {
+    const { workspace, userId } = await params;
+    const access = await requireRole(workspace, 'owner');
+    const target = idParam(userId);
+    if (target === null) return jsonError(404, NO_MEMBER);
+    const parsed = await parseJsonBody(request, roleChangeSchema);
+    if (!parsed.ok) return parsed.response;
+    return serviceResponse(await changeRole(access, target, parsed.data.role));
+  });
+}
+
+/** DELETE: owners remove a member; the last owner cannot be removed. */
+export async function DELETE(_request: Request, { params }: Context) {
+  return guarded(async () => {
+    const { workspace, userId } = await params;
+    const access = await requireRole(workspace, 'owner');
+    const target = idParam(userId);
+    if (target === null) return jsonError(404, NO_MEMBER);
+    return serviceResponse(await removeMember(access, target), 204);
+  });
+}

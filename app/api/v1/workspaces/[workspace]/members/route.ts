@@ -1,0 +1,12 @@
+import { guarded, requireRole } from '@/app/lib/authz';
+import { membersOf } from '@/db/accounts';
+
+type Context = { params: Promise<{ workspace: string }> };
+
+/** GET: the members of the workspace with their roles (viewer and up). */
+export async function GET(_request: Request, { params }: Context) {
+  return guarded(async () => {
+    const access = await requireRole((await params).workspace, 'viewer');
+    return Response.json(await membersOf(access.workspace.id));
+  });
+}

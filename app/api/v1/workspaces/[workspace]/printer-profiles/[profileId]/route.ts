@@ -1,0 +1,19 @@
+import { jsonError } from '@/app/lib/api';
+import { guarded, requireRole } from '@/app/lib/authz';
+import { idParam } from '@/app/lib/service-response';
+import { deleteProfile } from '@/db/printer-profiles';
+
+type Context = { params: Promise<{ workspace: string; profileId: string }> };
+
+/** DELETE: technicians and owners remove a profile of their workspace. */
+export async function DELETE(_request: Request, { params }: Context) {
+  return guarded(async () => {
+    const { workspace, profileId } = await params;
+    const access = await requireRole(workspace, 'technician');
+    const id = idParam(profileId);
+    if (id === null || !(await deleteProfile(access.workspace.id, id))) {
+      return jsonError(404, 'No such printer profile in this workspace');
+    }
+    return new Response(null, { status: 204 });
+  });
+}

@@ -1,0 +1,24 @@
+import { parseJsonBody } from '@/app/lib/api';
+import { guarded, requireRole } from '@/app/lib/authz';
+import { addProfile, profilesOf } from '@/db/printer-profiles';
+import { workspacePrinterProfileSchema } from '@/lib/workspace-printer-profile';
+
+type Context = { params: Promise<{ workspace: string }> };
+
+/** GET: the workspace's printer profiles (viewer and up: viewers print too). */
+export async function GET(_request: Request, { params }: Context) {
+  return guarded(async () => {
+    const access = await requireRole((await params).workspace, 'viewer');
+    return Response.json(await profilesOf(access.workspace.id));
+  });
+}
+
+/** POST { name, printerScaleX, printerScaleY }: technicians and owners save a profile. */
+export async function POST(request: Request, { params }: Context) {
+  return guarded(async () => {
+    const access = await requireRole((await params).workspace, 'technician');
+    const parsed = await parseJsonBody(request, workspacePrinterProfileSchema);
+    if (!parsed.ok) return parsed.response;
+    return Response.json(await addProfile(access.workspace.id, access.user.id, parsed.data), { status: 201 });
+  });
+}

@@ -1,0 +1,23 @@
+import { parseJsonBody } from '@/app/lib/api';
+import { guarded, requireUser } from '@/app/lib/authz';
+import { createShop } from '@/app/lib/workspace-service';
+import { workspacesOf } from '@/db/accounts';
+import { createShopSchema } from '@/lib/account-forms';
+
+/** GET: the signed-in user's workspaces with their role in each. */
+export async function GET() {
+  return guarded(async () => {
+    const user = await requireUser();
+    return Response.json(await workspacesOf(user.id));
+  });
+}
+
+/** POST { name }: any signed-in user creates a shop workspace and becomes its owner. */
+export async function POST(request: Request) {
+  return guarded(async () => {
+    const user = await requireUser();
+    const parsed = await parseJsonBody(request, createShopSchema);
+    if (!parsed.ok) return parsed.response;
+    return Response.json(await createShop(user.id, parsed.data.name), { status: 201 });
+  });
+}

@@ -1,0 +1,87 @@
+import 'server-only';
+import { randomBytes } from 'node:crypto';
+import { recordAudit } from '@/db/audit-log';
+import { createWorkspace, findUserByEmail, findUserById, normalizeEmail, slugFrom } from '@/db/accounts';
+import { db } from '@/db/knex';
+import { consumeToken, issueToken, retireTokens } from '@/db/one-time-tokens';
+import { lookUpInvitation } from '@/db/invitations';
+import { TABLES } from '@/db/tables';
+import type { SignUpInput } from '@/lib/account-forms';
+import { resetMail, verificationMail } from './emails';
+import { sendMail } from './mailer';
+import { TOKEN_REFUSAL_MESSAGES } from './one-time-token';
+import { hashPassword } from './passwords';
+
+export type ServiceResult<T> = { ok: true; value: T } | { ok: false; status: number; message: string };
+
+const refuse = (status: number, message: string) => ({ ok: false, status, message }) as const;
+
+export function randomSlugTail(): string {
+  return randomBytes(3).toString('hex');
+}
+
+/** Creates the account with its personal workspace; mails a confirmation link unless an invitation proves the address. */
+export async function signUp(input: SignUpInput, origin: string): Promise<ServiceResult<{ userId: number; verified: boolean }>> {
+  const email = normalizeEmail(input.email);
+  if (await findUserByEmail(email)) {
+    return refuse(409, 'An account with this e-mail already exists: sign in, or reset its password');
+  }
+  let verified = false;
+  if (input.invitationToken) {
+    const looked = await lookUpInvitation(input.invitationToken);
+    verified = looked.ok && looked.invitation.email === email;
+  }
+  const knex = db();
+  const [row] = await knex(TABLES.users)
+    .insert({
+      email,
+      name: input.name,
+      password_hash: await hashPassword(input.password),
+      email_verified_at: verified ? new Date().toISOString() : null,
+    })
+    .returning('id');
+  const userId: number = row.id;
+  await createWorkspace({ name: `${input.name}’s workspace`, kind: 'personal', ownerId: userId, slug: slugFrom(input.name, randomSlugTail()) });
+  await recordAudit({ action: 'sign-up', actorUserId: userId });
+  if (!verified) await sendVerification(userId, origin);
+  return { ok: true, value: { userId, verified } };
+}
+
+export async function sendVerification(userId: number, origin: string): Promise<void> {
+  const user = await findUserById(userId);
+  if (!user || user.email_verified_at) return;
+  const token = await issueToken('verify-email', userId);
+  await sendMail(verificationMail(user.email, user.name, `${origin}/verify-email?token=${token}`));
+}
+
+export async function verifyEmail(token: string): Promise<ServiceResult<{ userId: number }>> {
+  const used = await consumeToken('verify-email', token);
+  if (!used.ok) return refuse(400, TOKEN_REFUSAL_MESSAGES[used.reason]);
+  await db()(TABLES.users).where({ id: used.userId }).update({ email_verified_at: new Date().toISOString() });
+  await recordAudit({ action: 'email-verified', actorUserId: used.userId });
+  return { ok: true, value: { userId: used.userId } };
+}
+
+/** Mails a reset link if the address has an account; the caller answers the same either way. */
+export async function requestPasswordReset(email: string, origin: string): Promise<void> {
+  const user = await findUserByEmail(email);
+  if (!user) return;
+  const token = await issueToken('reset-password', user.id);
+  await sendMail(resetMail(user.email, `${origin}/reset-password/confirm?token=${token}`));
+}
+
+export async function resetPassword(token: string, password: string): Promise<ServiceResult<{ userId: number }>> {
+  const used = await consumeToken('reset-password', token);
+  if (!used.ok) return refuse(400, TOKEN_REFUSAL_MESSAGES[used.reason]);
+  // The mailbox has just been proven, so the address counts as verified too.
+  const now = new Date().toISOString();
+  await db()(TABLES.users)
+    .where({ id: used.userId })
+    .update({
+      password_hash: await hashPassword(password),
+      email_verified_at: db().raw('coalesce(email_verified_at, ?)', [now]),
+    });
+  await retireTokens('reset-password', used.userId);
+  await recordAudit({ action: 'password-reset', actorUserId: used.userId });
+  return { ok: true, value: { userId: used.userId } };
+}
