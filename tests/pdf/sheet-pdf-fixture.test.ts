@@ -119,8 +119,13 @@ describe('fills that print on a mono laser', () => {
     expect(fills.map(String)).toContain('#d9d9d9'); // 0.85 × 255 = 216.75 → 0xd9
     expect(list.fnArray).toContain(OPS.clip);
     const [page] = await readPdfGeometry(await renderSheetPdf(drawing));
-    const diagonals = page!.segments.filter((s) => Math.abs(Math.abs(s.x2Mm - s.x1Mm) - Math.abs(s.y2Mm - s.y1Mm)) < 1e-3 && segmentLengthMm(s) > 1);
-    // The hatched box is 30 × 10 mm; one line every 1.2 mm across its 40 mm extent in x − y gives ≥ 30 lines.
-    expect(diagonals.length).toBeGreaterThanOrEqual(30);
+    const diagonals = page!.segments.filter(
+      (s) => Math.abs(s.x2Mm - s.x1Mm - (s.y2Mm - s.y1Mm)) < 1e-3 && segmentLengthMm(s) > 1,
+    );
+    // Lines x − y = c, 1.2 mm apart square to the lines, so c steps by 1.2·√2; the 30 × 10 mm box spans 40 mm of c.
+    const offsets = diagonals.map((s) => s.x1Mm - s.y1Mm).sort((a, b) => a - b);
+    expect(offsets.length).toBeGreaterThanOrEqual(Math.floor(40 / (1.2 * Math.SQRT2)));
+    const gapsMm = offsets.slice(1).map((c, i) => (c - offsets[i]!) / Math.SQRT2);
+    for (const gap of gapsMm) expect(gap).toBeCloseTo(1.2, 3);
   });
 });
