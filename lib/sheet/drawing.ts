@@ -15,6 +15,7 @@ export type ShapeData = {
   checkMm?: number; // data-check-mm (scale-check bars and card outline)
   axis?: 'x' | 'y'; // data-axis for scale-check bars
   role?: string; // data-role: 'tdc-pointer', 'cut-line', 'port', 'join', 'registration', ...
+  segment?: string; // data-segment: the letter of a tiled strip segment ('A', 'B', …)
 };
 
 export type Fill = 'none' | 'black' | 'white' | 'grey15' | 'hatch';

@@ -1,0 +1,101 @@
+import { assertFiniteDrawing } from './assert-finite';
+import { toBlock, type Block } from './block';
+import type { Drawing, GraduationLevel, Shape } from './drawing';
+import { infoPanel, type InfoContent } from './info-panel';
+import { BLOCK_GAP_MM, fitsPage, printableMm, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
+import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
+import { correctForPrinter, correctPointMm } from './printer-correction';
+import type { SheetRequest } from './sheet-request';
+import { isoDate, sheetTitle, titleBlockLines } from './sheet-notes';
+import { placeBlock } from './block';
+import { ringLayout, wheelLayout } from './wheel-layout';
+import { scribeLayout } from './scribe-chart';
+import { stripLayout } from './strip-layout';
+
+export type BuildOptions = { date?: Date; marginMm?: number };
+
+/** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
+export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
+
+function correctedBlock(shapes: Shape[], req: SheetRequest, padMm: number, centreMm?: [number, number]): Block {
+  const corrected = correctForPrinter(shapes, req);
+  return toBlock(corrected, padMm, centreMm ? correctPointMm(centreMm, req) : undefined);
+}
+
+function scaleLayout(req: SheetRequest, page: PageSpec): ScaleLayout {
+  const printable = printableMm(page);
+  switch (req.kind) {
+    case 'wheel':
+    case 'ring': {
+      const polar = req.kind === 'wheel' ? wheelLayout(req) : ringLayout(req);
+      return { blocks: [correctedBlock(polar.shapes, req, 1, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false };
+    }
+    case 'strip': {
+      const strip = stripLayout(req, printable);
+      return {
+        blocks: strip.rows.map((row) => correctedBlock(row, req, 0.5)),
+        keptLevels: strip.keptLevels,
+        stripLengthMm: strip.stripLengthMm,
+        warnings: strip.warnings,
+        infoFirst: true,
+      };
+    }
+    case 'scribe': {
+      const chunks = scribeLayout(req, printable);
+      return { blocks: chunks.map((chunk) => correctedBlock(chunk, req, 0.5)), warnings: [], infoFirst: true };
+    }
+    case 'check':
+      return { blocks: [], warnings: [], infoFirst: true };
+  }
+}
+
+function infoBlock(content: InfoContent, req: SheetRequest, correctedWidthMm: number): Block {
+  // Half a millimetre of slack for the outline strokes at the panel edge.
+  const panel = infoPanel(content, (correctedWidthMm - 0.5) * req.printerScaleX);
+  return correctedBlock(panel.shapes, req, 0);
+}
+
+function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content: InfoContent): PagedDrawing {
+  const printable = printableMm(page);
+  const fullInfo = infoBlock(content, req, printable.widthMm);
+  if (layout.infoFirst) return stackOnPages([fullInfo, ...layout.blocks], page);
+  const scale = layout.blocks[0]!;
+  const besideWidth = printable.widthMm - scale.widthMm - BLOCK_GAP_MM;
+  if (besideWidth > 0 && scale.heightMm <= printable.heightMm) {
+    const side = infoBlock(content, req, besideWidth);
+    if (side.widthMm <= besideWidth + 1e-6 && side.heightMm <= printable.heightMm) {
+      const gap = (printable.widthMm - scale.widthMm - side.widthMm) / 2;
+      const combined: Block = {
+        widthMm: printable.widthMm,
+        heightMm: Math.max(scale.heightMm, side.heightMm),
+        shapes: [...placeBlock(scale, 0, 0), ...placeBlock(side, scale.widthMm + gap, 0)],
+        ...(scale.centreMm ? { centreMm: scale.centreMm } : {}),
+      };
+      return stackOnPages([combined], page);
+    }
+  }
+  if (fitsPage({ widthMm: Math.max(scale.widthMm, fullInfo.widthMm), heightMm: scale.heightMm + BLOCK_GAP_MM + fullInfo.heightMm }, page))
+    return stackOnPages([scale, fullInfo], page);
+  if (fitsPage(scale, page)) return stackOnPages([fullInfo, scale], page);
+  return tileOversized(fullInfo, scale, page);
+}
+
+/** The whole sheet for a validated request: geometry, pages and warnings. Pure; same input, same drawing. */
+export function buildDrawing(request: SheetRequest, options: BuildOptions = {}): Drawing {
+  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, 6) };
+  const layout = scaleLayout(request, page);
+  const title = sheetTitle(request);
+  const content: InfoContent = {
+    title,
+    request,
+    lines: titleBlockLines(request, {
+      date: isoDate(options.date ?? new Date()),
+      ...(layout.keptLevels ? { keptLevels: layout.keptLevels } : {}),
+      ...(layout.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
+    }),
+  };
+  const paged = arrange(request, page, layout, content);
+  const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings: [...layout.warnings, ...paged.warnings], title };
+  if (paged.centreMm) drawing.centreMm = paged.centreMm;
+  return assertFiniteDrawing(drawing);
+}

@@ -1,0 +1,103 @@
+import { placeBlock, type Block } from './block';
+import { checkBlockShapes } from './check-block';
+import type { Shape } from './drawing';
+import { polarPointMm } from './polar';
+import { wheelAngleDeg } from './scale-direction';
+import type { SheetRequest } from './sheet-request';
+import { CAUTIONS, PRINT_AT_100, whichWayNote } from './sheet-notes';
+import { arrow, circle, line, path, rect, text } from './shapes';
+import { STROKE_MM, TEXT_MM } from './sheet-style';
+import { wrapText } from './text-wrap';
+
+/** Title block, print line, "which way" note with its small diagram, cautions and the scale check. */
+
+export type InfoContent = { title: string; lines: string[]; request: SheetRequest };
+
+const LINE_GAP = 1.38; // line height as a share of the text size
+const GUTTER_MM = 5;
+const MIN_TEXT_COLUMN_MM = 58;
+
+function paragraph(shapes: Shape[], content: string, x: number, y: number, sizeMm: number, widthMm: number, weight: 'normal' | 'bold' = 'normal', role?: string): number {
+  const rows = wrapText(content, sizeMm, widthMm);
+  rows.forEach((row, i) => shapes.push(text(x, y + sizeMm + i * sizeMm * LINE_GAP, row, sizeMm, { weight, ...(role ? { data: { role } } : {}) })));
+  return y + sizeMm + (rows.length - 1) * sizeMm * LINE_GAP + sizeMm * 0.6;
+}
+
+function whichWayDiagram(req: SheetRequest, x: number, y: number): { shapes: Shape[]; heightMm: number } {
+  const shapes: Shape[] = [];
+  if (req.kind === 'strip') {
+    const ahead = req.carrier === 'rotating' ? 'BTDC' : 'ATDC';
+    const behind = ahead === 'BTDC' ? 'ATDC' : 'BTDC';
+    shapes.push(rect(x, y + 3, 56, 6, STROKE_MM.fine));
+    shapes.push(line(x + 28, y + 3, x + 28, y + 9, STROKE_MM.heavy, { role: 'which-way' }));
+    shapes.push(text(x + 28, y + 2, 'TDC', TEXT_MM.small, { anchor: 'middle' }));
+    shapes.push(text(x + 14, y + 7.3, behind, TEXT_MM.small, { anchor: 'middle', weight: 'bold', data: { role: `which-way-${behind.toLowerCase()}` } }));
+    shapes.push(text(x + 42, y + 7.3, ahead, TEXT_MM.small, { anchor: 'middle', weight: 'bold', data: { role: `which-way-${ahead.toLowerCase()}` } }));
+    shapes.push(...arrow(x, y + 12, x + 56, y + 12, 2.2, { role: 'which-way-arrow' }));
+    shapes.push(text(x + 28, y + 15.6, 'the rim moves this way', TEXT_MM.small, { anchor: 'middle' }));
+    return { shapes, heightMm: 17 };
+  }
+  const centre: [number, number] = [x + 12, y + 11];
+  const r = 8;
+  const sense = { rotation: req.rotation, carrier: req.carrier };
+  shapes.push(circle(centre[0], centre[1], r, STROKE_MM.fine));
+  shapes.push(line(centre[0], centre[1] - r, centre[0], centre[1] - r + 3, STROKE_MM.heavy, { role: 'which-way' }));
+  shapes.push(text(centre[0], centre[1] - r - 0.8, 'TDC', TEXT_MM.small, { anchor: 'middle' }));
+  const arc: Array<[number, number]> = [];
+  const [a0, a1] = req.rotation === 'cw' ? [150, 230] : [210, 130];
+  for (let i = 0; i <= 16; i += 1) arc.push(polarPointMm(centre, r - 2.5, a0 + ((a1 - a0) * i) / 16));
+  shapes.push(path(arc, false, 'none', STROKE_MM.outline, { role: 'which-way-arrow' }));
+  const tip = polarPointMm(centre, r - 2.5, a1 + (req.rotation === 'cw' ? 12 : -12));
+  shapes.push(arrow(arc[15]![0], arc[15]![1], tip[0], tip[1], 1.8, { role: 'which-way-arrow' })[1]);
+  for (const [crankDeg, label] of [
+    [315, 'BTDC'],
+    [45, 'ATDC'],
+  ] as const) {
+    const angle = wheelAngleDeg(crankDeg, sense);
+    const [px, py] = polarPointMm(centre, r + 2, angle);
+    shapes.push(text(px, py + 1, label, TEXT_MM.small, { anchor: angle < 180 ? 'start' : 'end', weight: 'bold', data: { role: `which-way-${label.toLowerCase()}` } }));
+  }
+  return { shapes, heightMm: 21 };
+}
+
+function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; heightMm: number } {
+  const shapes: Shape[] = [];
+  let y = paragraph(shapes, content.title, 0, 0, TEXT_MM.title, widthMm, 'bold', 'title');
+  const boxTop = y;
+  y += 0.6;
+  for (const row of content.lines) y = paragraph(shapes, row, 1.5, y, TEXT_MM.small, widthMm - 3);
+  shapes.push(rect(0, boxTop - 0.4, widthMm, y - boxTop + 1, STROKE_MM.fine, 'none', { role: 'title-block' }));
+  y += 2.5;
+  y = paragraph(shapes, PRINT_AT_100, 0, y, TEXT_MM.body, widthMm, 'bold', 'print-at-100');
+  y += 1;
+  y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
+  const diagram = whichWayDiagram(content.request, 4, y);
+  shapes.push(...diagram.shapes);
+  y += diagram.heightMm + 1;
+  y = paragraph(shapes, CAUTIONS, 0, y, TEXT_MM.small, widthMm, 'normal', 'cautions');
+  return { shapes, heightMm: y };
+}
+
+/** The info panel at a given width: text beside the scale check when there is room, above it otherwise. */
+export function infoPanel(content: InfoContent, widthMm: number): Block {
+  const check = checkBlockShapes();
+  const checkBlock: Block = { widthMm: check.widthMm, heightMm: check.heightMm, shapes: check.shapes };
+  const besideWidth = widthMm - check.widthMm - GUTTER_MM;
+  if (besideWidth >= MIN_TEXT_COLUMN_MM) {
+    const column = textColumn(content, besideWidth);
+    return {
+      widthMm,
+      heightMm: Math.max(column.heightMm, check.heightMm),
+      shapes: [...placeBlock(checkBlock, 0, 0), ...placeBlock({ widthMm: besideWidth, heightMm: column.heightMm, shapes: column.shapes }, check.widthMm + GUTTER_MM, 0)],
+    };
+  }
+  const columnWidth = Math.max(widthMm, check.widthMm);
+  const column = textColumn(content, columnWidth);
+  return {
+    widthMm: columnWidth,
+    heightMm: column.heightMm + GUTTER_MM + check.heightMm,
+    shapes: [...column.shapes, ...placeBlock(checkBlock, 0, column.heightMm + GUTTER_MM)],
+  };
+}
+
+export const INFO_PANEL_MIN_WIDTH_MM = () => checkBlockShapes().widthMm;

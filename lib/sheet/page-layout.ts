@@ -1,0 +1,123 @@
+import { placeBlock, type Block } from './block';
+import type { PageLayout, Shape, Size } from './drawing';
+import { circle, line, text } from './shapes';
+import { STROKE_MM, TEXT_MM } from './sheet-style';
+
+/**
+ * Puts blocks on pages. Two ways, both expressed through Drawing.pages:
+ * - stackOnPages: blocks flow top to bottom into page-sized regions stacked down the drawing;
+ *   page i's viewport is region i, placed at the page's top-left corner (origin [0, 0]).
+ * - tileOversized: page 1 is a region holding the info panel; below it the oversized block
+ *   (a big wheel or ring) is covered by a grid of overlapping viewports, one page each, with
+ *   registration crosses drawn in the overlaps and a tile label in each page's top band.
+ */
+
+export type PageSpec = { sizeMm: Size; marginMm: number };
+export type PagedDrawing = { sizeMm: Size; shapes: Shape[]; pages: PageLayout[]; centreMm?: [number, number]; warnings: string[] };
+
+export const BLOCK_GAP_MM = 5;
+export const TILE_LABEL_BAND_MM = 7;
+export const TILE_OVERLAP_MM = 12;
+const EPS = 1e-6;
+
+export function printableMm(page: PageSpec): Size {
+  return { widthMm: page.sizeMm.widthMm - 2 * page.marginMm, heightMm: page.sizeMm.heightMm - 2 * page.marginMm };
+}
+
+export function fitsPage(block: Pick<Block, 'widthMm' | 'heightMm'>, page: PageSpec): boolean {
+  const printable = printableMm(page);
+  return block.widthMm <= printable.widthMm + EPS && block.heightMm <= printable.heightMm + EPS;
+}
+
+function wholePage(page: PageSpec, regionTopMm: number): PageLayout {
+  return {
+    sizeMm: { ...page.sizeMm },
+    viewportMm: { xMm: 0, yMm: regionTopMm, widthMm: page.sizeMm.widthMm, heightMm: page.sizeMm.heightMm },
+    originMm: [0, 0],
+    pageShapes: [],
+  };
+}
+
+/** Blocks in order, each centred across the printable width; a block that does not fit below the last starts a new page. */
+export function stackOnPages(blocks: readonly Block[], page: PageSpec): PagedDrawing {
+  const printable = printableMm(page);
+  const shapes: Shape[] = [];
+  let region = 0;
+  let cursor = 0;
+  let centreMm: [number, number] | undefined;
+  for (const block of blocks) {
+    if (cursor > 0 && cursor + block.heightMm > printable.heightMm + EPS) {
+      region += 1;
+      cursor = 0;
+    }
+    const x = page.marginMm + Math.max(0, (printable.widthMm - block.widthMm) / 2);
+    const y = region * page.sizeMm.heightMm + page.marginMm + cursor;
+    shapes.push(...placeBlock(block, x, y));
+    if (block.centreMm && !centreMm) centreMm = [block.centreMm[0] + x, block.centreMm[1] + y];
+    cursor += block.heightMm + BLOCK_GAP_MM;
+  }
+  const pages = Array.from({ length: region + 1 }, (_, i) => wholePage(page, i * page.sizeMm.heightMm));
+  const drawing: PagedDrawing = { sizeMm: { widthMm: page.sizeMm.widthMm, heightMm: (region + 1) * page.sizeMm.heightMm }, shapes, pages, warnings: [] };
+  if (centreMm) drawing.centreMm = centreMm;
+  return drawing;
+}
+
+/** Evenly spread windows of `windowMm` over `totalMm`, each overlap at least `overlapMm`. */
+export function tileStarts(totalMm: number, windowMm: number, overlapMm: number): number[] {
+  if (totalMm <= windowMm + EPS) return [0];
+  const count = Math.ceil((totalMm - overlapMm) / (windowMm - overlapMm) - EPS);
+  const step = (totalMm - windowMm) / (count - 1);
+  return Array.from({ length: count }, (_, i) => i * step);
+}
+
+export function registrationCross(xMm: number, yMm: number): Shape[] {
+  const data = { role: 'registration' };
+  return [line(xMm - 3, yMm, xMm + 3, yMm, STROKE_MM.fine, data), line(xMm, yMm - 3, xMm, yMm + 3, STROKE_MM.fine, data), circle(xMm, yMm, 1.5, STROKE_MM.fine, data)];
+}
+
+const ROW_LETTERS = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ';
+
+export function tileOversized(info: Block, big: Block, page: PageSpec): PagedDrawing {
+  const printable = printableMm(page);
+  const window = { widthMm: printable.widthMm, heightMm: printable.heightMm - TILE_LABEL_BAND_MM };
+  const bx = page.marginMm;
+  const by = page.sizeMm.heightMm + page.marginMm;
+  const shapes: Shape[] = [...placeBlock(info, page.marginMm, page.marginMm), ...placeBlock(big, bx, by)];
+  const xs = tileStarts(big.widthMm, window.widthMm, TILE_OVERLAP_MM);
+  const ys = tileStarts(big.heightMm, window.heightMm, TILE_OVERLAP_MM);
+  const viewWidth = Math.min(window.widthMm, big.widthMm);
+  const viewHeight = Math.min(window.heightMm, big.heightMm);
+  // Crosses in the middle of every overlap, once per neighbouring row or column.
+  for (let i = 0; i + 1 < xs.length; i += 1) {
+    const xc = bx + (xs[i + 1]! + xs[i]! + viewWidth) / 2;
+    for (const y of ys) shapes.push(...registrationCross(xc, by + y + viewHeight / 2));
+  }
+  for (let j = 0; j + 1 < ys.length; j += 1) {
+    const yc = by + (ys[j + 1]! + ys[j]! + viewHeight) / 2;
+    for (const x of xs) shapes.push(...registrationCross(bx + x + viewWidth / 2, yc));
+  }
+  const pages: PageLayout[] = [wholePage(page, 0)];
+  ys.forEach((y, row) =>
+    xs.forEach((x, column) => {
+      const name = `${ROW_LETTERS[row % 26]}${column + 1}`;
+      pages.push({
+        sizeMm: { ...page.sizeMm },
+        viewportMm: { xMm: bx + x, yMm: by + y, widthMm: viewWidth, heightMm: viewHeight },
+        originMm: [page.marginMm, page.marginMm + TILE_LABEL_BAND_MM],
+        pageShapes: [
+          text(page.marginMm, page.marginMm + TEXT_MM.body + 0.5, `Tile ${name} (row ${ROW_LETTERS[row % 26]} of ${ys.length}, column ${column + 1} of ${xs.length}): overlap the neighbours so the registration crosses coincide, then tape. Print at 100 %.`, TEXT_MM.small, {
+            data: { role: 'tile-label' },
+          }),
+        ],
+      });
+    }),
+  );
+  const drawing: PagedDrawing = {
+    sizeMm: { widthMm: Math.max(page.sizeMm.widthMm, big.widthMm + 2 * page.marginMm), heightMm: by + big.heightMm + page.marginMm },
+    shapes,
+    pages,
+    warnings: [`The sheet is larger than one ${'page'}: it is split into ${xs.length * ys.length} tiles (${ys.length} × ${xs.length}) after an info page`],
+  };
+  if (big.centreMm) drawing.centreMm = [big.centreMm[0] + bx, big.centreMm[1] + by];
+  return drawing;
+}

@@ -1,0 +1,159 @@
+import type { Fill, GraduationLevel, Shape } from './drawing';
+import { annularSectorMm } from './polar-band';
+import { polarPointMm } from './polar';
+import type { ScaleMarks } from './scale-marks';
+import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
+import { arrow, line, path, text } from './shapes';
+import { STROKE_MM } from './sheet-style';
+
+/**
+ * Bends a scale round a circle: the polar transform. Ticks start at the reading edge
+ * (`edgeRadiusMm`) and run `towards` the centre (wheel) or away from it (ring).
+ * Depths are at full size; `depthScale` shrinks everything for small discs or narrow rings.
+ */
+
+export const TICK_DEPTH_MM: Record<GraduationLevel, number> = { 10: 6, 5: 4.5, 1: 3, 0.5: 2 };
+export const POLAR_DEPTH_MM = {
+  numeralSize: 3.2,
+  numeralGap: 0.8,
+  bandFrom: 10.8,
+  bandTo: 14.8,
+  labelFrom: 15.6,
+  labelSize: 2.2,
+  sideLabel: 30,
+  arrow: 21,
+  /** Everything above fits in this depth. */
+  total: 31,
+} as const;
+
+export type PolarScaleOptions = {
+  centreMm: [number, number];
+  edgeRadiusMm: number;
+  towards: 'centre' | 'outside';
+  depthScale: number;
+  rotation: Rotation;
+  carrier: Carrier;
+  marks: ScaleMarks;
+  bandFill: Fill;
+};
+
+export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
+  const f = o.depthScale;
+  const sign = o.towards === 'centre' ? -1 : 1;
+  const radius = (depthMm: number) => o.edgeRadiusMm + sign * depthMm * f;
+  const angle = (alongDeg: number) => wheelAngleFromAlongDeg(alongDeg, o.rotation);
+  const at = (alongDeg: number, depthMm: number) => polarPointMm(o.centreMm, radius(depthMm), angle(alongDeg));
+  const shapes: Shape[] = [];
+
+  for (const band of o.marks.bands) {
+    const a = angle(band.fromAlongDeg);
+    const sweep = band.toAlongDeg - band.fromAlongDeg;
+    const [fromCw, toCw] = o.rotation === 'cw' ? [a, a + sweep] : [a - sweep, a];
+    const radii = [radius(POLAR_DEPTH_MM.bandFrom), radius(POLAR_DEPTH_MM.bandTo)].sort((p, q) => p - q) as [number, number];
+    for (const piece of annularSectorMm(o.centreMm, radii[0], radii[1], fromCw, toCw))
+      shapes.push(path(piece.pointsMm, piece.closed, o.bandFill, STROKE_MM.fine, { role: 'advance-band' }));
+  }
+
+  for (const tick of o.marks.ticks) {
+    const [x1, y1] = at(tick.alongDeg, 0);
+    const [x2, y2] = at(tick.alongDeg, TICK_DEPTH_MM[tick.level]);
+    shapes.push(line(x1, y1, x2, y2, tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, { crankDeg: tick.crankDeg, level: tick.level }));
+  }
+
+  const numeralSize = POLAR_DEPTH_MM.numeralSize * f;
+  const numeralBaseline =
+    sign < 0
+      ? TICK_DEPTH_MM[10] + POLAR_DEPTH_MM.numeralGap + 0.8 * POLAR_DEPTH_MM.numeralSize
+      : TICK_DEPTH_MM[10] + POLAR_DEPTH_MM.numeralGap + 0.25 * POLAR_DEPTH_MM.numeralSize;
+  for (const number of o.marks.numbers) {
+    const [x, y] = at(number.alongDeg, numeralBaseline);
+    shapes.push(text(x, y, number.label, numeralSize, { anchor: 'middle', rotateDeg: angle(number.alongDeg), font: 'figures', data: { role: 'numeral', crankDeg: number.crankDeg } }));
+  }
+
+  const radialLabel = (alongDeg: number, label: string, data: Shape['data']) => {
+    const theta = angle(alongDeg);
+    const [x, y] = at(alongDeg, POLAR_DEPTH_MM.labelFrom);
+    // Text runs along the radius, away from the reading edge, and is never upside down.
+    const outward = theta - 90;
+    const rightHalf = theta < 180;
+    return text(x, y, label, POLAR_DEPTH_MM.labelSize * f, {
+      anchor: (sign < 0) === rightHalf ? 'end' : 'start',
+      rotateDeg: rightHalf ? outward : outward + 180,
+      weight: 'bold',
+      data,
+    });
+  };
+
+  for (const mark of o.marks.advance) {
+    const [x1, y1] = at(mark.alongDeg, 0);
+    const [x2, y2] = at(mark.alongDeg, POLAR_DEPTH_MM.bandTo);
+    shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg }));
+    shapes.push(radialLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
+  }
+  for (const mark of o.marks.ports) {
+    const [x1, y1] = at(mark.alongDeg, 0);
+    const [x2, y2] = at(mark.alongDeg, POLAR_DEPTH_MM.bandTo);
+    shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'port', crankDeg: mark.crankDeg }, 0.8 * f));
+    shapes.push(radialLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
+  }
+
+  shapes.push(...tdcPointer(o, at));
+  shapes.push(...sideLabels(o, at, angle));
+  shapes.push(...rotationArrow(o, radius(POLAR_DEPTH_MM.arrow)));
+  return shapes;
+}
+
+type At = (alongDeg: number, depthMm: number) => [number, number];
+
+function tdcPointer(o: PolarScaleOptions, at: At): Shape[] {
+  const f = o.depthScale;
+  const apex = at(0, POLAR_DEPTH_MM.bandFrom);
+  const base = at(0, POLAR_DEPTH_MM.bandTo);
+  const dx = base[0] - apex[0];
+  const dy = base[1] - apex[1];
+  const length = Math.hypot(dx, dy) || 1;
+  const half = 1.4 * f;
+  return [
+    path(
+      [apex, [base[0] - (dy / length) * half, base[1] + (dx / length) * half], [base[0] + (dy / length) * half, base[1] - (dx / length) * half]],
+      true,
+      'black',
+      STROKE_MM.fine,
+      { role: 'tdc-pointer', crankDeg: 0 },
+    ),
+  ];
+}
+
+function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => number): Shape[] {
+  const f = o.depthScale;
+  const size = 2.6 * f;
+  const place = (crankDeg: number, label: string, role: string) => {
+    const along = alongRotationDeg(crankDeg, o.carrier);
+    const [x, y] = at(along, crankDeg === 180 ? POLAR_DEPTH_MM.labelFrom + 1 : POLAR_DEPTH_MM.sideLabel);
+    const theta = angle(along);
+    const upright = theta > 90 && theta < 270 ? theta + 180 : theta;
+    return text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role } });
+  };
+  return [place(270, 'BTDC side', 'btdc-side'), place(90, 'ATDC side', 'atdc-side'), place(180, 'BDC', 'bdc-label')];
+}
+
+/** A curved arrow over BDC ± 14° (TDC side is busy with advance marks), pointing the way the flywheel turns as seen. */
+function rotationArrow(o: PolarScaleOptions, radiusMm: number): Shape[] {
+  const f = o.depthScale;
+  const spanDeg = 14;
+  const from = o.rotation === 'cw' ? 180 - spanDeg : 180 + spanDeg;
+  const to = o.rotation === 'cw' ? 180 + spanDeg : 180 - spanDeg;
+  const steps = 28;
+  const points: Array<[number, number]> = [];
+  for (let i = 0; i <= steps; i += 1) points.push(polarPointMm(o.centreMm, radiusMm, from + ((to - from) * i) / steps));
+  const tail = points[steps - 1]!;
+  const tip = polarPointMm(o.centreMm, radiusMm, to + (o.rotation === 'cw' ? 3 : -3));
+  const [, head] = arrow(tail[0], tail[1], tip[0], tip[1], 2.2 * f, { role: 'rotation-arrow' });
+  const label = o.rotation === 'cw' ? 'turns clockwise' : 'turns counter-clockwise';
+  const labelAt = polarPointMm(o.centreMm, radiusMm + (o.towards === 'centre' ? -3.2 : 4.5) * f, 180);
+  return [
+    path(points, false, 'none', STROKE_MM.outline, { role: 'rotation-arrow' }),
+    head,
+    text(labelAt[0], labelAt[1], label, 2 * f, { anchor: 'middle', data: { role: 'rotation-label' } }),
+  ];
+}

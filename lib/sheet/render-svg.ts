@@ -1,0 +1,103 @@
+import type { Drawing, Fill, Shape, ShapeData } from './drawing';
+
+/**
+ * The drawing as a standalone SVG at true size: width/height in mm and a viewBox in mm,
+ * so one user unit is one millimetre in any viewer, editor or cutter. Untiled.
+ */
+
+export const SHEET_FONT_FAMILIES = {
+  ui: "'Rimscale Sheet', 'DejaVu Sans', Arial, sans-serif",
+  figures: "'Rimscale Figures', 'DejaVu Sans Mono', 'Courier New', monospace",
+} as const;
+export const HATCH_PATTERN_ID = 'rimscale-hatch';
+export const GREY15 = '#d9d9d9'; // 15 % black on white
+
+/** Fixed small precision (4 decimals ≈ 0.1 µm), no exponent, never NaN. */
+export function num(value: number): string {
+  if (!Number.isFinite(value)) throw new Error(`SVG renderer was given a non-finite number (${value})`);
+  const rounded = Math.round(value * 1e4) / 1e4;
+  return rounded === 0 ? '0' : String(rounded);
+}
+
+const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
+
+export function escapeXml(content: string): string {
+  // Drop characters XML 1.0 forbids, then escape markup.
+  return content.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, '').replace(/[&<>"']/g, (c) => ESCAPES[c]!);
+}
+
+function dataAttributes(data: ShapeData | undefined): string {
+  if (!data) return '';
+  let out = '';
+  if (data.crankDeg !== undefined) out += ` data-crank-deg="${num(data.crankDeg)}"`;
+  if (data.level !== undefined) out += ` data-level="${data.level}"`;
+  if (data.advanceDeg !== undefined) out += ` data-advance-deg="${num(data.advanceDeg)}"`;
+  if (data.checkMm !== undefined) out += ` data-check-mm="${num(data.checkMm)}"`;
+  if (data.axis !== undefined) out += ` data-axis="${data.axis}"`;
+  if (data.role !== undefined) out += ` data-role="${escapeXml(data.role)}"`;
+  if (data.segment !== undefined) out += ` data-segment="${escapeXml(data.segment)}"`;
+  return out;
+}
+
+function fillValue(fill: Fill): string {
+  switch (fill) {
+    case 'none':
+      return 'none';
+    case 'black':
+      return '#000';
+    case 'white':
+      return '#fff';
+    case 'grey15':
+      return GREY15;
+    case 'hatch':
+      return `url(#${HATCH_PATTERN_ID})`;
+  }
+}
+
+function stroke(strokeMm: number, dashMm?: number): string {
+  if (strokeMm <= 0) return ' stroke="none"';
+  return ` stroke="#000" stroke-width="${num(strokeMm)}"${dashMm ? ` stroke-dasharray="${num(dashMm)} ${num(dashMm)}"` : ''}`;
+}
+
+export function shapeToSvg(shape: Shape): string {
+  switch (shape.type) {
+    case 'line':
+      return `<line x1="${num(shape.x1Mm)}" y1="${num(shape.y1Mm)}" x2="${num(shape.x2Mm)}" y2="${num(shape.y2Mm)}"${stroke(shape.strokeMm, shape.dashMm)}${dataAttributes(shape.data)}/>`;
+    case 'path': {
+      const d = shape.pointsMm.map(([x, y], i) => `${i === 0 ? 'M' : 'L'}${num(x)} ${num(y)}`).join('') + (shape.closed ? 'Z' : '');
+      return `<path d="${d}" fill="${fillValue(shape.fill)}"${stroke(shape.strokeMm)} stroke-linejoin="round"${dataAttributes(shape.data)}/>`;
+    }
+    case 'ellipse':
+      return shape.rxMm === shape.ryMm
+        ? `<circle cx="${num(shape.cxMm)}" cy="${num(shape.cyMm)}" r="${num(shape.rxMm)}" fill="${fillValue(shape.fill)}"${stroke(shape.strokeMm, shape.dashMm)}${dataAttributes(shape.data)}/>`
+        : `<ellipse cx="${num(shape.cxMm)}" cy="${num(shape.cyMm)}" rx="${num(shape.rxMm)}" ry="${num(shape.ryMm)}" fill="${fillValue(shape.fill)}"${stroke(shape.strokeMm, shape.dashMm)}${dataAttributes(shape.data)}/>`;
+    case 'rect':
+      return `<rect x="${num(shape.xMm)}" y="${num(shape.yMm)}" width="${num(shape.widthMm)}" height="${num(shape.heightMm)}" fill="${fillValue(shape.fill)}"${stroke(shape.strokeMm)}${dataAttributes(shape.data)}/>`;
+    case 'text': {
+      const rotate = shape.rotateDeg ? ` transform="rotate(${num(shape.rotateDeg)} ${num(shape.xMm)} ${num(shape.yMm)})"` : '';
+      const weight = shape.weight === 'bold' ? ' font-weight="bold"' : '';
+      return `<text x="${num(shape.xMm)}" y="${num(shape.yMm)}" fill="#000" font-size="${num(shape.sizeMm)}" font-family="${SHEET_FONT_FAMILIES[shape.font]}" text-anchor="${shape.anchor}"${weight}${rotate}${dataAttributes(shape.data)}>${escapeXml(shape.text)}</text>`;
+    }
+  }
+}
+
+function defs(): string {
+  return `<defs><pattern id="${HATCH_PATTERN_ID}" patternUnits="userSpaceOnUse" width="1.2" height="1.2" patternTransform="rotate(45)"><line x1="0" y1="0" x2="0" y2="1.2" stroke="#000" stroke-width="0.15"/></pattern></defs>`;
+}
+
+export function renderSvg(drawing: Drawing): string {
+  const { widthMm, heightMm } = drawing.sizeMm;
+  const w = num(widthMm);
+  const h = num(heightMm);
+  const centre = drawing.centreMm ? ` data-centre-mm="${num(drawing.centreMm[0])} ${num(drawing.centreMm[1])}"` : '';
+  const parts: string[] = [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${w}mm" height="${h}mm" viewBox="0 0 ${w} ${h}"${centre} data-pages="${drawing.pages.length}">`,
+    `<title>${escapeXml(drawing.title)}</title>`,
+    defs(),
+    `<rect x="0" y="0" width="${w}" height="${h}" fill="#fff" data-role="paper"/>`,
+    `<g fill="none" stroke-linecap="butt">`,
+  ];
+  for (const shape of drawing.shapes) parts.push(shapeToSvg(shape));
+  parts.push('</g></svg>');
+  return parts.join('\n');
+}

@@ -1,0 +1,123 @@
+import { normalizeDeg } from '../angle';
+import type { GraduationLevel } from './drawing';
+import { alongIndexRange, graduationNumber, HALF_DEG_PER_TURN, type Numbering, type Tick, ticksInAlongRange } from './graduations';
+import type { PortEvent } from './sheet-request';
+import { alongRotationDeg, btdcToCrankDeg, type Carrier } from './scale-direction';
+
+/**
+ * What a scale carries, in along-rotation degrees (see scale-direction.ts), before it is
+ * bent round a wheel (polar) or laid flat on a strip (linear). Wheels, rings and strips
+ * all come from here.
+ */
+
+export type PlacedMark = { alongDeg: number; crankDeg: number; label: string };
+export type AdvanceMark = PlacedMark & { advanceDeg: number };
+export type AlongInterval = { fromAlongDeg: number; toAlongDeg: number };
+
+export type ScaleMarks = {
+  ticks: Tick[];
+  numbers: PlacedMark[];
+  advance: AdvanceMark[];
+  ports: PlacedMark[];
+  bands: AlongInterval[];
+};
+
+export type ScaleMarksOptions = {
+  /** 'turn' = one whole revolution [0, 360); otherwise an inclusive along range (strips). */
+  range: 'turn' | AlongInterval;
+  carrier: Carrier;
+  numbering: Numbering;
+  finestLevel: GraduationLevel;
+  /** Number every n-th 10° tick (n divides 36, so split numbering stays symmetric). */
+  numberStride: number;
+  advanceMarksDeg: readonly number[];
+  advanceBandDeg?: readonly [number, number];
+  portEvents: readonly PortEvent[];
+  drawPorts: boolean;
+};
+
+export const NUMBER_STRIDES = [1, 2, 3, 6, 9, 18] as const;
+
+/** The smallest stride that leaves `textWidthMm` plus a gap between numerals `pitch10Mm` apart. */
+export function numberStrideFor(pitch10Mm: number, textWidthMm: number): number {
+  return NUMBER_STRIDES.find((stride) => pitch10Mm * stride >= textWidthMm * 1.15) ?? 36;
+}
+
+export function formatDeg(deg: number): string {
+  return String(Math.round(deg * 100) / 100);
+}
+
+/** Every along position (shifted by whole turns) of a crank angle inside the range. */
+export function alongPositions(crankDeg: number, range: ScaleMarksOptions['range'], carrier: Carrier): number[] {
+  const base = normalizeDeg(alongRotationDeg(crankDeg, carrier));
+  if (range === 'turn') return [base];
+  const positions: number[] = [];
+  const first = Math.ceil((range.fromAlongDeg - base - 1e-9) / 360);
+  for (let turn = first; base + turn * 360 <= range.toAlongDeg + 1e-9 && turn < first + 4; turn += 1) positions.push(base + turn * 360);
+  return positions;
+}
+
+/** The along interval of an advance band [from, to] BTDC, clipped to the range (pieces per turn). */
+export function bandIntervals(bandDeg: readonly [number, number], range: ScaleMarksOptions['range'], carrier: Carrier): AlongInterval[] {
+  const lo = Math.min(bandDeg[0], bandDeg[1]);
+  const hi = Math.max(bandDeg[0], bandDeg[1]);
+  if (!(hi > lo)) return [];
+  // Rotating: x° BTDC lies +x along rotation; stationary: −x, i.e. 360 − x.
+  const from = carrier === 'rotating' ? lo : 360 - hi;
+  const to = from + (hi - lo);
+  if (range === 'turn') return [{ fromAlongDeg: from, toAlongDeg: to }];
+  const pieces: AlongInterval[] = [];
+  const firstTurn = Math.floor((range.fromAlongDeg - to) / 360);
+  for (let turn = firstTurn; turn <= firstTurn + 5; turn += 1) {
+    const a = Math.max(from + turn * 360, range.fromAlongDeg);
+    const b = Math.min(to + turn * 360, range.toAlongDeg);
+    if (b > a) pieces.push({ fromAlongDeg: a, toAlongDeg: b });
+  }
+  return pieces;
+}
+
+function nearAny(alongDeg: number, marks: readonly PlacedMark[], withinDeg: number): boolean {
+  return marks.some((mark) => Math.abs(mark.alongDeg - alongDeg) < withinDeg);
+}
+
+export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
+  const { range, carrier } = options;
+  const [fromIndex, toIndex] = range === 'turn' ? [0, HALF_DEG_PER_TURN - 1] : alongIndexRange(range.fromAlongDeg, range.toAlongDeg);
+  const ticks = ticksInAlongRange(fromIndex, toIndex, options.finestLevel, carrier);
+
+  const advance: AdvanceMark[] = [...new Set(options.advanceMarksDeg)].flatMap((advanceDeg) => {
+    const crankDeg = btdcToCrankDeg(advanceDeg);
+    return alongPositions(crankDeg, range, carrier).map((alongDeg) => ({
+      alongDeg,
+      crankDeg,
+      advanceDeg,
+      label: advanceDeg === 0 ? 'TDC' : `${formatDeg(advanceDeg)}° BTDC`,
+    }));
+  });
+
+  const ports: PlacedMark[] = options.drawPorts
+    ? options.portEvents.flatMap((port) =>
+        (
+          [
+            [port.opensCrankDeg, 'opens'],
+            [port.closesCrankDeg, 'closes'],
+          ] as const
+        ).flatMap(([crank, verb]) =>
+          alongPositions(normalizeDeg(crank), range, carrier).map((alongDeg) => ({
+            alongDeg,
+            crankDeg: normalizeDeg(crank),
+            label: `${port.name} ${verb} ${formatDeg(crank)}°`,
+          })),
+        ),
+      )
+    : [];
+
+  const stride20 = 20 * options.numberStride;
+  const numbers: PlacedMark[] = ticks
+    .filter((tick) => tick.level === 10 && tick.crankIndex % stride20 === 0)
+    .filter((tick) => !nearAny(tick.alongDeg, advance, 1.5) && !nearAny(tick.alongDeg, ports, 1.5))
+    .map((tick) => ({ alongDeg: tick.alongDeg, crankDeg: tick.crankDeg, label: graduationNumber(tick.crankDeg, options.numbering) }));
+
+  const bands = options.advanceBandDeg ? bandIntervals(options.advanceBandDeg, range, carrier) : [];
+  return { ticks, numbers, advance, ports, bands };
+}

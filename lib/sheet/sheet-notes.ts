@@ -1,0 +1,94 @@
+import type { SheetKind, SheetRequest } from './sheet-request';
+import { describeCorrection } from './printer-correction';
+import type { GraduationLevel } from './drawing';
+
+/** The words printed on every sheet: title block lines, the print line, cautions and the "which way" note. */
+
+export const PRINT_AT_100 = 'Print at 100 % / actual size — turn off fit-to-page';
+
+// PRODUCT.md §6 in short.
+export const CAUTIONS =
+  'Safety: take the plug lead off (or the battery out) before turning the engine. Turn a positive stop by hand only and take it out before starting. Keep hands, hair and clothes clear of the flywheel and fan when timing with a strobe. Run engines outdoors or with ventilation. Too much advance causes detonation and can hole a piston. The engine maker’s manual and local regulations come first.';
+
+const KIND_NAMES: Record<SheetKind, string> = {
+  wheel: 'Degree wheel',
+  ring: 'Flange ring',
+  strip: 'Rim strip',
+  scribe: 'Scribe chart',
+  check: 'Scale check',
+};
+
+export function mm(value: number): string {
+  return `${Math.round(value * 100) / 100} mm`;
+}
+
+export function defaultTitle(req: SheetRequest): string {
+  if (req.kind === 'ring') return `${KIND_NAMES.ring} ${mm(req.innerDiameterMm ?? 0)} / ${mm(req.outerDiameterMm ?? 0)}`;
+  if (req.kind === 'check') return `${KIND_NAMES.check} sheet`;
+  return `${KIND_NAMES[req.kind]} ${mm(req.diameterMm ?? 0)}`;
+}
+
+export function sheetTitle(req: SheetRequest): string {
+  return req.title.trim() || defaultTitle(req);
+}
+
+export function isoDate(date: Date): string {
+  return Number.isFinite(date.getTime()) ? date.toISOString().slice(0, 10) : '';
+}
+
+function dimensionsLine(req: SheetRequest, stripLengthMm?: number): string {
+  switch (req.kind) {
+    case 'wheel':
+      return `Disc diameter ${mm(req.diameterMm ?? 0)}${req.hubHoleMm > 0 ? ` · hub hole ${mm(req.hubHoleMm)}` : ''}`;
+    case 'ring':
+      return `Ring inner diameter ${mm(req.innerDiameterMm ?? 0)} (ticks read here) · outer ${mm(req.outerDiameterMm ?? 0)}`;
+    case 'strip':
+      return `Rim diameter ${mm(req.diameterMm ?? 0)} + paper ${mm(req.paperThicknessMm)} → strip ${stripLengthMm === undefined ? '' : mm(stripLengthMm)} · width ${mm(req.stripWidthMm)}`;
+    case 'scribe':
+      return `Rim diameter ${mm(req.diameterMm ?? 0)} · ${req.fromDeg}° to ${req.toDeg}° every ${req.stepDeg}°`;
+    case 'check':
+      return 'Scale check bars and ID-1 card outline only';
+  }
+}
+
+export function carrierLine(req: SheetRequest): string {
+  return req.carrier === 'rotating'
+    ? 'Carrier: rotating (on the flywheel, read against a fixed pointer)'
+    : 'Carrier: stationary (on the flange or casing, read against the flywheel’s mark)';
+}
+
+export function rotationWord(req: SheetRequest): string {
+  return req.rotation === 'cw' ? 'clockwise' : 'counter-clockwise';
+}
+
+export function titleBlockLines(
+  req: SheetRequest,
+  facts: { date: string; keptLevels?: GraduationLevel[]; stripLengthMm?: number },
+): string[] {
+  const lines = [
+    dimensionsLine(req, facts.stripLengthMm),
+    carrierLine(req),
+    `Rotation: ${rotationWord(req)} as seen from the side the scale is on`,
+    `Numbering: ${req.numbering === 'split' ? 'split (0 at TDC to 180 at BDC both ways, BTDC / ATDC)' : 'full (0–359 in crank order)'}`,
+  ];
+  if (facts.keptLevels) lines.push(`Graduations: ${facts.keptLevels.map((l) => `${l}°`).join(', ')}`);
+  if (req.advanceMarksDeg.length) lines.push(`Advance marks: ${[...new Set(req.advanceMarksDeg)].sort((a, b) => a - b).map((d) => `${d}°`).join(', ')} BTDC`);
+  lines.push(`Date ${facts.date} · paper ${req.paper} ${req.orientation}`);
+  lines.push(`Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`);
+  if (req.note) lines.push(`Note: ${req.note}`);
+  return lines;
+}
+
+/** Where BTDC lies, in words, for the sheet's "which way" note. */
+export function whichWayNote(req: SheetRequest): string {
+  if (req.kind === 'strip')
+    return req.carrier === 'rotating'
+      ? 'Which way: wrap the strip so its arrow points the way the rim moves. On the rim (fixed pointer) the BTDC marks lie ahead of TDC along the arrow, the ATDC marks behind it. The arrow carries the direction, so the same strip serves clockwise and counter-clockwise engines.'
+      : 'Which way: stick the strip on the casing with its arrow pointing the way the flywheel rim moves. Read against the flywheel’s mark, the BTDC marks lie behind TDC (against the arrow), the ATDC marks ahead of it. The arrow carries the direction, so the same strip serves clockwise and counter-clockwise engines.';
+  const withRotation = req.carrier === 'rotating';
+  const btdcSide = withRotation === (req.rotation === 'cw') ? 'clockwise' : 'counter-clockwise';
+  const atdcSide = btdcSide === 'clockwise' ? 'counter-clockwise' : 'clockwise';
+  return `Which way: the flywheel turns ${rotationWord(req)} as seen from this side (arrow). ${
+    withRotation ? 'On a rotating scale' : 'On a stationary scale'
+  } the BTDC marks lie ${btdcSide} from TDC (${withRotation ? 'with' : 'against'} the rotation), the ATDC marks ${atdcSide}.`;
+}

@@ -1,0 +1,81 @@
+import type { GraduationLevel, Shape } from './drawing';
+import { arcPitchMm, chooseLevels } from './graduations';
+import { polarScaleShapes, POLAR_DEPTH_MM, TICK_DEPTH_MM } from './polar-scale';
+import { numberStrideFor, scaleMarks } from './scale-marks';
+import type { SheetRequest } from './sheet-request';
+import { circle, line } from './shapes';
+import { STROKE_MM, textWidthMm } from './sheet-style';
+
+/** Degree wheels (ticks inward from the cut edge) and flange rings (ticks outward from the inner edge). */
+
+export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[] };
+
+const MIN_DEPTH_SCALE = 0.02;
+const RING_SCALE_DEPTH_MM = POLAR_DEPTH_MM.bandTo + 0.7; // ticks, numerals and band inside the annulus
+
+function clampScale(value: number): number {
+  return Math.min(1, Math.max(MIN_DEPTH_SCALE, value));
+}
+
+function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string) {
+  const choice = chooseLevels(arcPitchMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
+  const numeralRadius = edgeRadiusMm + (towards === 'centre' ? -1 : 1) * (TICK_DEPTH_MM[10] + 2.4) * depthScale;
+  const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale));
+  const drawPorts = req.numbering === 'full';
+  const warnings = [...choice.warnings];
+  if (req.portEvents.length && !drawPorts) warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
+  const marks = scaleMarks({
+    range: 'turn',
+    carrier: req.carrier,
+    numbering: req.numbering,
+    finestLevel: choice.finestLevel,
+    numberStride: stride,
+    advanceMarksDeg: req.advanceMarksDeg,
+    ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
+    portEvents: req.portEvents,
+    drawPorts,
+  });
+  const shapes = polarScaleShapes({
+    centreMm: [0, 0],
+    edgeRadiusMm,
+    towards,
+    depthScale,
+    rotation: req.rotation,
+    carrier: req.carrier,
+    marks,
+    bandFill: 'hatch',
+  });
+  return { shapes, keptLevels: choice.keptLevels, warnings };
+}
+
+/** A wheel centred on (0, 0): cut circle, optional hub hole, centre cross with a 1 mm ring, the scale. */
+export function wheelLayout(req: SheetRequest): PolarLayout {
+  const radiusMm = (req.diameterMm ?? 0) / 2;
+  const hubRadiusMm = Math.min(req.hubHoleMm / 2, radiusMm);
+  const depthScale = clampScale((radiusMm - hubRadiusMm) / POLAR_DEPTH_MM.total);
+  const scale = polarScale(req, radiusMm, 'centre', depthScale, 'at this diameter');
+  const crossMm = Math.min(5, radiusMm * 0.3);
+  const shapes: Shape[] = [
+    circle(0, 0, radiusMm, STROKE_MM.outline, { role: 'cut-line' }),
+    line(-crossMm, 0, crossMm, 0, STROKE_MM.fine, { role: 'centre-cross' }),
+    line(0, -crossMm, 0, crossMm, STROKE_MM.fine, { role: 'centre-cross' }),
+    circle(0, 0, 0.5, STROKE_MM.fine, { role: 'centre-ring' }),
+  ];
+  if (hubRadiusMm > 0) shapes.push(circle(0, 0, hubRadiusMm, STROKE_MM.outline, { role: 'hub-hole' }));
+  shapes.push(...scale.shapes);
+  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings };
+}
+
+/** A flange ring centred on (0, 0): two cut circles, ticks outward from the inner edge where the flywheel mark reads. */
+export function ringLayout(req: SheetRequest): PolarLayout {
+  const innerRadiusMm = (req.innerDiameterMm ?? 0) / 2;
+  const outerRadiusMm = Math.max((req.outerDiameterMm ?? 0) / 2, innerRadiusMm);
+  const depthScale = clampScale((outerRadiusMm - innerRadiusMm) / RING_SCALE_DEPTH_MM);
+  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter');
+  const shapes: Shape[] = [
+    circle(0, 0, outerRadiusMm, STROKE_MM.outline, { role: 'cut-line' }),
+    circle(0, 0, innerRadiusMm, STROKE_MM.outline, { role: 'cut-line-inner' }),
+    ...scale.shapes,
+  ];
+  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings };
+}
