@@ -48,11 +48,12 @@ export function readBooleanCell(cell: string, column: string): CellResult<boolea
 
 /** Text cells: the leading ' of the export's formula guard comes off again. */
 export function readTextCell(cell: string): string {
-  return cell.startsWith("'") && FORMULA_START.test(cell.slice(1)) ? cell.slice(1) : cell;
+  return cell.startsWith("'") && (FORMULA_START.test(cell.slice(1)) || cell[1] === "'") ? cell.slice(1) : cell;
 }
 
+/** A text that would start a spreadsheet formula gets a leading '; so does one already starting with ' (to round-trip). */
 export function writeTextCell(text: string): string {
-  return FORMULA_START.test(text) ? `'${text}` : text;
+  return FORMULA_START.test(text) || text.startsWith("'") ? `'${text}` : text;
 }
 
 export function writeNumberCell(value: number | null): string {

@@ -85,6 +85,7 @@ function rowToTemplate(record: Record<string, string>, row: number, problems: Cs
 export function parseTemplatesCsv(text: string): CsvImportResult {
   const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
     header: true,
+    delimiter: ',',
     skipEmptyLines: 'greedy',
     transformHeader: (h) => h.trim().toLowerCase(),
   });

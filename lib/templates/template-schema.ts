@@ -23,12 +23,14 @@ export const NOTES_MAX = 4000;
 /** Radial gap between the flywheel rim and a flange ring's inner edge (the ring must clear the flywheel). */
 export const RING_CLEARANCE_MM = 1;
 
+const withUnit = (value: number, unit: string) => (unit.startsWith('°') ? `${value}${unit}` : `${value} ${unit}`);
+
 function ranged(label: string, field: string, min: number, max: number, unit: string) {
-  const range = `${min}–${max} ${unit}`;
+  const range = `${min}–${withUnit(max, unit)}`;
   return z
     .number({ error: `${label} (${field}) must be a number, ${range}` })
-    .min(min, `${label} (${field}) must be at least ${min} ${unit} (allowed ${range})`)
-    .max(max, `${label} (${field}) must be at most ${max} ${unit} (allowed ${range})`)
+    .min(min, `${label} (${field}) must be at least ${withUnit(min, unit)} (allowed ${range})`)
+    .max(max, `${label} (${field}) must be at most ${withUnit(max, unit)} (allowed ${range})`)
     .nullable();
 }
 
