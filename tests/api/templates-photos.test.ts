@@ -131,7 +131,8 @@ describe('template photo uploads', () => {
     actAs(world.users.owner.id);
     expect((await api.delete(ws, templateId)).status).toBe(204);
     expect(storedFiles()).toEqual([]);
-    const [{ n }] = await world.knex('template_photos').count({ n: '*' });
+    const counted = await world.knex('template_photos').count({ n: "*" });
+    const n = counted[0]?.n;
     expect(Number(n)).toBe(0);
   });
 });

@@ -1,0 +1,62 @@
+import { z } from 'zod';
+import { jsonError } from '@/app/lib/api';
+import { requireRole } from '@/app/lib/authz';
+import { findTemplate } from '@/db/templates/find-template';
+import { buildDrawing } from '@/lib/sheet/build-drawing';
+import { renderSvg } from '@/lib/sheet/render-svg';
+import { sheetFileName } from '@/lib/sheet/sheet-file-name';
+import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
+import { availableSheetKinds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
+import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
+import { handle, parseId, templateNotFound, type TemplateParams } from '../../_shared/handle';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+const querySchema = z.object({
+  kind: z.enum(TEMPLATE_SHEET_KINDS, { error: `Sheet kind (kind) must be one of: ${TEMPLATE_SHEET_KINDS.join(', ')}` }).optional(),
+  format: z.enum(['pdf', 'svg'], { error: 'Format (format) must be one of: pdf, svg' }).default('pdf'),
+  numbering: z.enum(['split', 'full'], { error: 'Numbering (numbering) must be one of: split, full' }).default('split'),
+});
+
+const NEEDS: Record<(typeof TEMPLATE_SHEET_KINDS)[number], string> = {
+  wheel: 'a flywheel face diameter (faceDiameterMm)',
+  ring: 'a rim diameter (rimDiameterMm) and a flange diameter (flangeDiameterMm)',
+  strip: 'a rim diameter (rimDiameterMm)',
+};
+
+/**
+ * GET …/templates/[id]/sheet?kind=wheel|ring|strip&format=pdf|svg&numbering=split|full — a sheet
+ * drawn from the template (viewer or above: viewers may print). Without `kind`, the first the
+ * template's diameters allow. Same drawing and file name as POST /api/v1/sheets.
+ */
+export async function GET(request: Request, { params }: TemplateParams): Promise<Response> {
+  return handle(async () => {
+    const { workspace, id } = await params;
+    const access = await requireRole(workspace, 'viewer');
+    const templateId = parseId(id);
+    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
+    if (!template) return templateNotFound();
+    const query = querySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+    if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
+
+    const kinds = availableSheetKinds(template);
+    const kind = query.data.kind ?? kinds[0];
+    if (!kind) return jsonError(400, 'This template has no diameters to draw a sheet from', [{ path: 'kind', message: 'Add a face or rim diameter to the template' }]);
+    const input = templateSheetRequest(template, kind, { numbering: query.data.numbering });
+    if (!input) return jsonError(400, `A ${kind} sheet needs ${NEEDS[kind]} in the template`, [{ path: 'kind', message: `This template can print: ${kinds.join(', ') || 'nothing yet'}` }]);
+    const sheet = sheetRequestSchema.safeParse({ ...input, format: query.data.format });
+    if (!sheet.success) return jsonError(400, 'The template’s figures do not make a valid sheet', toFieldIssues(sheet.error));
+
+    const drawing = buildDrawing(sheet.data);
+    const body = sheet.data.format === 'svg' ? renderSvg(drawing) : new Uint8Array(await renderSheetPdf(drawing));
+    return new Response(body, {
+      headers: {
+        'Content-Type': sheet.data.format === 'svg' ? 'image/svg+xml; charset=utf-8' : 'application/pdf',
+        'Content-Disposition': `attachment; filename="${sheetFileName(sheet.data)}"`,
+        'Cache-Control': 'no-store',
+        'X-Content-Type-Options': 'nosniff',
+      },
+    });
+  });
+}
