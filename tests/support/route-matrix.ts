@@ -9,6 +9,7 @@ import { issueToken } from '@/db/one-time-tokens';
 import { createInvitation } from '@/db/invitations';
 import { TABLES } from '@/db/tables';
 import type { AccessWorld } from './access-world';
+import { TEMPLATE_ROUTE_CASES } from '../api/templates-route-cases';
 
 export const ACTORS = ['signedOut', 'viewer', 'technician', 'owner', 'outsider'] as const;
 export type Actor = (typeof ACTORS)[number];
@@ -183,6 +184,9 @@ export const ROUTE_MATRIX: RouteCase[] = [
     },
     expected: expect401Then(403, 204, 204),
   },
+
+  // Template library (issue 6).
+  ...TEMPLATE_ROUTE_CASES,
 ];
 
 /** Server actions that check the session; empty while every write goes through a route handler. */

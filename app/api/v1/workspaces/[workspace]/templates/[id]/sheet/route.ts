@@ -28,7 +28,7 @@ const NEEDS: Record<(typeof TEMPLATE_SHEET_KINDS)[number], string> = {
 /**
  * GET …/templates/[id]/sheet?kind=wheel|ring|strip&format=pdf|svg&numbering=split|full — a sheet
  * drawn from the template (viewer or above: viewers may print). Without `kind`, the first the
- * template's diameters allow. Same drawing and file name as POST /api/v1/sheets.
+ * template’s diameters allow. Same drawing and file name as the public sheets route.
  */
 export async function GET(request: Request, { params }: TemplateParams): Promise<Response> {
   return handle(async () => {

@@ -1,0 +1,90 @@
+import os from 'node:os';
+import path from 'node:path';
+import { putObject } from '@/app/lib/storage';
+import { insertTemplates } from '@/db/templates/insert-templates';
+import { TABLES } from '@/db/tables';
+import { EMPTY_TEMPLATE } from '@/lib/templates/template-schema';
+import type { AccessWorld } from '@/tests/support/access-world';
+import type { Actor, RouteCase } from '@/tests/support/route-matrix';
+
+/** The template library's rows of the authorization matrix (tests/support/route-matrix.ts). */
+
+const T = 'app/api/v1/workspaces/[workspace]/templates';
+
+// route-matrix.ts imports this file, so its helpers are not imported back (no import cycle).
+const expect401Then = (viewer: number, technician: number, owner: number): Record<Actor, number> => ({
+  signedOut: 401,
+  viewer,
+  technician,
+  owner,
+  outsider: 404,
+});
+
+async function seedTemplate(world: AccessWorld): Promise<number> {
+  const [id] = await insertTemplates(world.knex, [{ ...EMPTY_TEMPLATE, name: 'Matrix single', rimDiameterMm: 110 }], {
+    workspaceId: world.shop.id,
+    userId: world.users.owner.id,
+    at: new Date().toISOString(),
+    action: 'create',
+  });
+  return id!;
+}
+
+/** The outsider aims at the shop's template through its own workspace, and must get 404. */
+const workspaceFor = (world: AccessWorld, actor: Actor) => (actor === 'outsider' ? world.otherShop.slug : world.shop.slug);
+
+const withTemplate =
+  (extra: Record<string, unknown> = {}) =>
+  async (world: AccessWorld, actor: Actor) => ({
+    params: { workspace: workspaceFor(world, actor), id: String(await seedTemplate(world)) },
+    ...extra,
+  });
+
+async function withPhoto(world: AccessWorld, actor: Actor) {
+  process.env.RIMSCALE_UPLOAD_DIR = path.join(os.tmpdir(), 'rimscale-matrix-uploads');
+  const templateId = await seedTemplate(world);
+  const key = `templates/${templateId}/matrix-${actor.toLowerCase()}`;
+  await putObject(`${key}.png`, Buffer.from('stored bytes'));
+  await putObject(`${key}-thumb.webp`, Buffer.from('thumb bytes'));
+  const [row] = await world.knex(TABLES.templatePhotos)
+    .insert({
+      template_id: templateId,
+      storage_key: `${key}.png`,
+      thumb_key: `${key}-thumb.webp`,
+      content_type: 'image/png',
+      width_px: 1,
+      height_px: 1,
+      bytes: 12,
+      created_at: new Date().toISOString(),
+    })
+    .returning('id');
+  return { params: { workspace: workspaceFor(world, actor), id: String(templateId), photoId: String(row.id) } };
+}
+
+export const TEMPLATE_ROUTE_CASES: RouteCase[] = [
+  { file: `${T}/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
+  { file: `${T}/route.ts`, method: 'POST', call: () => ({ body: { name: 'Matrix new' } }), expected: expect401Then(403, 201, 201) },
+  { file: `${T}/[id]/route.ts`, method: 'GET', call: withTemplate(), expected: expect401Then(200, 200, 200) },
+  { file: `${T}/[id]/route.ts`, method: 'PATCH', call: withTemplate({ body: { version: 1, notes: 'edited' } }), expected: expect401Then(403, 200, 200) },
+  { file: `${T}/[id]/route.ts`, method: 'DELETE', call: withTemplate(), expected: expect401Then(403, 403, 204) },
+  { file: `${T}/[id]/archive/route.ts`, method: 'POST', call: withTemplate({ body: { version: 1 } }), expected: expect401Then(403, 200, 200) },
+  { file: `${T}/[id]/revisions/route.ts`, method: 'GET', call: withTemplate(), expected: expect401Then(200, 200, 200) },
+  {
+    file: `${T}/[id]/revisions/[version]/restore/route.ts`,
+    method: 'POST',
+    call: async (world, actor) => {
+      const call = await withTemplate({ body: { version: 1 } })(world, actor);
+      return { ...call, params: { ...call.params, version: '1' } };
+    },
+    expected: expect401Then(403, 200, 200),
+  },
+  { file: `${T}/[id]/photos/route.ts`, method: 'GET', call: withTemplate(), expected: expect401Then(200, 200, 200) },
+  // A JSON body passes the role check and is then refused as not a form upload (415).
+  { file: `${T}/[id]/photos/route.ts`, method: 'POST', call: withTemplate({ body: {} }), expected: expect401Then(403, 415, 415) },
+  { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'GET', call: withPhoto, expected: expect401Then(200, 200, 200) },
+  { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'DELETE', call: withPhoto, expected: expect401Then(403, 204, 204) },
+  { file: `${T}/[id]/sheet/route.ts`, method: 'GET', call: withTemplate({ search: '?kind=strip&format=svg' }), expected: expect401Then(200, 200, 200) },
+  // JSON is not CSV: past the role check the import answers 415.
+  { file: `${T}/import/route.ts`, method: 'POST', call: () => ({ body: {} }), expected: expect401Then(403, 415, 415) },
+  { file: `${T}/export/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
+];
