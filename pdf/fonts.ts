@@ -17,19 +17,24 @@ export type PdfFontData = {
   hasGlyphForCodePoint(codePoint: number): boolean;
 };
 
-/** react-pdf family names for the drawing's two text roles, plus the table face. */
+/**
+ * react-pdf family names for the drawing's two text roles, as the SVG names them
+ * (lib/sheet/render-svg.ts): 'ui' is DejaVu Sans; 'figures' is DejaVu Sans Mono,
+ * whose one shipped weight is paired with DejaVu Sans Condensed Bold, the bold
+ * face nearest its 0.6 em digit width. 'condensed' serves narrow table cells.
+ */
 export const PDF_FONT_FAMILY = {
   ui: 'Rimscale Sans',
-  figures: 'Rimscale Condensed',
-  mono: 'Rimscale Mono',
+  figures: 'Rimscale Figures',
+  condensed: 'Rimscale Condensed',
 } as const;
 
 type FamilyKey = keyof typeof PDF_FONT_FAMILY;
 
-const FONT_FILES: Record<FamilyKey, Partial<Record<Weight, string>>> = {
+const FONT_FILES: Record<FamilyKey, Record<Weight, string>> = {
   ui: { normal: 'DejaVuSans.ttf', bold: 'DejaVuSans-Bold.ttf' },
-  figures: { normal: 'DejaVuSansCondensed.ttf', bold: 'DejaVuSansCondensed-Bold.ttf' },
-  mono: { normal: 'DejaVuSansMono.ttf' },
+  figures: { normal: 'DejaVuSansMono.ttf', bold: 'DejaVuSansCondensed-Bold.ttf' },
+  condensed: { normal: 'DejaVuSansCondensed.ttf', bold: 'DejaVuSansCondensed-Bold.ttf' },
 };
 
 const FONT_WEIGHT: Record<Weight, number> = { normal: 400, bold: 700 };
@@ -74,8 +79,8 @@ export function loadSheetFonts(): Promise<SheetFonts> {
     'ui-bold': await loadFont('ui', 'bold'),
     'figures-normal': await loadFont('figures', 'normal'),
     'figures-bold': await loadFont('figures', 'bold'),
-    'mono-normal': await loadFont('mono', 'normal'),
-    'mono-bold': await loadFont('mono', 'normal'), // DejaVu Sans Mono ships here in one weight
+    'condensed-normal': await loadFont('condensed', 'normal'),
+    'condensed-bold': await loadFont('condensed', 'bold'),
   }))();
   loaded.catch(() => (loaded = undefined)); // let a later call retry after a failed read
   return loaded;

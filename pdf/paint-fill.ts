@@ -9,6 +9,7 @@ const SOLID_FILL: Record<Exclude<Fill, 'none' | 'hatch'>, string> = {
   grey15: '#d9d9d9',
 };
 
+// The SVG renderer's hatch pattern (lib/sheet/render-svg.ts): 1.2 mm pitch, 0.15 mm lines.
 export const HATCH_PITCH_MM = 1.2;
 export const HATCH_STROKE_MM = 0.15;
 const MAX_HATCH_LINES = 4000;
@@ -40,14 +41,17 @@ export function paintOutline(p: Painter, tracePath: () => void, fill: Fill, stro
   p.lineWidth(strokePt).stroke();
 }
 
-/** Lines x − y = c across the box, one every HATCH_PITCH_MM measured square to the lines. */
+/**
+ * Lines x + y = c across the box (rising to the right on the page, as the SVG's
+ * pattern rotated 45°), one every HATCH_PITCH_MM measured square to the lines.
+ */
 function hatchBox(p: Painter, { minXPt, minYPt, maxXPt, maxYPt }: BoxPt): void {
   const stepPt = mmToPt(HATCH_PITCH_MM) * Math.SQRT2;
-  const fromC = minXPt - maxYPt;
-  const count = Math.min(MAX_HATCH_LINES, Math.ceil((maxXPt - minYPt - fromC) / stepPt));
+  const fromC = minXPt + minYPt;
+  const count = Math.min(MAX_HATCH_LINES, Math.ceil((maxXPt + maxYPt - fromC) / stepPt));
   for (let i = 0; i <= count; i += 1) {
     const c = fromC + i * stepPt;
-    p.moveTo(minYPt + c, minYPt).lineTo(maxYPt + c, maxYPt);
+    p.moveTo(c - minYPt, minYPt).lineTo(c - maxYPt, maxYPt);
   }
   p.lineWidth(mmToPt(HATCH_STROKE_MM)).stroke();
 }

@@ -120,10 +120,10 @@ describe('fills that print on a mono laser', () => {
     expect(list.fnArray).toContain(OPS.clip);
     const [page] = await readPdfGeometry(await renderSheetPdf(drawing));
     const diagonals = page!.segments.filter(
-      (s) => Math.abs(s.x2Mm - s.x1Mm - (s.y2Mm - s.y1Mm)) < 1e-3 && segmentLengthMm(s) > 1,
+      (s) => Math.abs(s.x2Mm - s.x1Mm + (s.y2Mm - s.y1Mm)) < 1e-3 && segmentLengthMm(s) > 1,
     );
-    // Lines x − y = c, 1.2 mm apart square to the lines, so c steps by 1.2·√2; the 30 × 10 mm box spans 40 mm of c.
-    const offsets = diagonals.map((s) => s.x1Mm - s.y1Mm).sort((a, b) => a - b);
+    // Lines x + y = c, 1.2 mm apart square to the lines, so c steps by 1.2·√2; the 30 × 10 mm box spans 40 mm of c.
+    const offsets = diagonals.map((s) => s.x1Mm + s.y1Mm).sort((a, b) => a - b);
     expect(offsets.length).toBeGreaterThanOrEqual(Math.floor(40 / (1.2 * Math.SQRT2)));
     const gapsMm = offsets.slice(1).map((c, i) => (c - offsets[i]!) / Math.SQRT2);
     for (const gap of gapsMm) expect(gap).toBeCloseTo(1.2, 3);
