@@ -22,7 +22,7 @@ function correctedBlock(shapes: Shape[], req: SheetRequest, padMm: number, centr
   return toBlock(corrected, padMm, centreMm ? correctPointMm(centreMm, req) : undefined);
 }
 
-function scaleLayout(req: SheetRequest, page: PageSpec): ScaleLayout {
+function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): ScaleLayout {
   const printable = printableMm(page);
   switch (req.kind) {
     case 'wheel':
@@ -41,7 +41,9 @@ function scaleLayout(req: SheetRequest, page: PageSpec): ScaleLayout {
       };
     }
     case 'scribe': {
-      const chunks = scribeLayout(req, printable);
+      // Heights in true mm: the chunks are pre-scaled by 1/printerScaleY afterwards.
+      const sy = req.printerScaleY;
+      const chunks = scribeLayout(req, (printable.heightMm - infoHeightMm - BLOCK_GAP_MM) * sy - 1, printable.heightMm * sy - 1);
       return { blocks: chunks.map((chunk) => correctedBlock(chunk, req, 0.5)), warnings: [], infoFirst: true };
     }
     case 'check':
@@ -83,17 +85,20 @@ function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content
 /** The whole sheet for a validated request: geometry, pages and warnings. Pure; same input, same drawing. */
 export function buildDrawing(request: SheetRequest, options: BuildOptions = {}): Drawing {
   const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, 6) };
-  const layout = scaleLayout(request, page);
   const title = sheetTitle(request);
-  const content: InfoContent = {
+  const contentFor = (layout?: ScaleLayout): InfoContent => ({
     title,
     request,
     lines: titleBlockLines(request, {
       date: isoDate(options.date ?? new Date()),
-      ...(layout.keptLevels ? { keptLevels: layout.keptLevels } : {}),
-      ...(layout.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
+      ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
+      ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
     }),
-  };
+  });
+  // The scribe chart's first page holds what the info panel leaves; its lines do not depend on the table.
+  const infoHeightMm = request.kind === 'scribe' ? infoBlock(contentFor(), request, printableMm(page).widthMm).heightMm : 0;
+  const layout = scaleLayout(request, page, infoHeightMm);
+  const content = contentFor(layout);
   const paged = arrange(request, page, layout, content);
   const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings: [...layout.warnings, ...paged.warnings], title };
   if (paged.centreMm) drawing.centreMm = paged.centreMm;

@@ -1,8 +1,286 @@
-import type { GraduationLevel, Shape, Size } from './drawing';
+import { normalizeDeg } from '../angle';
+import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
+import { chooseLevels } from './graduations';
+import { formatDeg, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
+import { alongRotationDeg, type Carrier } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
+import { arrow, line, path, rect, text } from './shapes';
+import { STROKE_MM, TEXT_MM, textWidthMm } from './sheet-style';
 
-export type StripLayout = { rows: Shape[][]; keptLevels: GraduationLevel[]; stripLengthMm: number; warnings: string[] };
+/**
+ * Rim strips: the scale laid flat (the linear transform). Length π·(D + t) so the marks sit
+ * on the paper's mid-plane; +x runs along the printed arrow, the way the rim moves. A strip
+ * longer than the page is cut into lettered segments, each a separate placed copy of its part
+ * of the one strip: its marked length plus an overlap whose ticks repeat the next segment's
+ * first ticks (same crank angles, so they coincide when laid over each other).
+ */
 
-export function stripLayout(req: SheetRequest, _printable: Size): StripLayout {
-  return { rows: [], keptLevels: [10], stripLengthMm: Math.PI * ((req.diameterMm ?? 0) + req.paperThicknessMm), warnings: [] };
+export const STRIP_OVERLAP_MM = 10;
+export const GLUE_TAIL_MM = 15;
+export const STRIP_LABEL_BAND_MM = 5;
+
+export type StripSegment = {
+  letter: string;
+  startAlongDeg: number;
+  markedMm: number;
+  /** Overlap (ticks repeated from the next segment) or the glue tail on the last one. */
+  extensionMm: number;
+  extension: 'overlap' | 'tail' | 'none';
+};
+
+export type StripPlan = {
+  stripLengthMm: number;
+  mmPerDeg: number;
+  window: boolean;
+  startAlongDeg: number;
+  markedMm: number;
+  segments: StripSegment[];
+};
+
+export type StripLayout = { rows: Shape[][]; keptLevels: GraduationLevel[]; stripLengthMm: number; warnings: string[]; plan: StripPlan };
+
+const LETTERS = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ';
+
+/** The crank span of a window [from, to], crank order from → to through 0; equal ends mean a whole turn. */
+export function windowSpanDeg([fromDeg, toDeg]: readonly [number, number]): number {
+  const span = normalizeDeg(toDeg - fromDeg);
+  return span === 0 ? 360 : span;
+}
+
+/** Where the strip starts along the rotation, and how many degrees it covers. */
+export function stripRange(req: Pick<SheetRequest, 'carrier' | 'seamCrankDeg' | 'windowCrankDeg'>): { startAlongDeg: number; spanDeg: number } {
+  if (!req.windowCrankDeg) return { startAlongDeg: normalizeDeg(alongRotationDeg(req.seamCrankDeg, req.carrier)), spanDeg: 360 };
+  const spanDeg = windowSpanDeg(req.windowCrankDeg);
+  // Along the arrow a rotating strip meets the window's later crank end first.
+  const firstCrank = req.carrier === 'rotating' ? req.windowCrankDeg[1] : req.windowCrankDeg[0];
+  return { startAlongDeg: normalizeDeg(alongRotationDeg(firstCrank, req.carrier)), spanDeg };
+}
+
+/** Splits the strip into the fewest equal segments that fit `rowLengthMm` with their overlap or tail. */
+export function planStrip(req: SheetRequest, rowLengthMm: number): StripPlan {
+  const stripLengthMm = Math.PI * ((req.diameterMm ?? 0) + req.paperThicknessMm);
+  const mmPerDeg = stripLengthMm / 360;
+  const { startAlongDeg, spanDeg } = stripRange(req);
+  const window = req.windowCrankDeg !== undefined;
+  const markedMm = spanDeg * mmPerDeg;
+  const endMm = window ? 0 : GLUE_TAIL_MM;
+  const single = markedMm + endMm <= rowLengthMm;
+  const count = single ? 1 : Math.min(26, Math.ceil(markedMm / Math.max(1, rowLengthMm - Math.max(endMm, STRIP_OVERLAP_MM))));
+  const segmentMm = markedMm / count;
+  const segments: StripSegment[] = Array.from({ length: count }, (_, i) => {
+    const last = i === count - 1;
+    return {
+      letter: LETTERS[i]!,
+      startAlongDeg: startAlongDeg + (i * segmentMm) / mmPerDeg,
+      markedMm: segmentMm,
+      extensionMm: last ? endMm : STRIP_OVERLAP_MM,
+      extension: last ? (window ? 'none' : 'tail') : 'overlap',
+    };
+  });
+  return { stripLengthMm, mmPerDeg, window, startAlongDeg, markedMm, segments };
+}
+
+type StripDepths = { tick: Record<GraduationLevel, number>; numeralSize: number; numeralBaseline: number; bandTop: number };
+
+export function stripDepths(widthMm: number): StripDepths {
+  const long = Math.min(0.42 * widthMm, 6);
+  const numeralSize = Math.min(3, 0.25 * widthMm);
+  const numeralBaseline = long + 0.5 + numeralSize * 0.8;
+  return { tick: { 10: long, 5: long * 0.75, 1: long * 0.5, 0.5: long * 0.33 }, numeralSize, numeralBaseline, bandTop: numeralBaseline + numeralSize * 0.25 + 0.3 };
+}
+
+function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment, finestLevel: GraduationLevel, stride: number): ScaleMarks {
+  const overlapMm = segment.extension === 'overlap' ? segment.extensionMm : 0;
+  return scaleMarks({
+    range: { fromAlongDeg: segment.startAlongDeg, toAlongDeg: segment.startAlongDeg + (segment.markedMm + overlapMm) / plan.mmPerDeg },
+    carrier: req.carrier,
+    numbering: req.numbering,
+    finestLevel,
+    numberStride: stride,
+    advanceMarksDeg: req.advanceMarksDeg,
+    ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
+    portEvents: req.portEvents,
+    drawPorts: req.numbering === 'full',
+  });
+}
+
+function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, index: number, finestLevel: GraduationLevel, stride: number): Shape[] {
+  const w = req.stripWidthMm;
+  const top = STRIP_LABEL_BAND_MM;
+  const depths = stripDepths(w);
+  const many = plan.segments.length > 1;
+  const tag = (data: ShapeData): ShapeData => (many ? { ...data, segment: segment.letter } : data);
+  const x = (alongDeg: number) => (alongDeg - segment.startAlongDeg) * plan.mmPerDeg;
+  const marks = segmentMarks(req, plan, segment, finestLevel, stride);
+  const rowLength = segment.markedMm + segment.extensionMm;
+  const shapes: Shape[] = [];
+  const last = index === plan.segments.length - 1;
+
+  for (const band of marks.bands)
+    shapes.push(rect(x(band.fromAlongDeg), top + depths.bandTop, (band.toAlongDeg - band.fromAlongDeg) * plan.mmPerDeg, w - depths.bandTop, STROKE_MM.fine, 'grey15', tag({ role: 'advance-band' })));
+  shapes.push(rect(0, top, rowLength, w, STROKE_MM.outline, 'none', tag({ role: 'cut-line' })));
+
+  const startRole = index > 0 ? 'segment-start' : plan.window ? 'window-end' : 'seam';
+  const startData: ShapeData = { role: startRole };
+  if (index === 0) startData.crankDeg = normalizeDeg(alongToCrank(segment.startAlongDeg, req.carrier));
+  shapes.push(line(0, top, 0, top + w, STROKE_MM.heavy, tag(startData)));
+  if (!last) shapes.push(line(segment.markedMm, top - 1.5, segment.markedMm, top + w + 1.5, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
+  else {
+    const endAlong = segment.startAlongDeg + segment.markedMm / plan.mmPerDeg;
+    shapes.push(line(segment.markedMm, top, segment.markedMm, top + w, STROKE_MM.heavy, tag({ role: plan.window ? 'window-end' : 'seam', crankDeg: normalizeDeg(alongToCrank(endAlong, req.carrier)) })));
+  }
+
+  for (const tick of marks.ticks)
+    shapes.push(line(x(tick.alongDeg), top, x(tick.alongDeg), top + depths.tick[tick.level], tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, tag({ crankDeg: tick.crankDeg, level: tick.level })));
+  for (const number of marks.numbers) {
+    const [nx, anchor] = keepInside(x(number.alongDeg), textWidthMm(number.label, depths.numeralSize), rowLength);
+    shapes.push(text(nx, top + depths.numeralBaseline, number.label, depths.numeralSize, { anchor, font: 'figures', data: tag({ role: 'numeral', crankDeg: number.crankDeg }) }));
+  }
+
+  const labelSize = TEXT_MM.small;
+  const markLabel = (alongDeg: number, label: string, data: ShapeData) =>
+    text(x(alongDeg) + labelSize * 0.35, top + w + 1, label, labelSize, { anchor: 'end', rotateDeg: -90, weight: 'bold', data: tag(data) });
+  for (const mark of marks.advance) {
+    shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg })));
+    shapes.push(markLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
+  }
+  for (const mark of marks.ports) {
+    shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'port', crankDeg: mark.crankDeg }), 0.8));
+    shapes.push(markLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
+  }
+
+  shapes.push(...tdcPointers(marks, x, top, depths, w, tag));
+  shapes.push(...sideLabels(req, segment, plan, x, top, depths, w, tag));
+  // The lower zone's occupants, so the in-strip arrow finds a free place.
+  const busy: Array<[number, number]> = [];
+  for (const shape of shapes) {
+    if (shape.type === 'text' && (shape.data?.role?.endsWith('-side') || shape.data?.role === 'bdc-label')) {
+      const width = textWidthMm(shape.text, shape.sizeMm);
+      const from = shape.anchor === 'start' ? shape.xMm : shape.anchor === 'end' ? shape.xMm - width : shape.xMm - width / 2;
+      busy.push([from, from + width]);
+    } else if (shape.data?.role === 'tdc-pointer' && shape.type === 'path') busy.push([shape.pointsMm[1]![0], shape.pointsMm[2]![0]]);
+    else if (shape.type === 'line' && (shape.data?.role === 'advance' || shape.data?.role === 'port')) busy.push([shape.x1Mm - 0.5, shape.x1Mm + 0.5]);
+  }
+  shapes.push(...rowLabels(req, plan, segment, index, top, w, tag, busy));
+  return shapes;
+}
+
+/** A centred label that would stick out of the strip's end is anchored at that end instead. */
+function keepInside(xMm: number, widthMm: number, rowLengthMm: number): [number, 'start' | 'middle' | 'end'] {
+  if (xMm - widthMm / 2 < 0.3) return [Math.max(xMm, 0) + 0.4, 'start'];
+  if (xMm + widthMm / 2 > rowLengthMm - 0.3) return [Math.min(xMm, rowLengthMm) - 0.4, 'end'];
+  return [xMm, 'middle'];
+}
+
+/** The first start (3, 13, 23 … mm) where `lengthMm` clears every busy interval. */
+function freeSpot(busy: ReadonlyArray<[number, number]>, lengthMm: number, limitMm: number): number | undefined {
+  for (let i = 0; i < 200; i += 1) {
+    const start = 3 + i * 10;
+    if (start + lengthMm > limitMm) return undefined;
+    if (busy.every(([a, b]) => b < start || a > start + lengthMm)) return start;
+  }
+  return undefined;
+}
+
+function alongToCrank(alongDeg: number, carrier: Carrier): number {
+  return carrier === 'rotating' ? -alongDeg : alongDeg;
+}
+
+function tdcPointers(marks: ScaleMarks, x: (a: number) => number, top: number, depths: StripDepths, w: number, tag: (d: ShapeData) => ShapeData): Shape[] {
+  const lower = w - depths.bandTop;
+  if (lower < 0.8) return [];
+  const size = Math.min(2.2, lower * 0.9);
+  return marks.ticks
+    .filter((tick) => tick.crankIndex === 0)
+    .map((tick) =>
+      path(
+        [
+          [x(tick.alongDeg), top + depths.bandTop],
+          [x(tick.alongDeg) - size * 0.5, top + depths.bandTop + size],
+          [x(tick.alongDeg) + size * 0.5, top + depths.bandTop + size],
+        ],
+        true,
+        'black',
+        STROKE_MM.fine,
+        tag({ role: 'tdc-pointer', crankDeg: 0 }),
+      ),
+    );
+}
+
+function sideLabels(req: SheetRequest, segment: StripSegment, plan: StripPlan, x: (a: number) => number, top: number, depths: StripDepths, w: number, tag: (d: ShapeData) => ShapeData): Shape[] {
+  const lower = w - depths.bandTop;
+  if (lower < 1.6) return [];
+  const size = Math.min(2.4, lower * 0.75);
+  const from = segment.startAlongDeg;
+  const to = from + segment.markedMm / plan.mmPerDeg;
+  const shapes: Shape[] = [];
+  for (const [crankDeg, label, role] of [
+    [315, 'BTDC side', 'btdc-side'],
+    [45, 'ATDC side', 'atdc-side'],
+    [180, 'BDC', 'bdc-label'],
+  ] as const) {
+    const base = normalizeDeg(alongRotationDeg(crankDeg, req.carrier));
+    for (let along = base + 360 * Math.ceil((from - base) / 360); along <= to; along += 360) {
+      const [lx, anchor] = keepInside(x(along), textWidthMm(label, size), segment.markedMm);
+      shapes.push(text(lx, top + depths.bandTop + (lower + size * 0.7) / 2, label, size, { anchor, weight: 'bold', data: tag({ role }) }));
+    }
+  }
+  return shapes;
+}
+
+function rowLabels(req: SheetRequest, plan: StripPlan, segment: StripSegment, index: number, top: number, w: number, tag: (d: ShapeData) => ShapeData, busy: Array<[number, number]>): Shape[] {
+  const shapes: Shape[] = [];
+  const count = plan.segments.length;
+  const baseline = top - 1.4;
+  let cursor = 0;
+  if (count > 1) {
+    shapes.push(text(0, baseline, segment.letter, TEXT_MM.heading, { weight: 'bold', data: tag({ role: 'segment-letter' }) }));
+    cursor += textWidthMm(segment.letter, TEXT_MM.heading) + 1.5;
+    if (index > 0) {
+      const prev = plan.segments[index - 1]!.letter;
+      const caption = `join ${prev}→${segment.letter}: lay this end on ${prev}’s join line`;
+      shapes.push(text(cursor, baseline, caption, TEXT_MM.small, { data: tag({ role: 'join-label' }) }));
+      cursor += textWidthMm(caption, TEXT_MM.small) + 2;
+    }
+  }
+  // The rotation arrow: on the strip itself, near its start, and in words above it.
+  const [shaft, head] = arrow(cursor, baseline - 0.7, cursor + 9, baseline - 0.7, 1.6, tag({ role: 'rotation-arrow' }));
+  shapes.push(shaft, head, text(cursor + 10, baseline, 'rim moves this way', TEXT_MM.small, { data: tag({ role: 'rotation-label' }) }));
+  const inStripY = top + w - Math.min(1, w * 0.1);
+  const arrowLength = Math.min(8, segment.markedMm * 0.3);
+  const arrowStart = freeSpot(busy, arrowLength + 1, segment.markedMm) ?? Math.min(4, segment.markedMm * 0.2);
+  shapes.push(...arrow(arrowStart, inStripY, arrowStart + arrowLength, inStripY, Math.min(1.4, w * 0.18), tag({ role: 'rotation-arrow' })));
+  if (segment.extension === 'overlap') {
+    const next = plan.segments[index + 1]!.letter;
+    shapes.push(text(segment.markedMm + 0.6, baseline, `join ${segment.letter}→${next}`, TEXT_MM.small, { data: tag({ role: 'join-label' }) }));
+  }
+  if (segment.extension === 'tail') {
+    const size = Math.min(2, w * 0.3);
+    const mid = segment.markedMm + segment.extensionMm / 2;
+    shapes.push(text(mid, top + w / 2 - size * 0.2, 'glue under', size, { anchor: 'middle', data: tag({ role: 'glue-tail' }) }));
+    shapes.push(text(mid, top + w / 2 + size * 1.05, 'start', size, { anchor: 'middle', data: tag({ role: 'glue-tail' }) }));
+  }
+  if (plan.window && index === count - 1) {
+    const [from, to] = req.windowCrankDeg!;
+    const describe = (crankDeg: number) => (crankDeg === 0 || crankDeg === 360 ? 'TDC' : crankDeg > 180 ? `${formatDeg(360 - crankDeg)}° BTDC` : `${formatDeg(crankDeg)}° ATDC`);
+    const caption = `window ${describe(from)} to ${describe(to)}`;
+    shapes.push(text(segment.markedMm, baseline, caption, TEXT_MM.small, { anchor: 'end', data: tag({ role: 'window-label' }) }));
+  }
+  return shapes;
+}
+
+export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
+  // Rows are drawn true size, then pre-scaled by 1/printerScaleX: leave room for that and the strokes.
+  const rowLengthMm = printable.widthMm * req.printerScaleX - 1;
+  const plan = planStrip(req, rowLengthMm);
+  const choice = chooseLevels(plan.mmPerDeg, req.minPitchMm, 'on this strip');
+  const stride = numberStrideFor(plan.mmPerDeg * 10, textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize));
+  const warnings = [...choice.warnings];
+  if (req.portEvents.length && req.numbering !== 'full') warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
+  if (plan.segments.length > 1)
+    warnings.push(
+      `The strip (${(plan.markedMm).toFixed(2)} mm marked) is cut into ${plan.segments.length} segments, ${plan.segments[0]!.letter}–${plan.segments[plan.segments.length - 1]!.letter}, that join end to end`,
+    );
+  const rows = plan.segments.map((segment, i) => stripRow(req, plan, segment, i, choice.finestLevel, stride));
+  return { rows, keptLevels: choice.keptLevels, stripLengthMm: plan.stripLengthMm, warnings, plan };
 }
