@@ -1,0 +1,20 @@
+import type { Metadata } from 'next';
+import { PistonDropCalculator } from '@/components/calculators/piston-drop-calculator';
+import { SafetyPanel } from '@/components/generator/safety-panel';
+
+export const metadata: Metadata = { title: 'Piston drop ⇄ crank angle' };
+
+export default function PistonDropPage() {
+  return (
+    <section className="space-y-4">
+      <h1 className="text-2xl font-bold">Piston drop ⇄ crank angle</h1>
+      <p className="max-w-3xl text-sm text-steel-600 dark:text-steel-300">
+        Slider-crank geometry: with stroke and con-rod length, a crank angle from TDC gives how far the piston has dropped
+        below TDC, and a drop gives the angle. Use it to turn timing quoted in mm before TDC into degrees before TDC and
+        back. The wrist pin is taken on the cylinder axis (no pin offset).
+      </p>
+      <PistonDropCalculator />
+      <SafetyPanel />
+    </section>
+  );
+}

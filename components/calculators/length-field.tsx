@@ -1,0 +1,65 @@
+'use client';
+
+import { useState } from 'react';
+import { useController, useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
+import { FieldErrorText, HelpText, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+import { fromUnit, lengthText, parseTypedNumber, type LengthUnit } from './length-unit';
+
+type LengthFieldProps<T extends FieldValues> = {
+  name: FieldPath<T>;
+  label: string;
+  unit: LengthUnit;
+  help?: React.ReactNode;
+  className?: string;
+};
+
+/**
+ * A length typed in mm or inches and kept in the form in mm, so the shared schema
+ * (which speaks mm) checks it. The typed text is kept as typed; it is rewritten only
+ * when the unit changes or the value is replaced from outside.
+ */
+export function LengthField<T extends FieldValues>({ name, label, unit, help, className }: LengthFieldProps<T>) {
+  const { control } = useFormContext<T>();
+  const { field } = useController({ name, control });
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  const valueMm = typeof field.value === 'number' ? field.value : Number.NaN;
+  const [shown, setShown] = useState({ unit, valueMm, text: lengthText(valueMm, unit) });
+  if (shown.unit !== unit || !Object.is(shown.valueMm, valueMm)) {
+    setShown({ unit, valueMm, text: lengthText(valueMm, unit) });
+  }
+
+  const onChange = (text: string) => {
+    const typed = parseTypedNumber(text);
+    const mm = Number.isNaN(typed) ? Number.NaN : fromUnit(typed, unit);
+    setShown({ unit, valueMm: mm, text });
+    field.onChange(mm);
+  };
+
+  return (
+    <div className={`space-y-1 ${className ?? ''}`}>
+      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
+        {label}
+      </label>
+      <div className="relative">
+        <input
+          id={id}
+          ref={field.ref}
+          name={field.name}
+          type="text"
+          inputMode="decimal"
+          autoComplete="off"
+          value={shown.text}
+          onChange={(event) => onChange(event.target.value)}
+          onBlur={field.onBlur}
+          aria-invalid={error ? true : undefined}
+          aria-describedby={`${id}-help ${id}-error`}
+          className={`${inputClass} pr-12 font-mono tabular-nums`}
+        />
+        <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center font-mono text-xs text-steel-500">{unit}</span>
+      </div>
+      <HelpText id={`${id}-help`}>{help}</HelpText>
+      <FieldErrorText id={`${id}-error`} message={error} />
+    </div>
+  );
+}

@@ -1,0 +1,171 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useEffect, useRef, useState } from 'react';
+import { FormProvider, useForm } from 'react-hook-form';
+import { ChoiceGroup, NumberField } from '@/components/generator/fields';
+import { crankAngleSchema, type CrankAngleInput, type CrankAngleRequest } from '@/lib/engine/crank-angle-schema';
+import { pistonDropSchema, type PistonDropInput, type PistonDropRequest } from '@/lib/engine/piston-drop-schema';
+import { crankDegFromDropMm, pistonDropMm } from '@/lib/engine/slider-crank';
+import { advanceMarkHref } from '@/lib/engine/wheel-links';
+import { CrankDiagram } from './crank-diagram';
+import { LengthField } from './length-field';
+import { formatDeg, formatLength, type LengthUnit } from './length-unit';
+import { ResultFigure, ResultPanel, WaitingForInput } from './result-panel';
+import { UnitSwitch } from './unit-switch';
+import { useLiveResult } from './use-live-result';
+import { WheelLink } from './wheel-link';
+
+type Direction = 'angle-to-drop' | 'drop-to-angle';
+type Geometry = { strokeMm: number; rodMm: number };
+
+const EXAMPLE: Geometry = { strokeMm: 54, rodMm: 105 };
+
+/** Piston drop ⇄ crank angle: one direction at a time, the engine's stroke and rod carried across. */
+export function PistonDropCalculator() {
+  const [direction, setDirection] = useState<Direction>('angle-to-drop');
+  const [unit, setUnit] = useState<LengthUnit>('mm');
+  // The last valid stroke and rod, carried into the other direction when it is chosen.
+  const geometry = useRef<Geometry>(EXAMPLE);
+  const remember = (next: Geometry) => {
+    geometry.current = next;
+  };
+
+  return (
+    <div className="space-y-4">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <fieldset className="flex flex-wrap gap-2 text-sm">
+          <legend className="sr-only">What you know</legend>
+          {(
+            [
+              ['angle-to-drop', 'I know the angle (° BTDC) → drop'],
+              ['drop-to-angle', 'I know the drop (mm BTDC) → angle'],
+            ] as const
+          ).map(([value, label]) => (
+            <label
+              key={value}
+              className="cursor-pointer rounded-md border border-steel-300 px-3 py-1.5 has-[:checked]:border-gauge-600 has-[:checked]:bg-gauge-500/10 has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-gauge-500/40 dark:border-steel-600"
+            >
+              <input type="radio" name="direction" value={value} checked={direction === value} onChange={() => setDirection(value)} className="mr-2 accent-gauge-600" />
+              {label}
+            </label>
+          ))}
+        </fieldset>
+        <UnitSwitch unit={unit} onChange={setUnit} idPrefix="drop" />
+      </div>
+      {direction === 'angle-to-drop' ? (
+        <AngleToDrop geometry={geometry.current} onGeometry={remember} unit={unit} />
+      ) : (
+        <DropToAngle geometry={geometry.current} onGeometry={remember} unit={unit} />
+      )}
+    </div>
+  );
+}
+
+type PartProps = { geometry: Geometry; onGeometry: (geometry: Geometry) => void; unit: LengthUnit };
+
+function GeometryFields({ unit }: { unit: LengthUnit }) {
+  return (
+    <div className="grid gap-4 sm:grid-cols-2">
+      <LengthField name="strokeMm" label="Stroke" unit={unit} help="Piston travel TDC to BDC (twice the crank throw)." />
+      <LengthField name="rodMm" label="Con-rod length" unit={unit} help="Centre to centre, big end to small end." />
+    </div>
+  );
+}
+
+function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
+  const form = useForm<PistonDropInput, unknown, PistonDropRequest>({
+    resolver: zodResolver(pistonDropSchema),
+    defaultValues: { ...geometry, crankDeg: 18 },
+    mode: 'onChange',
+  });
+  const result = useLiveResult(form.control, pistonDropSchema, (valid) => ({ ...valid, dropMm: pistonDropMm(valid) }));
+  useRememberGeometry(result, onGeometry);
+  const btdcDeg = result ? Math.min(result.crankDeg, 360 - result.crankDeg) : null;
+
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,20rem)]">
+      <FormProvider {...form}>
+        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Crank angle to piston drop" className="space-y-4">
+          <GeometryFields unit={unit} />
+          <NumberField<PistonDropInput>
+            name="crankDeg"
+            label="Crank angle from TDC"
+            unit="°"
+            help="0–360°. The piston stands at the same height the same angle before and after TDC, so 18° BTDC and 18° ATDC give one drop."
+          />
+        </form>
+      </FormProvider>
+      <div className="space-y-4">
+        <ResultPanel title="Piston drop" id="drop-result">
+          {result ? (
+            <>
+              <ResultFigure
+                label={`Below TDC at ${formatDeg(result.crankDeg, 1)}`}
+                value={formatLength(result.dropMm, unit)}
+                detail={btdcDeg !== null && btdcDeg <= 180 ? `= ${formatLength(result.dropMm, unit)} BTDC for ${formatDeg(btdcDeg, 1)} BTDC timing` : undefined}
+                testId="drop-value"
+              />
+              {btdcDeg !== null ? <WheelLink href={advanceMarkHref(btdcDeg)}>{`Mark ${formatDeg(btdcDeg, 1)} BTDC on a wheel`}</WheelLink> : null}
+            </>
+          ) : (
+            <WaitingForInput />
+          )}
+        </ResultPanel>
+        {result ? <CrankDiagram strokeMm={result.strokeMm} rodMm={result.rodMm} crankDeg={result.crankDeg} unit={unit} /> : null}
+      </div>
+    </div>
+  );
+}
+
+function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
+  const form = useForm<CrankAngleInput, unknown, CrankAngleRequest>({
+    resolver: zodResolver(crankAngleSchema),
+    defaultValues: { ...geometry, dropMm: 1.8 },
+    mode: 'onChange',
+  });
+  const result = useLiveResult(form.control, crankAngleSchema, (valid) => ({ ...valid, crankDeg: crankDegFromDropMm(valid) }));
+  useRememberGeometry(result, onGeometry);
+
+  return (
+    <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,20rem)]">
+      <FormProvider {...form}>
+        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Piston drop to crank angle" className="space-y-4">
+          <GeometryFields unit={unit} />
+          <LengthField<CrankAngleInput>
+            name="dropMm"
+            label="Piston drop below TDC"
+            unit={unit}
+            help="From the dial gauge, or the manual's figure (e.g. “1.8 mm before TDC”). 0 up to the stroke."
+          />
+        </form>
+      </FormProvider>
+      <div className="space-y-4">
+        <ResultPanel title="Crank angle" id="angle-result">
+          {result ? (
+            <>
+              <ResultFigure
+                label={`From TDC at ${formatLength(result.dropMm, unit)} drop`}
+                value={formatDeg(result.crankDeg)}
+                detail={`${formatDeg(result.crankDeg, 2)} BTDC on the way up, ${formatDeg(result.crankDeg, 2)} ATDC on the way down`}
+                testId="angle-value"
+              />
+              <WheelLink href={advanceMarkHref(result.crankDeg)}>{`Mark ${formatDeg(result.crankDeg, 1)} BTDC on a wheel`}</WheelLink>
+            </>
+          ) : (
+            <WaitingForInput />
+          )}
+        </ResultPanel>
+        {result ? <CrankDiagram strokeMm={result.strokeMm} rodMm={result.rodMm} crankDeg={result.crankDeg} unit={unit} /> : null}
+      </div>
+    </div>
+  );
+}
+
+function useRememberGeometry(result: Geometry | null, onGeometry: (geometry: Geometry) => void) {
+  const strokeMm = result?.strokeMm;
+  const rodMm = result?.rodMm;
+  useEffect(() => {
+    if (strokeMm !== undefined && rodMm !== undefined) onGeometry({ strokeMm, rodMm });
+  }, [strokeMm, rodMm, onGeometry]);
+}

@@ -1,0 +1,65 @@
+import { expect, test } from '@playwright/test';
+
+test('piston drop: stroke 54, rod 105, 90° answers 30.531 mm as you type (Heywood eq. 2.5)', async ({ page }) => {
+  await page.goto('/calculators/piston-drop');
+  await expect(page.getByRole('heading', { level: 1, name: /Piston drop/ })).toBeVisible();
+  await page.getByLabel('Stroke').fill('54');
+  await page.getByLabel('Con-rod length').fill('105');
+  await page.getByLabel('Crank angle from TDC').fill('90');
+  // Heywood eq. 2.5, a = 27, θ = 90°: drop = 132 − √(105² − 27²) = 30.5308 mm (worked by hand).
+  await expect(page.getByTestId('drop-value')).toHaveText('30.531 mm');
+  await expect(page.getByRole('img', { name: /Crank at 90\.0° from TDC/ })).toBeVisible();
+
+  // The same length in inches: 30.5308 / 25.4 = 1.2020 in (1 in = 25.4 mm exactly).
+  await page.getByText('inch', { exact: true }).click();
+  await expect(page.getByTestId('drop-value')).toHaveText('1.2020 in');
+  await expect(page.getByLabel('Stroke')).toHaveValue('2.126');
+
+  // A rod shorter than the crank throw answers its own message, naming the field and range.
+  await page.getByText('mm', { exact: true }).first().click();
+  await page.getByLabel('Con-rod length').fill('20');
+  await expect(page.getByText(/Con-rod length \(rodMm\) must be longer than the crank throw/)).toBeVisible();
+  await expect(page.getByTestId('drop-value')).toHaveCount(0);
+});
+
+test('piston drop back to angle, and the advance mark link into the sheet maker', async ({ page }) => {
+  await page.goto('/calculators/piston-drop');
+  await page.getByLabel(/I know the drop/).check();
+  await page.getByLabel('Piston drop below TDC').fill('1.8');
+  // Law of cosines from Heywood eq. 2.5, s = 132 − 1.8 = 130.2:
+  // cos θ = (130.2² + 27² − 105²) / (2 · 27 · 130.2) = 6656.04 / 7030.8 = 0.946697…, θ = 18.79°.
+  await expect(page.getByTestId('angle-value')).toHaveText('18.79°');
+  const link = page.getByRole('link', { name: /Mark 18\.8° BTDC on a wheel/ });
+  await expect(link).toHaveAttribute('href', '/?advanceMarksDeg=18.8');
+
+  // Half-stroke drop: cos θ = a / 2l = 27/210, θ = 82.61°: beyond the sheet's 0–60° BTDC, so no mark link.
+  await page.getByLabel('Piston drop below TDC').fill('27');
+  await expect(page.getByTestId('angle-value')).toHaveText('82.61°');
+  await expect(page.getByRole('link', { name: /on a wheel/ })).toHaveCount(0);
+});
+
+test('TDC from stops across the 0/360 seam on a full wheel', async ({ page }) => {
+  await page.goto('/calculators/tdc');
+  await page.getByLabel(/^Full/).check();
+  await page.getByLabel('Reading A (first stop)').fill('340');
+  await page.getByLabel('Reading B (other stop)').fill('30');
+  // Midway on the 50° short arc 340 → 30 is 5° (common practice: TDC midway between the stops).
+  await expect(page.getByTestId('tdc-reading')).toHaveText('5.0°');
+  await expect(page.getByTestId('tdc-correction')).toHaveText('−5.0°');
+  await expect(page.getByTestId('tdc-stop-angle')).toHaveText('25.0° either side');
+  await expect(page.getByRole('link', { name: /note/ })).toHaveAttribute('href', /note=True\+TDC\+reads\+5%C2%B0/);
+});
+
+test('port events: durations, blowdown and the ring', async ({ page }) => {
+  await page.goto('/calculators/port-events');
+  await page.getByLabel('Deck height').fill('0');
+  await page.getByLabel('Port 1 edge height').fill('27');
+  await page.getByLabel('Port 2 edge height').fill('40');
+  await page.getByLabel('Port 3 edge height').fill('40');
+  // Exhaust at half stroke opens at 82.61° ATDC: duration 360 − 2 × 82.61 = 194.8° (common practice).
+  await expect(page.getByTestId('duration-0')).toHaveText('194.8°');
+  // Transfer at 40 mm opens at 111.64°; blowdown 111.64 − 82.61 = 29.0°.
+  await expect(page.getByTestId('blowdown')).toHaveText('29.0°');
+  await expect(page.getByRole('img', { name: /Port timing ring: Exhaust open 82\.6° to 277\.4°/ })).toBeVisible();
+  await expect(page.getByRole('link', { name: /Use on a wheel/ })).toHaveAttribute('href', /kind=wheel&numbering=full&portEvents=/);
+});
