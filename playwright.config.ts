@@ -38,5 +38,18 @@ export default defineConfig({
       stdout: 'ignore',
       stderr: 'pipe',
     },
+    // The local SMTP fake (ports and data file exported by scripts/test-e2e.sh).
+    ...(process.env.MAIL_FAKE_URL
+      ? [
+          {
+            command: 'npx tsx scripts/mail-fake.ts',
+            url: `${process.env.MAIL_FAKE_URL}/health`,
+            reuseExistingServer: false,
+            timeout: 30_000,
+            stdout: 'ignore' as const,
+            stderr: 'pipe' as const,
+          },
+        ]
+      : []),
   ],
 });

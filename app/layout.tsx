@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { AccountMenu } from '@/components/account/account-menu';
 import { SiteHeader } from '@/components/shell/site-header';
 import { figuresFont, uiFont } from './fonts';
 import './globals.css';
@@ -13,7 +14,9 @@ export default function RootLayout({ children }: { children: React.ReactNode }) 
   return (
     <html lang="en" className={`${uiFont.variable} ${figuresFont.variable}`}>
       <body className="min-h-screen font-sans antialiased">
-        <SiteHeader />
+        <SiteHeader>
+          <AccountMenu />
+        </SiteHeader>
         <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
         <footer className="mx-auto max-w-7xl px-4 py-8 text-xs text-steel-500">
           Rimscale sheets are aids, not specifications: the engine maker’s manual and local regulations come first.

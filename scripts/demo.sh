@@ -5,4 +5,17 @@ cd "$(dirname "$0")/.."
 bash scripts/db.sh migrate:latest
 bash scripts/db.sh seed:run
 npx next build
-exec node node_modules/next/dist/bin/next start -p "${PORT:-3000}"
+
+# Session key: NEXTAUTH_SECRET if given, else a fresh one (signs everyone out on restart).
+export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(node -e "console.log(require('node:crypto').randomBytes(32).toString('base64'))")}"
+export APP_URL="${APP_URL:-http://localhost:${PORT:-3000}}"
+# E-mail goes to the local SMTP fake unless SMTP_URL says otherwise; /dev/inbox shows it.
+if [ -z "${SMTP_URL:-}" ]; then
+  export MAIL_FAKE_SMTP_PORT="${MAIL_FAKE_SMTP_PORT:-2525}" MAIL_FAKE_HTTP_PORT="${MAIL_FAKE_HTTP_PORT:-2580}"
+  export SMTP_URL="smtp://127.0.0.1:$MAIL_FAKE_SMTP_PORT" MAIL_FAKE_URL="http://127.0.0.1:$MAIL_FAKE_HTTP_PORT"
+  node node_modules/tsx/dist/cli.mjs scripts/mail-fake.ts &
+  mail_fake_pid=$!
+  trap 'kill "$mail_fake_pid" 2>/dev/null || true' EXIT
+  echo "Mail fake running: sent e-mail appears at ${APP_URL}/dev/inbox"
+fi
+node node_modules/next/dist/bin/next start -p "${PORT:-3000}"

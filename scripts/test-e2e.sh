@@ -10,6 +10,15 @@ export RIMSCALE_DB_FILE="$work/e2e.sqlite"
 export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-e2e}"
 port=$(node scripts/free-port.mjs)
 export E2E_BASE_URL="http://127.0.0.1:$port"
+export APP_URL="$E2E_BASE_URL"
+# A fresh session-signing key per run (next start is a production server and needs one).
+export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(node -e "console.log(require('node:crypto').randomBytes(32).toString('base64'))")}"
+# The local SMTP fake, started by playwright.config.ts beside the app, on ports of its own.
+export MAIL_FAKE_SMTP_PORT=$(node scripts/free-port.mjs)
+export MAIL_FAKE_HTTP_PORT=$(node scripts/free-port.mjs)
+export MAIL_FAKE_DATA_FILE="$work/mail-fake.json"
+export SMTP_URL="smtp://127.0.0.1:$MAIL_FAKE_SMTP_PORT"
+export MAIL_FAKE_URL="http://127.0.0.1:$MAIL_FAKE_HTTP_PORT"
 
 bash scripts/db.sh migrate:latest >/dev/null
 bash scripts/db.sh seed:run >/dev/null

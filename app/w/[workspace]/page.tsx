@@ -1,0 +1,78 @@
+import type { Metadata } from 'next';
+import { pageRole } from '@/app/lib/page-access';
+import { WorkspaceProfiles } from '@/components/printer-check/workspace-profiles';
+import { ShopNameForm } from '@/components/workspace/create-shop-form';
+import { InviteForm } from '@/components/workspace/invite-form';
+import { MembersPanel } from '@/components/workspace/members-panel';
+import { PendingInvitations } from '@/components/workspace/pending-invitations';
+import { membersOf } from '@/db/accounts';
+import { auditOf } from '@/db/audit-log';
+import { pendingInvitations } from '@/db/invitations';
+
+export const dynamic = 'force-dynamic';
+export const metadata: Metadata = { title: 'Workspace' };
+
+type Props = { params: Promise<{ workspace: string }> };
+
+export default async function WorkspaceHomePage({ params }: Props) {
+  const { workspace: slug } = await params;
+  const access = await pageRole(slug, 'viewer', `/w/${slug}`);
+  if ('denied' in access) return <p role="alert">{access.denied}</p>;
+  const { workspace, role, user } = access;
+  const isOwner = role === 'owner';
+  const [members, invitations, audit] = await Promise.all([
+    membersOf(workspace.id),
+    isOwner ? pendingInvitations(workspace.id) : Promise.resolve([]),
+    isOwner ? auditOf(workspace.id, 20) : Promise.resolve([]),
+  ]);
+  return (
+    <section className="space-y-8">
+      <div>
+        <h1 className="text-2xl font-bold">{workspace.name}</h1>
+        <p className="text-sm text-steel-600 dark:text-steel-300">
+          {workspace.kind === 'personal' ? 'Personal workspace' : 'Shop workspace'} · you are {role}
+        </p>
+      </div>
+
+      <div className="space-y-2">
+        <h2 className="text-lg font-semibold">Members</h2>
+        <MembersPanel slug={workspace.slug} members={members} myUserId={user.id} isOwner={isOwner} />
+      </div>
+
+      <div className="space-y-2">
+        <h2 className="text-lg font-semibold">Printer profiles</h2>
+        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={role !== 'viewer'} />
+      </div>
+
+      {isOwner ? (
+        <div className="space-y-6 border-t border-steel-200 pt-6 dark:border-steel-700">
+          <h2 className="text-lg font-semibold">Settings (owners)</h2>
+          {workspace.kind === 'shop' ? (
+            <div className="space-y-2">
+              <h3 className="font-medium">Invite someone</h3>
+              <InviteForm slug={workspace.slug} />
+              <h3 className="pt-2 font-medium">Waiting invitations</h3>
+              <PendingInvitations slug={workspace.slug} invitations={invitations} />
+            </div>
+          ) : (
+            <p className="text-sm text-steel-600 dark:text-steel-300">A personal workspace is yours alone; create a shop workspace to invite others.</p>
+          )}
+          <div className="space-y-2">
+            <h3 className="font-medium">Name</h3>
+            <ShopNameForm renameSlug={workspace.slug} currentName={workspace.name} />
+          </div>
+          <div className="space-y-2">
+            <h3 className="font-medium">Recent activity</h3>
+            <ul className="space-y-1 text-xs text-steel-600 dark:text-steel-300">
+              {audit.map((entry) => (
+                <li key={entry.id}>
+                  {entry.createdAt} · {entry.actorName ?? 'someone'} · {entry.action} {entry.detail === '{}' ? '' : entry.detail}
+                </li>
+              ))}
+            </ul>
+          </div>
+        </div>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,62 @@
+'use client';
+
+import { useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
+import { FieldErrorText, HelpText, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+
+type InputFieldProps<T extends FieldValues> = {
+  name: FieldPath<T>;
+  label: string;
+  type?: 'text' | 'email' | 'password';
+  autoComplete?: string;
+  help?: React.ReactNode;
+};
+
+/** A labelled text, e-mail or password input with help and a live error line. */
+export function InputField<T extends FieldValues>({ name, label, type = 'text', autoComplete, help }: InputFieldProps<T>) {
+  const { register } = useFormContext<T>();
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
+        {label}
+      </label>
+      <input
+        id={id}
+        type={type}
+        autoComplete={autoComplete}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={`${id}-help ${id}-error`}
+        className={inputClass}
+        {...register(name)}
+      />
+      <HelpText id={`${id}-help`}>{help}</HelpText>
+      <FieldErrorText id={`${id}-error`} message={error} />
+    </div>
+  );
+}
+
+export function SubmitButton({ children, busy }: { children: React.ReactNode; busy?: boolean }) {
+  return (
+    <button
+      type="submit"
+      disabled={busy}
+      className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
+    >
+      {children}
+    </button>
+  );
+}
+
+/** The form-wide outcome line, read out when it changes. */
+export function FormMessage({ message, tone = 'info' }: { message?: string; tone?: 'info' | 'error' }) {
+  return (
+    <p
+      role={tone === 'error' ? 'alert' : 'status'}
+      aria-live="polite"
+      className={`text-sm empty:hidden ${tone === 'error' ? 'font-medium text-red-700 dark:text-red-400' : 'text-steel-700 dark:text-steel-200'}`}
+    >
+      {message ?? ''}
+    </p>
+  );
+}
