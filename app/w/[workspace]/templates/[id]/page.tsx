@@ -1,0 +1,151 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { pageRole } from '@/app/lib/page-access';
+import { FIELD_LABELS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
+import { PhotoUpload } from '@/components/templates/photo-upload';
+import { PrintLinks } from '@/components/templates/print-links';
+import { ActionButton } from '@/components/templates/template-actions';
+import { TemplateHistory } from '@/components/templates/template-history';
+import { findTemplate } from '@/db/templates/find-template';
+import { listPhotos } from '@/db/templates/photos';
+import { listRevisions } from '@/db/templates/revisions';
+import type { TemplateFieldName } from '@/lib/templates/template-schema';
+
+export const dynamic = 'force-dynamic';
+export const metadata: Metadata = { title: 'Engine template' };
+
+type Props = { params: Promise<{ workspace: string; id: string }> };
+
+const FIGURES: TemplateFieldName[] = [
+  'boreMm',
+  'strokeMm',
+  'rodMm',
+  'rotation',
+  'rimDiameterMm',
+  'faceDiameterMm',
+  'flangeDiameterMm',
+  'hubHoleMm',
+  'staticAdvanceDeg',
+  'advanceMarksDeg',
+];
+
+export default async function TemplatePage({ params }: Props) {
+  const { workspace: slug, id } = await params;
+  const access = await pageRole(slug, 'viewer', `/w/${slug}/templates/${id}`);
+  if ('denied' in access) return <p role="alert">{access.denied}</p>;
+  const template = /^\d+$/.test(id) ? await findTemplate(access.workspace.id, Number(id)) : null;
+  if (!template) notFound();
+  const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
+  const canEdit = access.role !== 'viewer';
+  const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
+
+  return (
+    <article className="space-y-8">
+      <header className="flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <p className="text-sm">
+            <Link href={`/w/${slug}/templates`} className="text-gauge-700 underline dark:text-gauge-300">
+              Engine templates
+            </Link>
+          </p>
+          <h1 className="text-2xl font-bold">
+            {template.name} {template.archived ? <span className="ml-2 rounded bg-steel-200 px-2 py-0.5 text-sm font-medium text-steel-700">archived</span> : null}
+          </h1>
+          <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
+          <p className="text-xs text-steel-500">
+            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatWhen(template.updatedAt)}
+          </p>
+        </div>
+        {canEdit ? (
+          <div className="flex flex-wrap gap-2">
+            <Link href={`/w/${slug}/templates/${template.id}/edit`} className="rounded-md bg-gauge-600 px-3 py-1.5 text-sm font-semibold text-white">
+              Edit
+            </Link>
+            <ActionButton
+              url={`${api}/archive`}
+              body={{ version: template.version, archived: !template.archived }}
+              label={template.archived ? 'Return to the list' : 'Archive'}
+              busyLabel="Saving…"
+            />
+          </div>
+        ) : null}
+      </header>
+
+      <section aria-labelledby="print-heading" className="space-y-2">
+        <h2 id="print-heading" className="text-lg font-semibold">
+          Print from this template
+        </h2>
+        <PrintLinks template={template} sheetUrl={`${api}/sheet`} />
+        <p className="text-xs text-steel-500">
+          Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
+        </p>
+      </section>
+
+      <section aria-labelledby="figures-heading" className="space-y-2">
+        <h2 id="figures-heading" className="text-lg font-semibold">
+          Figures
+        </h2>
+        <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
+          {FIGURES.map((field) => (
+            <div key={field} className="contents">
+              <dt className="text-steel-600 dark:text-steel-300">{FIELD_LABELS[field]}</dt>
+              <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field])}</dd>
+            </div>
+          ))}
+        </dl>
+        {template.portTargets.length ? (
+          <table className="mt-2 text-sm">
+            <caption className="text-left font-medium">Port targets (crank degrees from TDC)</caption>
+            <thead>
+              <tr className="text-left">
+                <th scope="col" className="pr-6">Port</th>
+                <th scope="col" className="pr-6">Opens</th>
+                <th scope="col" className="pr-6">Closes</th>
+                <th scope="col">Duration</th>
+              </tr>
+            </thead>
+            <tbody className="font-mono">
+              {template.portTargets.map((p) => (
+                <tr key={p.name}>
+                  <td className="pr-6 font-sans">{p.name}</td>
+                  <td className="pr-6">{p.opensCrankDeg}°</td>
+                  <td className="pr-6">{p.closesCrankDeg}°</td>
+                  <td>{(((p.closesCrankDeg - p.opensCrankDeg) % 360) + 360) % 360}°</td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        ) : null}
+        {template.notes ? <p className="whitespace-pre-line text-sm">{template.notes}</p> : null}
+      </section>
+
+      <section aria-labelledby="photos-heading" className="space-y-3">
+        <h2 id="photos-heading" className="text-lg font-semibold">
+          Photos
+        </h2>
+        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
+        <ul className="flex flex-wrap gap-4">
+          {photos.map((photo) => (
+            <li key={photo.id} className="space-y-1">
+              <a href={`${api}/photos/${photo.id}`}>
+                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
+                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of ${template.name}`} className="h-40 rounded border border-steel-200 object-contain" />
+              </a>
+              <p className="max-w-60 text-xs">{photo.caption}</p>
+              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm="Delete this photo?" /> : null}
+            </li>
+          ))}
+        </ul>
+        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
+      </section>
+
+      <section aria-labelledby="history-heading" className="space-y-2">
+        <h2 id="history-heading" className="text-lg font-semibold">
+          History
+        </h2>
+        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} />
+      </section>
+    </article>
+  );
+}

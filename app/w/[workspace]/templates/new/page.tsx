@@ -1,0 +1,20 @@
+import type { Metadata } from 'next';
+import { pageRole } from '@/app/lib/page-access';
+import { TemplateForm } from '@/components/templates/template-form';
+
+export const dynamic = 'force-dynamic';
+export const metadata: Metadata = { title: 'New template' };
+
+type Props = { params: Promise<{ workspace: string }> };
+
+export default async function NewTemplatePage({ params }: Props) {
+  const { workspace: slug } = await params;
+  const access = await pageRole(slug, 'technician', `/w/${slug}/templates/new`);
+  if ('denied' in access) return <p role="alert">{access.denied}</p>;
+  return (
+    <section className="max-w-3xl space-y-4">
+      <h1 className="text-2xl font-bold">New engine template</h1>
+      <TemplateForm slug={slug} template={null} />
+    </section>
+  );
+}
