@@ -3,6 +3,7 @@ import { currentUser } from '@/app/lib/authz';
 import { workspacesOf } from '@/db/accounts';
 import { SignOutButton } from './sign-out-button';
 import { WorkspaceSwitcher } from './workspace-switcher';
+import { TemplatesNavLink } from '@/components/templates/templates-nav-link';
 
 /** The header's right side: sign-in link for visitors; workspace switcher, account and sign-out for members. */
 export async function AccountMenu() {
@@ -22,6 +23,7 @@ export async function AccountMenu() {
   const workspaces = await workspacesOf(user.id);
   return (
     <div className="flex items-center gap-2">
+      <TemplatesNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
       <WorkspaceSwitcher workspaces={workspaces.map(({ slug, name, kind }) => ({ slug, name, kind }))} />
       <Link href="/account" className="rounded px-2 py-1 text-sm hover:bg-steel-100 dark:hover:bg-steel-800" aria-label={`Account of ${user.name}`}>
         {user.name}
