@@ -1,6 +1,7 @@
 import { cosDeg, normalizeDeg, sinDeg } from '@/lib/angle';
 import { pistonDropMm } from '@/lib/engine/slider-crank';
 import { formatLength, type LengthUnit } from './length-unit';
+import { svgRound } from './svg-round';
 
 type CrankDiagramProps = { strokeMm: number; rodMm: number; crankDeg: number; unit: LengthUnit };
 
@@ -12,8 +13,8 @@ type CrankDiagramProps = { strokeMm: number; rodMm: number; crankDeg: number; un
 export function CrankDiagram({ strokeMm, rodMm, crankDeg, unit }: CrankDiagramProps) {
   const a = strokeMm / 2;
   const dropMm = pistonDropMm({ strokeMm, rodMm, crankDeg });
-  const pinY = a + rodMm - dropMm; // wrist pin height above the crank axis (Heywood's s)
-  const crankPin = { x: a * sinDeg(crankDeg), y: a * cosDeg(crankDeg) };
+  const pinY = svgRound(a + rodMm - dropMm); // wrist pin height above the crank axis (Heywood's s)
+  const crankPin = { x: svgRound(a * sinDeg(crankDeg)), y: svgRound(a * cosDeg(crankDeg)) };
   const pistonHalfWidth = a;
   const crownAbovePin = 0.6 * a;
   const skirtBelowPin = 0.6 * a;
@@ -31,7 +32,7 @@ export function CrankDiagram({ strokeMm, rodMm, crankDeg, unit }: CrankDiagramPr
   const angleRadius = 0.55 * a;
   const shownDeg = normalizeDeg(crankDeg);
   // SVG's y runs down: every y below is negated.
-  const arcEnd = { x: angleRadius * sinDeg(shownDeg), y: -angleRadius * cosDeg(shownDeg) };
+  const arcEnd = { x: svgRound(angleRadius * sinDeg(shownDeg)), y: svgRound(-angleRadius * cosDeg(shownDeg)) };
   const line = { vectorEffect: 'non-scaling-stroke' as const, fill: 'none' };
 
   return (

@@ -1,6 +1,11 @@
 import { arc } from 'd3-shape'; // d3-shape takes radians: converted with lib/angle at the call
 import { cosDeg, degToRad, sinDeg } from '@/lib/angle';
 import type { PortTiming } from '@/lib/engine/port-events';
+import { svgRound } from './svg-round';
+
+function polar(deg: number, radius: number) {
+  return { x: svgRound(radius * sinDeg(deg)), y: svgRound(-radius * cosDeg(deg)) };
+}
 
 const BAND_COLOURS = ['#1d546d', '#e8951c', '#2f7fa3', '#c67712', '#4a5861', '#7d8d96'];
 const HATCHES = ['', 'url(#port-hatch)', '', 'url(#port-hatch)', '', 'url(#port-hatch)'];
@@ -13,7 +18,7 @@ const HATCHES = ['', 'url(#port-hatch)', '', 'url(#port-hatch)', '', 'url(#port-
 export function PortRing({ ports }: { ports: PortTiming[] }) {
   const outer = 100;
   const band = Math.min(14, 70 / Math.max(ports.length, 1));
-  const shape = arc<{ innerRadius: number; outerRadius: number; startAngle: number; endAngle: number }>();
+  const shape = arc<{ innerRadius: number; outerRadius: number; startAngle: number; endAngle: number }>().digits(3);
   const summary = ports
     .map((port) =>
       port.opensDegATDC === null ? `${port.name} never opens` : `${port.name} open ${port.opensDegATDC.toFixed(1)}° to ${(port.closesDegATDC as number).toFixed(1)}°`,
@@ -28,18 +33,22 @@ export function PortRing({ ports }: { ports: PortTiming[] }) {
         </pattern>
       </defs>
       <circle r={outer + 4} fill="none" stroke="currentColor" strokeWidth="1" className="text-steel-400" />
-      {Array.from({ length: 36 }, (_, i) => i * 10).map((deg) => (
-        <line
-          key={deg}
-          x1={(outer + 4) * sinDeg(deg)}
-          y1={-(outer + 4) * cosDeg(deg)}
-          x2={(outer + (deg % 90 === 0 ? 12 : 8)) * sinDeg(deg)}
-          y2={-(outer + (deg % 90 === 0 ? 12 : 8)) * cosDeg(deg)}
-          stroke="currentColor"
-          strokeWidth={deg % 90 === 0 ? 1.5 : 0.75}
-          className="text-steel-500"
-        />
-      ))}
+      {Array.from({ length: 36 }, (_, i) => i * 10).map((deg) => {
+        const from = polar(deg, outer + 4);
+        const to = polar(deg, outer + (deg % 90 === 0 ? 12 : 8));
+        return (
+          <line
+            key={deg}
+            x1={from.x}
+            y1={from.y}
+            x2={to.x}
+            y2={to.y}
+            stroke="currentColor"
+            strokeWidth={deg % 90 === 0 ? 1.5 : 0.75}
+            className="text-steel-500"
+          />
+        );
+      })}
       <text x="0" y={-outer - 14} textAnchor="middle" fontSize="10" fontWeight="bold" className="fill-current">
         TDC 0°
       </text>
@@ -58,14 +67,14 @@ export function PortRing({ ports }: { ports: PortTiming[] }) {
         const innerRadius = outerRadius - band + 2;
         const datum = { innerRadius, outerRadius, startAngle: degToRad(port.opensDegATDC), endAngle: degToRad(port.closesDegATDC) };
         const colour = BAND_COLOURS[index % BAND_COLOURS.length];
-        const labelRadius = (innerRadius + outerRadius) / 2;
+        const label = polar(port.opensDegATDC, (innerRadius + outerRadius) / 2);
         return (
           <g key={`${port.name}-${index}`}>
             <path d={shape(datum) ?? ''} fill={colour} />
             {HATCHES[index % HATCHES.length] ? <path d={shape(datum) ?? ''} fill={HATCHES[index % HATCHES.length]} /> : null}
             <text
-              x={labelRadius * sinDeg(port.opensDegATDC) + 6}
-              y={-labelRadius * cosDeg(port.opensDegATDC)}
+              x={svgRound(label.x + 6)}
+              y={label.y}
               fontSize={Math.min(9, band - 3)}
               dominantBaseline="middle"
               className="fill-current"

@@ -1,12 +1,13 @@
 import { cosDeg, sinDeg } from '@/lib/angle';
 import { signedTurnDeg } from '@/lib/engine/tdc-from-stops';
+import { svgRound } from './svg-round';
 
 type StopSketchProps = { stopACrankDeg: number; stopBCrankDeg: number; tdcCrankDeg: number };
 
 const R = 80;
 
 function point(deg: number, radius: number) {
-  return { x: radius * sinDeg(deg), y: -radius * cosDeg(deg) };
+  return { x: svgRound(radius * sinDeg(deg)), y: svgRound(-radius * cosDeg(deg)) };
 }
 
 /**
