@@ -1,0 +1,125 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { POST } from '@/app/api/v1/sheets/route';
+import { MAX_JSON_BODY_BYTES } from '@/app/lib/api';
+import { readPdfText } from '../pdf/read-pdf-text';
+
+/** POST /api/v1/sheets called directly with a Request, no server. */
+
+function post(body: unknown, options: { raw?: boolean } = {}): Promise<Response> {
+  return POST(
+    new Request('http://localhost/api/v1/sheets', {
+      method: 'POST',
+      headers: { 'content-type': 'application/json' },
+      body: options.raw ? (body as string) : JSON.stringify(body),
+    }),
+  );
+}
+
+type ErrorBody = { error: string; issues: Array<{ path: string; message: string }> };
+
+async function refusal(body: unknown, options: { raw?: boolean } = {}) {
+  const response = await post(body, options);
+  const json = (await response.json()) as ErrorBody;
+  return { status: response.status, json, type: response.headers.get('content-type') };
+}
+
+describe('POST /api/v1/sheets refuses bad requests by field, with the allowed range', () => {
+  // The ranges are issue 3's: diameters 20–600 mm, advance marks 0–60° BTDC and at most 72 of them.
+  it.each([
+    ['diameter 10 mm', { kind: 'wheel', diameterMm: 10 }, 'diameterMm', /20–600 mm/],
+    ['diameter 700 mm', { kind: 'wheel', diameterMm: 700 }, 'diameterMm', /20–600 mm/],
+    ['diameter "abc"', { kind: 'wheel', diameterMm: 'abc' }, 'diameterMm', /number, 20–600 mm/],
+    ['no diameter for a wheel', { kind: 'wheel' }, 'diameterMm', /required.*20–600 mm/],
+    ['hub hole as large as the disc', { kind: 'wheel', diameterMm: 100, hubHoleMm: 100 }, 'hubHoleMm', /smaller than the disc diameter.*100 mm/],
+    ['ring inner ≥ outer', { kind: 'ring', innerDiameterMm: 160, outerDiameterMm: 150 }, 'innerDiameterMm', /smaller than the outer diameter \(150 mm\)/],
+    ['advance mark 61° BTDC', { kind: 'wheel', diameterMm: 100, advanceMarksDeg: [18, 61] }, 'advanceMarksDeg.1', /0–60° BTDC/],
+    ['advance mark −1° BTDC', { kind: 'wheel', diameterMm: 100, advanceMarksDeg: [-1] }, 'advanceMarksDeg.0', /0–60° BTDC/],
+    ['73 advance marks', { kind: 'wheel', diameterMm: 100, advanceMarksDeg: Array.from({ length: 73 }, (_, i) => (i % 60) + 0.5) }, 'advanceMarksDeg', /at most 72/],
+    ['an unknown kind', { kind: 'hexagon', diameterMm: 100 }, 'kind', /wheel, ring, strip, scribe, check/],
+    ['an unknown format', { kind: 'wheel', diameterMm: 100, format: 'png' }, 'format', /svg, pdf/],
+  ])('%s → 400 naming %s', async (_, body, path, message) => {
+    const { status, json, type } = await refusal(body);
+    expect(status).toBe(400);
+    expect(type).toMatch(/application\/json/);
+    expect(json.error).toEqual(expect.any(String));
+    const issue = json.issues.find((i) => i.path === path);
+    expect(issue, `an issue for ${path} in ${JSON.stringify(json.issues)}`).toBeDefined();
+    expect(issue!.message).toMatch(message);
+  });
+
+  it('invalid JSON → 400 with a body issue', async () => {
+    const { status, json } = await refusal('{"kind": "wheel", diameterMm: 100', { raw: true });
+    expect(status).toBe(400);
+    expect(json.error).toMatch(/not valid JSON/);
+    expect(json.issues[0]!.path).toBe('(body)');
+  });
+
+  it('a body over the size cap → 413 in the same error shape', async () => {
+    const padding = 'x'.repeat(MAX_JSON_BODY_BYTES + 1);
+    const { status, json } = await refusal(JSON.stringify({ kind: 'wheel', diameterMm: 100, title: padding }), { raw: true });
+    expect(status).toBe(413);
+    expect(json.error).toMatch(/larger than 64 KiB/);
+    expect(json.issues[0]!.path).toBe('(body)');
+  });
+
+  it('never answers 500 on arbitrary JSON, and a 200 SVG never holds NaN or Infinity (fast-check)', async () => {
+    const plausible = fc.record(
+      {
+        kind: fc.constantFrom('wheel', 'ring', 'strip', 'scribe', 'check', 'other'),
+        diameterMm: fc.oneof(fc.double({ min: -10, max: 800, noNaN: true }), fc.string()),
+        hubHoleMm: fc.double({ min: -5, max: 700, noNaN: true }),
+        innerDiameterMm: fc.double({ min: 0, max: 700, noNaN: true }),
+        outerDiameterMm: fc.double({ min: 0, max: 700, noNaN: true }),
+        advanceMarksDeg: fc.array(fc.double({ min: -5, max: 70, noNaN: true }), { maxLength: 8 }),
+        printerScaleX: fc.double({ min: 0.8, max: 1.2, noNaN: true }),
+        title: fc.string({ maxLength: 90 }),
+        format: fc.constant('svg'),
+      },
+      { requiredKeys: ['kind', 'format'] },
+    );
+    await fc.assert(
+      fc.asyncProperty(fc.oneof(plausible, fc.jsonValue()), async (body) => {
+        const response = await post(body);
+        expect([200, 400]).toContain(response.status);
+        if (response.status === 200) {
+          const svg = await response.text();
+          expect(svg.startsWith('<svg')).toBe(true);
+          expect(svg).not.toMatch(/NaN|Infinity/);
+        }
+      }),
+      { numRuns: 60 },
+    );
+  });
+});
+
+describe('POST /api/v1/sheets answers sheets', () => {
+  it('a PDF by default, as an attachment named after kind, diameter and title, not cached', async () => {
+    const response = await post({ kind: 'wheel', diameterMm: 100, advanceMarksDeg: [18], title: 'Büro Rad "7" <b>' });
+    expect(response.status).toBe(200);
+    expect(response.headers.get('content-type')).toBe('application/pdf');
+    expect(response.headers.get('content-disposition')).toBe('attachment; filename="rimscale-wheel-100mm-buro-rad-7-b.pdf"');
+    expect(response.headers.get('cache-control')).toBe('no-store');
+    const bytes = new Uint8Array(await response.arrayBuffer());
+    expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-'); // ISO 32000-1 §7.5.2 file header
+    const { text } = await readPdfText(bytes);
+    expect(text).toContain('18° BTDC');
+  });
+
+  it('an SVG when asked, true-scale root and no NaN', async () => {
+    const response = await post({ kind: 'ring', innerDiameterMm: 120, outerDiameterMm: 160, format: 'svg' });
+    expect(response.status).toBe(200);
+    expect(response.headers.get('content-type')).toMatch(/^image\/svg\+xml/);
+    expect(response.headers.get('content-disposition')).toBe('attachment; filename="rimscale-ring-160mm.svg"');
+    const svg = await response.text();
+    expect(svg.startsWith('<svg')).toBe(true);
+    expect(svg).toMatch(/^<svg[^>]* width="[\d.]+mm" height="[\d.]+mm"/); // CSS absolute length unit mm
+    expect(svg).not.toContain('NaN');
+  });
+
+  it('a check sheet has no diameter in its file name', async () => {
+    const response = await post({ kind: 'check', format: 'svg' });
+    expect(response.status).toBe(200);
+    expect(response.headers.get('content-disposition')).toBe('attachment; filename="rimscale-check.svg"');
+  });
+});
