@@ -1,0 +1,67 @@
+// Source under test: lib/sheet/scale-marks.ts, lib/sheet/polar-band.ts (d3-shape arc() sampled by
+// lib/sheet/arc-context.ts) and lib/sheet/polar-scale.ts: advance bands and port events, measured on the SVG.
+import { describe, expect, it } from 'vitest';
+import { buildDrawing } from '@/lib/sheet/build-drawing';
+import { renderSvg } from '@/lib/sheet/render-svg';
+import { centreOf, clockwiseDeg, FIXED_DATE, lines, n, parseSvg, req } from './svg-measure';
+
+function points(d: string): Array<[number, number]> {
+  return [...d.matchAll(/[ML](-?[\d.]+) (-?[\d.]+)/g)].map((m) => [Number(m[1]), Number(m[2])]);
+}
+
+describe('advance band', () => {
+  it.each([
+    ['cw', 'rotating', 16, 20],
+    ['cw', 'stationary', 340, 344],
+    ['ccw', 'rotating', 340, 344],
+  ] as const)('on a %s %s wheel spans clockwise %s°–%s° from TDC as a closed hatched path', (rotation, carrier, fromCw, toCw) => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 150, rotation, carrier, advanceBandDeg: [16, 20] }), { date: FIXED_DATE })));
+    const centre = centreOf(svg);
+    const band = svg.all('path').find((p) => p.getAttribute('data-role') === 'advance-band')!;
+    expect(band.getAttribute('fill')).toMatch(/^url\(#/);
+    const d = band.getAttribute('d')!;
+    expect(d.endsWith('Z')).toBe(true);
+    const angles = points(d).map(([x, y]) => clockwiseDeg(centre, x, y));
+    expect(Math.min(...angles)).toBeCloseTo(fromCw, 3);
+    expect(Math.max(...angles)).toBeCloseTo(toCw, 3);
+    // An annulus: two radii, all points on one or the other (sampled arcs, no chord shortcut at the vertices).
+    const radii = [...new Set(points(d).map(([x, y]) => Math.hypot(x - centre[0], y - centre[1]).toFixed(2)))];
+    expect(radii).toHaveLength(2);
+  });
+
+  it('is a grey rectangle on a strip, from 16° to 20° BTDC', () => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'strip', diameterMm: 100, advanceBandDeg: [20, 16], paper: 'A3', orientation: 'landscape' }), { date: FIXED_DATE })));
+    const band = svg.all('rect').find((r) => r.getAttribute('data-role') === 'advance-band')!;
+    expect(band.getAttribute('fill')).toBe('#d9d9d9');
+    expect(n(band, 'width')).toBeCloseTo((Math.PI * 100.1 * 4) / 360, 3);
+    const at = (crank: string) => lines(svg, (el) => el.hasAttribute('data-level') && el.getAttribute('data-crank-deg') === crank)[0]!.x1;
+    expect(Math.min(at('344'), at('340'))).toBeCloseTo(n(band, 'x'), 3);
+  });
+});
+
+describe('port events', () => {
+  const ports = [{ name: 'Exhaust', opensCrankDeg: 96, closesCrankDeg: 264 }];
+  it('are marked and labelled on full-numbered wheels, at their crank angles', () => {
+    const drawing = buildDrawing(req({ kind: 'wheel', diameterMm: 200, numbering: 'full', portEvents: ports, paper: 'A3' }), { date: FIXED_DATE });
+    const svg = parseSvg(renderSvg(drawing));
+    const centre = centreOf(svg);
+    const marks = lines(svg, (el) => el.getAttribute('data-role') === 'port');
+    expect(marks.map((m) => n(m.el, 'data-crank-deg')).sort((a, b) => a - b)).toEqual([96, 264]);
+    // Rotating cw: crank 96 lies 96° counter-clockwise from TDC, i.e. 264° clockwise.
+    const opens = marks.find((m) => n(m.el, 'data-crank-deg') === 96)!;
+    expect(clockwiseDeg(centre, opens.x1, opens.y1)).toBeCloseTo(264, 4);
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'port-label').map((t) => t.textContent);
+    expect(labels.sort()).toEqual(['Exhaust closes 264°', 'Exhaust opens 96°']);
+  });
+
+  it('are left off split wheels with a warning saying why', () => {
+    const drawing = buildDrawing(req({ kind: 'wheel', diameterMm: 200, portEvents: ports, paper: 'A3' }), { date: FIXED_DATE });
+    expect(drawing.shapes.some((s) => s.data?.role === 'port')).toBe(false);
+    expect(drawing.warnings.some((w) => w.startsWith('Port events are drawn on full-numbered scales only'))).toBe(true);
+  });
+
+  it('appear on full-numbered strips too', () => {
+    const drawing = buildDrawing(req({ kind: 'strip', diameterMm: 50, numbering: 'full', portEvents: ports }), { date: FIXED_DATE });
+    expect(drawing.shapes.filter((s) => s.data?.role === 'port')).toHaveLength(2);
+  });
+});
