@@ -1,6 +1,6 @@
 import type { Knex } from 'knex';
-import { TABLES } from '@/db/tables';
-import { creationChanges } from '@/lib/templates/revision-diff';
+import { TABLES } from '../tables';
+import { creationChanges } from '../../lib/templates/revision-diff';
 import type { RevisionAction } from '@/lib/templates/template';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 import { fieldsToColumns } from './template-row';
