@@ -43,7 +43,10 @@ export async function signUp(input: SignUpInput, origin: string): Promise<Servic
   const userId: number = row.id;
   await createWorkspace({ name: `${input.name}’s workspace`, kind: 'personal', ownerId: userId, slug: slugFrom(input.name, randomSlugTail()) });
   await recordAudit({ action: 'sign-up', actorUserId: userId });
-  if (!verified) await sendVerification(userId, origin);
+  if (!verified) {
+    // The account stands even if the mail server is down; the account page offers a new link.
+    await sendVerification(userId, origin).catch((err: unknown) => console.error(`[mail] confirmation link not sent: ${errorText(err)}`));
+  }
   return { ok: true, value: { userId, verified } };
 }
 
@@ -67,7 +70,14 @@ export async function requestPasswordReset(email: string, origin: string): Promi
   const user = await findUserByEmail(email);
   if (!user) return;
   const token = await issueToken('reset-password', user.id);
-  await sendMail(resetMail(user.email, `${origin}/reset-password/confirm?token=${token}`));
+  // A mail failure is logged, not answered: the reply must not differ for addresses with an account.
+  await sendMail(resetMail(user.email, `${origin}/reset-password/confirm?token=${token}`)).catch((err: unknown) =>
+    console.error(`[mail] reset link not sent: ${errorText(err)}`),
+  );
+}
+
+export function errorText(err: unknown): string {
+  return err instanceof Error ? err.message : String(err);
 }
 
 export async function resetPassword(token: string, password: string): Promise<ServiceResult<{ userId: number }>> {

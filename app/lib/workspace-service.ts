@@ -1,11 +1,11 @@
 import 'server-only';
 import { recordAudit } from '@/db/audit-log';
 import { countOwners, createWorkspace, findRole, findUserById, membersOf, slugFrom } from '@/db/accounts';
-import { acceptInvitation, createInvitation, lookUpInvitation } from '@/db/invitations';
+import { acceptInvitation, createInvitation, lookUpInvitation, revokeInvitation } from '@/db/invitations';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
 import type { Role } from '@/lib/roles';
-import { randomSlugTail, type ServiceResult } from './account-service';
+import { errorText, randomSlugTail, type ServiceResult } from './account-service';
 import type { Access } from './authz';
 import { invitationMail } from './emails';
 import { sendMail } from './mailer';
@@ -32,9 +32,15 @@ export async function invite(
     return refuse(409, `${input.email} is already a member of ${access.workspace.name}`);
   }
   const { id, token } = await createInvitation({ workspaceId: access.workspace.id, email: input.email, role: input.role, invitedBy: access.user.id });
-  await sendMail(
-    invitationMail(input.email, access.user.name, access.workspace.name, input.role, `${origin}/invitations/accept?token=${token}`),
-  );
+  try {
+    await sendMail(
+      invitationMail(input.email, access.user.name, access.workspace.name, input.role, `${origin}/invitations/accept?token=${token}`),
+    );
+  } catch (err) {
+    await revokeInvitation(access.workspace.id, id);
+    console.error(`[mail] invitation not sent: ${errorText(err)}`);
+    return refuse(502, 'The invitation e-mail could not be sent (the mail server did not accept it). Try again later.');
+  }
   await recordAudit({
     action: 'invitation-sent',
     actorUserId: access.user.id,

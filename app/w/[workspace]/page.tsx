@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import Link from 'next/link';
 import { pageRole } from '@/app/lib/page-access';
 import { WorkspaceProfiles } from '@/components/printer-check/workspace-profiles';
 import { ShopNameForm } from '@/components/workspace/create-shop-form';
@@ -32,6 +33,14 @@ export default async function WorkspaceHomePage({ params }: Props) {
         <p className="text-sm text-steel-600 dark:text-steel-300">
           {workspace.kind === 'personal' ? 'Personal workspace' : 'Shop workspace'} · you are {role}
         </p>
+        <nav aria-label="Workspace" className="mt-3 flex gap-4 text-sm">
+          <Link href={`/w/${workspace.slug}/templates`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
+            Engine templates
+          </Link>
+          <Link href="/printer-check" className="font-medium text-gauge-700 underline dark:text-gauge-300">
+            Printer check
+          </Link>
+        </nav>
       </div>
 
       <div className="space-y-2">

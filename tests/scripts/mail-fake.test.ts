@@ -1,0 +1,69 @@
+import fs from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import nodemailer from 'nodemailer';
+import { afterEach, describe, expect, it } from 'vitest';
+import { decodeQuotedPrintable } from '@/scripts/mail-fake/parse-message';
+import { startMailFake, type MailFake } from '@/scripts/mail-fake/start-mail-fake';
+
+const started: MailFake[] = [];
+afterEach(async () => {
+  await Promise.all(started.splice(0).map((f) => f.stop()));
+});
+
+async function fake(dataFile?: string) {
+  const f = await startMailFake({ dataFile });
+  started.push(f);
+  return f;
+}
+
+// nodemailer is the independent writer here: it picks the encodings (RFC 2045 quoted-printable, RFC 2047 words).
+async function send(f: MailFake, mail: { to: string; subject: string; text: string }) {
+  await nodemailer.createTransport(`smtp://127.0.0.1:${f.smtpPort}`).sendMail({ from: 'app@rimscale.test', ...mail });
+}
+
+describe('the local SMTP fake', () => {
+  it('decodes what nodemailer sends (non-ASCII subject, long quoted-printable text) and lists its links', async () => {
+    const f = await fake();
+    const text = `Grüße — open https://app.test/reset-password/confirm?token=Ab_12-cd now.\n${'ø'.repeat(120)}`;
+    await send(f, { to: 'Åsa <asa@example.test>', subject: 'Nytt lösenord för Rimscale', text });
+    const res = await fetch(`http://127.0.0.1:${f.httpPort}/messages`);
+    const [message] = (await res.json()) as Record<string, unknown>[];
+    expect(message).toMatchObject({
+      subject: 'Nytt lösenord för Rimscale',
+      to: 'Åsa <asa@example.test>',
+      envelopeTo: ['asa@example.test'],
+      links: ['https://app.test/reset-password/confirm?token=Ab_12-cd'],
+    });
+    expect(String(message!.text).trim()).toBe(text);
+  });
+
+  it('filters by recipient, forgets on DELETE and answers /health', async () => {
+    const f = await fake();
+    await send(f, { to: 'a@example.test', subject: 'one', text: 'x' });
+    await send(f, { to: 'b@example.test', subject: 'two', text: 'y' });
+    const base = `http://127.0.0.1:${f.httpPort}`;
+    const forB = (await (await fetch(`${base}/messages?to=B@example.test`)).json()) as { subject: string }[];
+    expect(forB.map((m) => m.subject)).toEqual(['two']);
+    expect(await (await fetch(`${base}/health`)).json()).toEqual({ ok: true, count: 2 });
+    await fetch(`${base}/messages`, { method: 'DELETE' });
+    expect(await (await fetch(`${base}/messages`)).json()).toEqual([]);
+  });
+
+  it('keeps messages in its JSON file across a restart', async () => {
+    const dataFile = path.join(fs.mkdtempSync(path.join(os.tmpdir(), 'rimscale-mail-')), 'messages.json');
+    const first = await fake(dataFile);
+    await send(first, { to: 'keep@example.test', subject: 'kept', text: 'z' });
+    await first.stop();
+    started.splice(started.indexOf(first), 1);
+    const second = await fake(dataFile);
+    expect(second.messages().map((m) => [m.id, m.subject])).toEqual([[1, 'kept']]);
+    fs.rmSync(path.dirname(dataFile), { recursive: true, force: true });
+  });
+});
+
+describe('decodeQuotedPrintable', () => {
+  it('joins soft line breaks and decodes =XX octets as UTF-8 (RFC 2045 §6.7)', () => {
+    expect(decodeQuotedPrintable('caf=C3=A9 is=\r\n one word=3D')).toBe('café is one word=');
+  });
+});
