@@ -14,7 +14,8 @@ const KEY_PATTERN = /^[a-z0-9][a-z0-9_.-]*(\/[a-z0-9][a-z0-9_.-]*)*$/;
 
 function keyPath(key: string): string {
   if (!KEY_PATTERN.test(key) || key.includes('..')) throw new Error(`Invalid storage key ${JSON.stringify(key)}`);
-  return path.join(uploadRoot(), key);
+  // The upload folder is chosen at run time; keep the bundler from tracing it.
+  return path.join(/*turbopackIgnore: true*/ uploadRoot(), key);
 }
 
 export async function putObject(key: string, data: Buffer): Promise<void> {
@@ -28,7 +29,7 @@ export async function putObject(key: string, data: Buffer): Promise<void> {
 
 export async function getObject(key: string): Promise<Buffer | null> {
   try {
-    return await fs.readFile(keyPath(key));
+    return await fs.readFile(/*turbopackIgnore: true*/ keyPath(key));
   } catch (err) {
     if ((err as NodeJS.ErrnoException).code === 'ENOENT') return null;
     throw err;
