@@ -87,6 +87,11 @@ async function main(): Promise<void> {
     note: `${svg400.shapes.length} shapes${levels400 ? '' : ' — 0.5° NOT drawn'}`,
   });
 
+  // The split, for whoever tunes the layout: the same 400 mm wheel, layout alone and SVG alone.
+  const request400 = sheetRequestSchema.parse(WHEEL_400);
+  rows.push({ name: '  of which layout (buildDrawing), 400 mm', timing: await timeRuns(() => buildDrawing(request400, { date: FIXED_DATE }), { warmup: 20, runs: 200 }), unit: 'ms' });
+  rows.push({ name: '  of which SVG (renderSvg), 400 mm', timing: await timeRuns(() => renderSvg(svg400), { warmup: 20, runs: 200 }), unit: 'ms' });
+
   const fonts = await loadSheetFonts();
   const onePage = drawingFor(WHEEL_100);
   if (onePage.pages.length !== 1) throw new Error(`the 100 mm wheel should fit one A4 page, got ${onePage.pages.length}`);

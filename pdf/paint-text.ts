@@ -1,10 +1,25 @@
 import type { TextShape } from '@/lib/sheet/drawing';
 import { mmToPt } from '@/lib/units';
-import type { SheetFonts } from './fonts';
+import type { PdfFontData, SheetFonts } from './fonts';
 import type { PointMapping } from './page-mapping';
 import type { Painter } from './painter';
 
 const ANCHOR_SHIFT: Record<TextShape['anchor'], number> = { start: 0, middle: -0.5, end: -1 };
+
+// Advance widths in em, per face and string: sheets repeat the same numerals on every render.
+const widthCache = new Map<string, number>();
+const MAX_CACHED_WIDTHS = 5000;
+
+function advanceEm(face: string, font: PdfFontData, text: string): number {
+  const key = `${face}\u0000${text}`;
+  let em = widthCache.get(key);
+  if (em === undefined) {
+    em = font.layout(text).advanceWidth / font.unitsPerEm;
+    if (widthCache.size >= MAX_CACHED_WIDTHS) widthCache.clear();
+    widthCache.set(key, em);
+  }
+  return em;
+}
 
 /**
  * Real text in an embedded DejaVu subset (extractable, searchable), placed on its
@@ -12,14 +27,16 @@ const ANCHOR_SHIFT: Record<TextShape['anchor'], number> = { start: 0, middle: -0
  */
 export function paintText(p: Painter, shape: TextShape, at: PointMapping, fonts: SheetFonts): void {
   if (shape.text.length === 0) return;
-  const font = fonts[`${shape.font}-${shape.weight}`];
+  const face = `${shape.font}-${shape.weight}` as const;
+  const font = fonts[face];
   const sizePt = mmToPt(shape.sizeMm);
-  const widthPt = (font.layout(shape.text).advanceWidth / font.unitsPerEm) * sizePt;
+  const widthPt = advanceEm(face, font, shape.text) * sizePt;
   const xPt = at.xPt(shape.xMm);
   const yPt = at.yPt(shape.yMm);
   p.save();
   if (shape.rotateDeg !== 0) p.rotate(shape.rotateDeg, { origin: [xPt, yPt] });
-  p.font(font, sizePt).text(shape.text, xPt + ANCHOR_SHIFT[shape.anchor] * widthPt, yPt, {
+  // The face name is pdfkit's cache key: without it every call would embed-check the font anew.
+  p.font(font, `rimscale-${face}`, sizePt).text(shape.text, xPt + ANCHOR_SHIFT[shape.anchor] * widthPt, yPt, {
     lineBreak: false,
     baseline: 'alphabetic',
   });

@@ -23,7 +23,7 @@ export type Painter = {
   fill(color?: string | number[]): Painter;
   fillAndStroke(fillColor?: string | number[], strokeColor?: string | number[]): Painter;
   clip(rule?: 'nonzero' | 'even-odd'): Painter;
-  font(font: unknown, sizePt?: number): Painter;
+  font(font: unknown, cacheKey: string, sizePt: number): Painter;
   fontSize(sizePt: number): Painter;
   text(text: string, xPt: number, yPt: number, options?: { lineBreak?: boolean; baseline?: 'alphabetic' }): Painter;
 };
