@@ -52,8 +52,9 @@ function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): S
 }
 
 function infoBlock(content: InfoContent, req: SheetRequest, correctedWidthMm: number): Block {
-  // Half a millimetre of slack for the outline strokes at the panel edge.
-  const panel = infoPanel(content, (correctedWidthMm - 0.5) * req.printerScaleX);
+  // Pre-scaling moves text but keeps its size, so when x shrinks (scale > 1) text can reach as far
+  // as its true width: lay out at min(1, scale) × the room, less half a millimetre for edge strokes.
+  const panel = infoPanel(content, (correctedWidthMm - 0.5) * Math.min(1, req.printerScaleX));
   return correctedBlock(panel.shapes, req, 0);
 }
 

@@ -41,10 +41,10 @@ export type StripLayout = { rows: Shape[][]; keptLevels: GraduationLevel[]; stri
 
 const LETTERS = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ';
 
-/** The crank span of a window [from, to], crank order from → to through 0; equal ends mean a whole turn. */
+/** The crank span of a window [from, to], crank order from → to through 0; equal (or all but equal) ends mean a whole turn. */
 export function windowSpanDeg([fromDeg, toDeg]: readonly [number, number]): number {
   const span = normalizeDeg(toDeg - fromDeg);
-  return span === 0 ? 360 : span;
+  return span < 1e-6 || span > 360 - 1e-6 ? 360 : span;
 }
 
 /** Where the strip starts along the rotation, and how many degrees it covers. */
@@ -252,7 +252,7 @@ function rowLabels(req: SheetRequest, plan: StripPlan, segment: StripSegment, in
   shapes.push(...arrow(arrowStart, inStripY, arrowStart + arrowLength, inStripY, Math.min(1.4, w * 0.18), tag({ role: 'rotation-arrow' })));
   if (segment.extension === 'overlap') {
     const next = plan.segments[index + 1]!.letter;
-    shapes.push(text(segment.markedMm + 0.6, baseline, `join ${segment.letter}→${next}`, TEXT_MM.small, { data: tag({ role: 'join-label' }) }));
+    shapes.push(text(segment.markedMm - 0.6, baseline, `join ${segment.letter}→${next}`, TEXT_MM.small, { anchor: 'end', data: tag({ role: 'join-label' }) }));
   }
   if (segment.extension === 'tail') {
     const size = Math.min(2, w * 0.3);
