@@ -6,8 +6,8 @@ import { renderSvg } from '@/lib/sheet/render-svg';
 import { planStrip, STRIP_OVERLAP_MM, stripRange, windowSpanDeg } from '@/lib/sheet/strip-layout';
 import { FIXED_DATE, isTick, lines, n, parseSvg, req, type Line } from './svg-measure';
 
-function stripSvg(input: Parameters<typeof req>[0]) {
-  const drawing = buildDrawing(req({ kind: 'strip', ...input }), { date: FIXED_DATE });
+function stripSvg(input: Omit<Parameters<typeof req>[0], 'kind'>) {
+  const drawing = buildDrawing(req({ ...input, kind: 'strip' }), { date: FIXED_DATE });
   return { drawing, svg: parseSvg(renderSvg(drawing)) };
 }
 
