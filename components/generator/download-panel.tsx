@@ -1,0 +1,107 @@
+'use client';
+
+import Link from 'next/link';
+import { useState } from 'react';
+import { describeScale } from '@/lib/printer-profile';
+import type { FieldIssue, SheetRequest } from '@/lib/sheet/sheet-request';
+import { usePrinterProfiles } from '@/components/printer-check/use-printer-profiles';
+import { downloadSheet } from './download-sheet';
+import { inputClass } from './fields';
+
+type Status = { kind: 'idle' } | { kind: 'busy'; format: string } | { kind: 'saved'; fileName: string } | { kind: 'error'; error: string; issues: FieldIssue[] };
+
+const NO_CORRECTION = '';
+
+/**
+ * "Download PDF" / "Download SVG": validates the form (the same schema), adds the
+ * chosen printer profile's correction and saves the API's answer.
+ */
+export function DownloadPanel({
+  validate,
+}: {
+  validate: (onValid: (request: SheetRequest) => void, onInvalid: () => void) => Promise<void>;
+}) {
+  const profiles = usePrinterProfiles();
+  const [chosenId, setChosenId] = useState<string | undefined>(undefined);
+  const [status, setStatus] = useState<Status>({ kind: 'idle' });
+  // Until the user chooses, the newest profile is offered: it was made for this printer.
+  const selectedId = chosenId ?? profiles[0]?.id ?? NO_CORRECTION;
+  const profile = profiles.find((p) => p.id === selectedId);
+
+  const download = (format: 'pdf' | 'svg') =>
+    validate(async (request) => {
+      setStatus({ kind: 'busy', format });
+      const correction = profile
+        ? { printerScaleX: profile.printerScaleX, printerScaleY: profile.printerScaleY, printerProfileName: profile.name }
+        : { printerScaleX: 1, printerScaleY: 1, printerProfileName: undefined };
+      const result = await downloadSheet({ ...request, ...correction, format });
+      setStatus(result.ok ? { kind: 'saved', fileName: result.fileName } : { kind: 'error', error: result.error, issues: result.issues });
+    }, () => setStatus({ kind: 'error', error: 'Some fields need attention first: see the messages beside them.', issues: [] }));
+
+  return (
+    <section aria-labelledby="download-heading" className="space-y-3 rounded-lg border border-steel-200 bg-white p-4 dark:border-steel-800 dark:bg-steel-900">
+      <h2 id="download-heading" className="text-xs font-bold uppercase tracking-[0.14em] text-steel-600 dark:text-steel-300">
+        Download
+      </h2>
+      <div className="space-y-1">
+        <label htmlFor="printer-profile" className="block text-sm font-medium text-steel-800 dark:text-steel-200">
+          Printer correction
+        </label>
+        <select id="printer-profile" value={selectedId} onChange={(e) => setChosenId(e.target.value)} className={inputClass} aria-describedby="printer-profile-help">
+          <option value={NO_CORRECTION}>No correction</option>
+          {profiles.map((p) => (
+            <option key={p.id} value={p.id}>
+              {p.name} ({describeScale(p)})
+            </option>
+          ))}
+        </select>
+        <p id="printer-profile-help" className="text-xs text-steel-500 dark:text-steel-400">
+          {profiles.length === 0 ? (
+            <>
+              No printer profile yet. <Link href="/printer-check" className="text-gauge-600 underline underline-offset-2">Check your printer</Link> to correct a
+              printer that prints slightly large or small.
+            </>
+          ) : (
+            'The sheet is pre-scaled so this printer prints it true to size; the title block names the profile.'
+          )}
+        </p>
+      </div>
+      <div className="flex flex-wrap gap-2">
+        <button
+          type="button"
+          onClick={() => download('pdf')}
+          disabled={status.kind === 'busy'}
+          className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
+        >
+          Download PDF
+        </button>
+        <button
+          type="button"
+          onClick={() => download('svg')}
+          disabled={status.kind === 'busy'}
+          className="rounded-md border border-steel-300 bg-white px-4 py-2 text-sm font-semibold text-steel-800 hover:bg-steel-100 disabled:opacity-60 dark:border-steel-600 dark:bg-steel-900 dark:text-steel-100 dark:hover:bg-steel-800"
+        >
+          Download SVG
+        </button>
+      </div>
+      <div aria-live="polite" className="text-sm">
+        {status.kind === 'busy' ? <p className="text-steel-500">Preparing the {status.format.toUpperCase()}…</p> : null}
+        {status.kind === 'saved' ? <p className="text-steel-600 dark:text-steel-300">Saved {status.fileName}.</p> : null}
+        {status.kind === 'error' ? (
+          <div role="alert" className="rounded-md border border-red-200 bg-red-50 p-3 text-red-800 dark:border-red-900 dark:bg-red-950/40 dark:text-red-300">
+            <p className="font-medium">{status.error}</p>
+            {status.issues.length > 0 ? (
+              <ul className="mt-1 list-disc pl-5 text-xs">
+                {status.issues.map((issue) => (
+                  <li key={`${issue.path}-${issue.message}`}>
+                    <span className="font-mono">{issue.path}</span>: {issue.message}
+                  </li>
+                ))}
+              </ul>
+            ) : null}
+          </div>
+        ) : null}
+      </div>
+    </section>
+  );
+}

@@ -1,0 +1,143 @@
+import { parseNumberList } from '@/lib/generator-prefill';
+import type { PaperName } from '@/lib/sheet/paper';
+import type { PortEvent, SheetKind, SheetRequestInput } from '@/lib/sheet/sheet-request';
+import { MM_PER_INCH } from '@/lib/units';
+
+/**
+ * What the generator form holds, field for field named after the sheet request
+ * schema's keys. Three differences from the request: the advance marks are the
+ * text the user types ("16, 17, 18"), blank pairs mean "none", and the measured
+ * lengths are in the unit of the mm/in toggle. `toSheetRequestInput` turns it
+ * into the request the shared schema validates.
+ */
+
+export type LengthUnit = 'mm' | 'in';
+
+export type GeneratorFormValues = {
+  lengthUnit: LengthUnit;
+  kind: SheetKind;
+  diameterMm: number;
+  hubHoleMm: number;
+  innerDiameterMm: number;
+  outerDiameterMm: number;
+  paperThicknessMm: number;
+  stripWidthMm: number;
+  seamCrankDeg: number;
+  windowCrankDeg: [number, number];
+  fromDeg: number;
+  toDeg: number;
+  stepDeg: number;
+  rotation: 'cw' | 'ccw';
+  carrier: 'rotating' | 'stationary';
+  numbering: 'split' | 'full';
+  advanceMarksDeg: string;
+  advanceBandDeg: [number, number];
+  portEvents: PortEvent[];
+  minPitchMm: number;
+  paper: PaperName;
+  orientation: 'portrait' | 'landscape';
+  title: string;
+  note: string;
+};
+
+/** Lengths that follow the mm/in toggle (the ones measured with calipers). */
+export const LENGTH_FIELDS = ['diameterMm', 'hubHoleMm', 'innerDiameterMm', 'outerDiameterMm', 'stripWidthMm'] as const;
+type LengthField = (typeof LENGTH_FIELDS)[number];
+
+type RequestField = Exclude<keyof GeneratorFormValues, 'lengthUnit'>;
+const SCALE_FIELDS: RequestField[] = ['rotation', 'carrier', 'numbering', 'advanceMarksDeg', 'advanceBandDeg', 'portEvents', 'minPitchMm'];
+const COMMON_FIELDS: RequestField[] = ['kind', 'paper', 'orientation', 'title', 'note'];
+
+/** The fields each kind of sheet uses; the others are not sent, so a stale hidden value cannot block a sheet. */
+export const FIELDS_BY_KIND: Record<SheetKind, RequestField[]> = {
+  wheel: [...COMMON_FIELDS, 'diameterMm', 'hubHoleMm', ...SCALE_FIELDS],
+  ring: [...COMMON_FIELDS, 'innerDiameterMm', 'outerDiameterMm', ...SCALE_FIELDS],
+  strip: [...COMMON_FIELDS, 'diameterMm', 'paperThicknessMm', 'stripWidthMm', 'seamCrankDeg', 'windowCrankDeg', ...SCALE_FIELDS],
+  scribe: [...COMMON_FIELDS, 'diameterMm', 'fromDeg', 'toDeg', 'stepDeg'],
+  check: COMMON_FIELDS,
+};
+
+export function usesField(kind: SheetKind, field: RequestField): boolean {
+  return FIELDS_BY_KIND[kind].includes(field);
+}
+
+export const DEFAULT_FORM_VALUES: GeneratorFormValues = {
+  lengthUnit: 'mm',
+  kind: 'wheel',
+  diameterMm: 120,
+  hubHoleMm: 0,
+  innerDiameterMm: 112,
+  outerDiameterMm: 150,
+  paperThicknessMm: 0.1,
+  stripWidthMm: 12,
+  seamCrankDeg: 180,
+  windowCrankDeg: [Number.NaN, Number.NaN],
+  fromDeg: 0,
+  toDeg: 40,
+  stepDeg: 1,
+  rotation: 'cw',
+  carrier: 'rotating',
+  numbering: 'split',
+  advanceMarksDeg: '',
+  advanceBandDeg: [Number.NaN, Number.NaN],
+  portEvents: [],
+  minPitchMm: 0.6,
+  paper: 'A4',
+  orientation: 'portrait',
+  title: '',
+  note: '',
+};
+
+const roundTo = (value: number, places: number) => Math.round(value * 10 ** places) / 10 ** places;
+
+function lengthToMm(value: number, unit: LengthUnit): number {
+  return unit === 'in' && Number.isFinite(value) ? roundTo(value * MM_PER_INCH, 6) : value;
+}
+
+/** Converts the measured lengths shown in the form when the mm/in toggle flips. */
+export function convertLengths(values: GeneratorFormValues, to: LengthUnit): Pick<GeneratorFormValues, LengthField> {
+  const converted = {} as Pick<GeneratorFormValues, LengthField>;
+  for (const field of LENGTH_FIELDS) {
+    const value = values[field];
+    if (!Number.isFinite(value) || values.lengthUnit === to) converted[field] = value;
+    else converted[field] = to === 'in' ? roundTo(value / MM_PER_INCH, 4) : roundTo(value * MM_PER_INCH, 3);
+  }
+  return converted;
+}
+
+function pairOrNone(pair: [number, number] | undefined): [number, number] | undefined {
+  if (!pair) return undefined;
+  const [from, to] = pair;
+  const blank = (value: number) => value === undefined || value === null || Number.isNaN(value);
+  return blank(from) && blank(to) ? undefined : [from, to];
+}
+
+/** The sheet request for the shared schema: mm, only the chosen kind's fields, parsed lists. */
+export function toSheetRequestInput(values: GeneratorFormValues): SheetRequestInput {
+  const request: Record<string, unknown> = {};
+  for (const field of FIELDS_BY_KIND[values.kind] ?? COMMON_FIELDS) {
+    const value = values[field];
+    if ((LENGTH_FIELDS as readonly string[]).includes(field)) request[field] = lengthToMm(value as number, values.lengthUnit);
+    else if (field === 'advanceMarksDeg') request[field] = parseNumberList(String(value ?? ''));
+    else if (field === 'windowCrankDeg' || field === 'advanceBandDeg') request[field] = pairOrNone(value as [number, number]);
+    else if (field === 'note') request[field] = String(value ?? '').trim() || undefined;
+    else request[field] = value;
+    if (request[field] === undefined) delete request[field];
+  }
+  return request as SheetRequestInput;
+}
+
+/** Form values from the URL prefill (already validated field by field). */
+export function formValuesFromPrefill(prefill: Partial<SheetRequestInput>): GeneratorFormValues {
+  const { advanceMarksDeg, windowCrankDeg, advanceBandDeg, portEvents, ...rest } = prefill;
+  const values = { ...DEFAULT_FORM_VALUES };
+  for (const [key, value] of Object.entries(rest)) {
+    if (value !== undefined && key in values) (values as Record<string, unknown>)[key] = value;
+  }
+  if (advanceMarksDeg) values.advanceMarksDeg = advanceMarksDeg.join(', ');
+  if (windowCrankDeg) values.windowCrankDeg = [...windowCrankDeg];
+  if (advanceBandDeg) values.advanceBandDeg = [...advanceBandDeg];
+  if (portEvents) values.portEvents = portEvents.map((event) => ({ ...event }));
+  if (prefill.kind === 'ring' && prefill.carrier === undefined) values.carrier = 'stationary';
+  return values;
+}

@@ -1,0 +1,339 @@
+'use client';
+
+import { useEffect, useRef } from 'react';
+import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
+import { PAPER_NAMES } from '@/lib/sheet/paper';
+import type { IgnoredParam } from '@/lib/generator-prefill';
+import type { SheetKind, SheetRequest } from '@/lib/sheet/sheet-request';
+import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
+import { convertLengths, toSheetRequestInput, usesField, LENGTH_FIELDS, type GeneratorFormValues, type LengthUnit } from './form-values';
+import { generatorResolver } from './generator-resolver';
+import { DownloadPanel } from './download-panel';
+import { PortEventsField } from './port-events-field';
+import { SheetPreview } from './sheet-preview';
+import { PrintAtActualSize, SafetyPanel } from './safety-panel';
+
+const KIND_OPTIONS = [
+  { value: 'wheel', label: 'Degree wheel', hint: 'A disc for the flywheel face' },
+  { value: 'ring', label: 'Flange ring', hint: 'A ring for the magneto flange or stator plate' },
+  { value: 'strip', label: 'Rim strip', hint: 'A tape around the flywheel rim' },
+  { value: 'scribe', label: 'Scribe chart', hint: 'Distances for marking the flywheel with dividers' },
+  { value: 'check', label: 'Scale check', hint: 'Bars and a card outline to test a printer' },
+] as const;
+
+const DIAMETER_HELP: Partial<Record<SheetKind, React.ReactNode>> = {
+  wheel: (
+    <>
+      Measure the flywheel <strong>face</strong> diameter: across the flat face the disc is stuck to, with calipers.
+    </>
+  ),
+  strip: (
+    <>
+      Measure the flywheel <strong>rim</strong> outer diameter with calipers, where the strip will sit. The strip is π·(D + paper
+      thickness) long.
+    </>
+  ),
+  scribe: 'The diameter of the circle you will mark along: usually the flywheel rim outer diameter.',
+};
+
+/** The sheet generator: form on the left, live preview and downloads on the right. */
+export function GeneratorForm({ defaultValues, ignored }: { defaultValues: GeneratorFormValues; ignored: IgnoredParam[] }) {
+  const form = useForm<GeneratorFormValues, unknown, SheetRequest>({
+    defaultValues,
+    resolver: generatorResolver,
+    mode: 'onChange',
+  });
+  const values = useWatch({ control: form.control }) as GeneratorFormValues;
+  const request = toSheetRequestInput({ ...defaultValues, ...values });
+  useCarrierFollowsKind(form, values.kind);
+
+  const validate = (onValid: (request: SheetRequest) => void, onInvalid: () => void) => form.handleSubmit(onValid, onInvalid)();
+
+  return (
+    <FormProvider {...form}>
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.05fr)]">
+        <form noValidate onSubmit={(e) => e.preventDefault()} aria-label="Sheet settings" className="space-y-4">
+          {ignored.length > 0 ? <IgnoredParams ignored={ignored} /> : null}
+          <FormSection title="Sheet">
+            <ChoiceGroup<GeneratorFormValues> name="kind" legend="What to print" options={KIND_OPTIONS} />
+          </FormSection>
+          {values.kind !== 'check' ? <MeasurementsSection kind={values.kind} unit={values.lengthUnit} /> : null}
+          {usesField(values.kind, 'carrier') ? <ScaleSection numbering={values.numbering} /> : null}
+          {usesField(values.kind, 'advanceMarksDeg') ? <AdvanceSection /> : null}
+          {values.kind === 'scribe' ? <ScribeSection /> : null}
+          <PaperSection kind={values.kind} />
+        </form>
+
+        <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
+          <SheetPreview request={request} />
+          <PrintAtActualSize />
+          <DownloadPanel validate={validate} />
+          <SafetyPanel />
+        </div>
+      </div>
+    </FormProvider>
+  );
+}
+
+/** A disc turns with the flywheel; a flange ring sits still. Switch the carrier with the kind, once per change. */
+function useCarrierFollowsKind(form: ReturnType<typeof useForm<GeneratorFormValues, unknown, SheetRequest>>, kind: SheetKind) {
+  const previous = useRef(kind);
+  useEffect(() => {
+    if (previous.current === kind) return;
+    previous.current = kind;
+    if (kind === 'wheel') form.setValue('carrier', 'rotating');
+    if (kind === 'ring') form.setValue('carrier', 'stationary');
+  }, [form, kind]);
+}
+
+function IgnoredParams({ ignored }: { ignored: IgnoredParam[] }) {
+  return (
+    <div role="status" className="rounded-md border border-spark-400/60 bg-spark-400/10 p-3 text-sm text-steel-800 dark:text-steel-200">
+      <p className="font-medium">Some values in the link were not used:</p>
+      <ul className="mt-1 list-disc pl-5 text-xs">
+        {ignored.map((item, i) => (
+          <li key={`${item.param}-${i}`}>{item.message}</li>
+        ))}
+      </ul>
+    </div>
+  );
+}
+
+function UnitToggle() {
+  const { getValues, setValue, trigger } = useFormContext<GeneratorFormValues>();
+  const unit = useWatch<GeneratorFormValues, 'lengthUnit'>({ name: 'lengthUnit' });
+  const choose = (to: LengthUnit) => {
+    const values = getValues();
+    if (values.lengthUnit === to) return;
+    const converted = convertLengths(values, to);
+    for (const field of LENGTH_FIELDS) setValue(field, converted[field]);
+    setValue('lengthUnit', to);
+    void trigger(LENGTH_FIELDS.filter((field) => getValues(field) !== undefined));
+  };
+  return (
+    <fieldset className="flex items-center gap-1 text-xs">
+      <legend className="sr-only">Length unit</legend>
+      {(['mm', 'in'] as const).map((option) => (
+        <label
+          key={option}
+          className="cursor-pointer rounded border border-steel-300 px-2 py-0.5 font-mono has-[:checked]:border-gauge-600 has-[:checked]:bg-gauge-600 has-[:checked]:text-white has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-gauge-500/40 dark:border-steel-600"
+        >
+          <input type="radio" name="lengthUnit" value={option} checked={unit === option} onChange={() => choose(option)} className="sr-only" />
+          {option}
+        </label>
+      ))}
+    </fieldset>
+  );
+}
+
+function MeasurementsSection({ kind, unit }: { kind: SheetKind; unit: LengthUnit }) {
+  return (
+    <FormSection title="Measurements" aside={<UnitToggle />}>
+      {kind === 'ring' ? (
+        <div className="grid gap-4 sm:grid-cols-2">
+          <NumberField<GeneratorFormValues>
+            name="outerDiameterMm"
+            label="Outer diameter"
+            unit={unit}
+            help="Measure the magneto flange or stator plate diameter with calipers."
+          />
+          <NumberField<GeneratorFormValues>
+            name="innerDiameterMm"
+            label="Inner diameter"
+            unit={unit}
+            help="Inner = flywheel outer diameter + clearance (about 1–2 mm), so the flywheel’s mark reads at the inner edge."
+          />
+        </div>
+      ) : (
+        <div className="grid gap-4 sm:grid-cols-2">
+          <NumberField<GeneratorFormValues> name="diameterMm" label="Diameter" unit={unit} help={DIAMETER_HELP[kind]} className="sm:col-span-2" />
+          {kind === 'wheel' ? (
+            <NumberField<GeneratorFormValues> name="hubHoleMm" label="Hub hole" unit={unit} help="For the crank nut or boss; 0 for none." />
+          ) : null}
+          {kind === 'strip' ? (
+            <>
+              <NumberField<GeneratorFormValues> name="stripWidthMm" label="Strip width" unit={unit} help="6–40 mm; what fits the rim." />
+              <NumberField<GeneratorFormValues>
+                name="paperThicknessMm"
+                label="Paper thickness"
+                unit="mm"
+                step={0.01}
+                help="Office paper ≈ 0.10 mm; label stock 0.15–0.20 mm."
+              />
+            </>
+          ) : null}
+        </div>
+      )}
+    </FormSection>
+  );
+}
+
+function ScaleSection({ numbering }: { numbering: 'split' | 'full' }) {
+  const kind = useWatch<GeneratorFormValues, 'kind'>({ name: 'kind' });
+  return (
+    <FormSection title="Scale">
+      <ChoiceGroup<GeneratorFormValues>
+        name="carrier"
+        legend="Where the scale sits"
+        options={[
+          { value: 'rotating', label: 'Turns with the flywheel', hint: 'Read against a fixed pointer on the casing' },
+          { value: 'stationary', label: 'Fixed to the casing or flange', hint: 'Read against the flywheel’s own mark' },
+        ]}
+        help={
+          <>
+            A disc on the face or a strip on the rim turns with the flywheel; a flange ring or a strip on the casing stays still.{' '}
+            <strong className="text-spark-600">Choosing the wrong one puts the marks after TDC instead of before.</strong>
+          </>
+        }
+      />
+      <ChoiceGroup<GeneratorFormValues>
+        name="rotation"
+        legend="Rotation"
+        options={[
+          { value: 'cw', label: 'Clockwise' },
+          { value: 'ccw', label: 'Counter-clockwise' },
+        ]}
+        help="The way the flywheel turns, as seen from the side the scale is mounted on."
+      />
+      <ChoiceGroup<GeneratorFormValues>
+        name="numbering"
+        legend="Numbering"
+        options={[
+          { value: 'split', label: 'From TDC both ways', hint: '0–180, halves marked BTDC and ATDC: ignition' },
+          { value: 'full', label: 'Full circle', hint: '0–359 in crank order: port timing' },
+        ]}
+      />
+      {numbering === 'full' ? <PortEventsField /> : null}
+      {kind === 'strip' ? <StripLayoutFields /> : null}
+      <NumberField<GeneratorFormValues>
+        name="minPitchMm"
+        label="Minimum legible pitch"
+        unit="mm"
+        step={0.1}
+        help="Graduations closer together than this are left out, and the sheet says which."
+      />
+    </FormSection>
+  );
+}
+
+function StripLayoutFields() {
+  return (
+    <div className="space-y-4">
+      <NumberField<GeneratorFormValues>
+        name="seamCrankDeg"
+        label="Seam at crank angle"
+        unit="°"
+        help="Where the ends of the strip meet. 180 (BDC) keeps the ignition region unbroken."
+      />
+      <PairField
+        name="windowCrankDeg"
+        legend="Window (optional)"
+        unit="°"
+        labels={['From crank angle', 'To crank angle']}
+        help="Only part of the scale, e.g. for a fan-cowl inspection hole. Crank angles: 0 = TDC, x° BTDC = 360 − x, so 40° BTDC to 10° ATDC is 320 to 10. Blank for the whole rim."
+      />
+    </div>
+  );
+}
+
+function AdvanceSection() {
+  return (
+    <FormSection title="Ignition advance">
+      <TextField<GeneratorFormValues>
+        name="advanceMarksDeg"
+        label="Advance marks (° BTDC)"
+        placeholder="16, 17, 18, 19, 20"
+        mono
+        help="Angles before TDC, separated by commas. Each is drawn long and heavy and labelled, e.g. “18° BTDC”. Use the figure from the engine maker’s manual."
+      />
+      <PairField
+        name="advanceBandDeg"
+        legend="Advance band (optional)"
+        unit="° BTDC"
+        labels={['From', 'To']}
+        help="A hatched range that shows on a mono laser printer, e.g. 16 to 20. Blank for none."
+      />
+    </FormSection>
+  );
+}
+
+function ScribeSection() {
+  return (
+    <FormSection title="Chart range">
+      <div className="grid gap-4 sm:grid-cols-3">
+        <NumberField<GeneratorFormValues> name="fromDeg" label="From" unit="°" />
+        <NumberField<GeneratorFormValues> name="toDeg" label="To" unit="°" />
+        <NumberField<GeneratorFormValues> name="stepDeg" label="Step" unit="°" step={0.1} />
+      </div>
+      <p className="text-xs text-steel-500 dark:text-steel-400">
+        Each row gives the arc length along the rim from TDC (π·D·θ/360) and the chord (D·sin(θ/2)) to 0.01 mm, for setting dividers.
+      </p>
+    </FormSection>
+  );
+}
+
+function PaperSection({ kind }: { kind: SheetKind }) {
+  return (
+    <FormSection title={kind === 'check' ? 'Paper' : 'Paper and title'}>
+      <div className="grid gap-4 sm:grid-cols-2">
+        <SelectField<GeneratorFormValues> name="paper" label="Paper" options={PAPER_NAMES.map((name) => ({ value: name, label: name }))} />
+        <SelectField<GeneratorFormValues>
+          name="orientation"
+          label="Orientation"
+          options={[
+            { value: 'portrait', label: 'Portrait' },
+            { value: 'landscape', label: 'Landscape' },
+          ]}
+        />
+      </div>
+      <TextField<GeneratorFormValues> name="title" label="Title" maxLength={80} placeholder="e.g. Bench engine, left side" help="Printed in the title block." />
+      <TextField<GeneratorFormValues> name="note" label="Note (optional)" maxLength={200} />
+    </FormSection>
+  );
+}
+
+function PairField({
+  name,
+  legend,
+  unit,
+  labels,
+  help,
+}: {
+  name: 'windowCrankDeg' | 'advanceBandDeg';
+  legend: string;
+  unit: string;
+  labels: [string, string];
+  help: string;
+}) {
+  const { register } = useFormContext<GeneratorFormValues>();
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <fieldset className="space-y-1" aria-describedby={`${id}-help ${id}-error`}>
+      <legend className="mb-1 text-sm font-medium text-steel-800 dark:text-steel-200">{legend}</legend>
+      <div className="grid grid-cols-2 gap-3">
+        {([0, 1] as const).map((index) => (
+          <div key={index} className="space-y-1">
+            <label htmlFor={`${id}-${index}`} className="block text-xs text-steel-600 dark:text-steel-300">
+              {labels[index]}
+            </label>
+            <div className="relative">
+              <input
+                id={`${id}-${index}`}
+                type="number"
+                step="any"
+                aria-invalid={error ? true : undefined}
+                aria-describedby={`${id}-help ${id}-error`}
+                className={`${inputClass} pr-16 font-mono`}
+                {...register(`${name}.${index}`, { valueAsNumber: true })}
+              />
+              <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center font-mono text-xs text-steel-500">{unit}</span>
+            </div>
+          </div>
+        ))}
+      </div>
+      <HelpText id={`${id}-help`}>{help}</HelpText>
+      <FieldErrorText id={`${id}-error`} message={error} />
+    </fieldset>
+  );
+}

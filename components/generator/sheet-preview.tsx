@@ -1,0 +1,132 @@
+'use client';
+
+import { useEffect, useRef, useState } from 'react';
+import { previewSheet } from '@/app/actions/sheet-preview';
+import { sheetRequestSchema, toFieldIssues, type FieldIssue, type SheetRequestInput } from '@/lib/sheet/sheet-request';
+
+const DEBOUNCE_MS = 250;
+
+type PreviewState =
+  | { status: 'idle' }
+  | { status: 'ready'; svg: string; warnings: string[]; pageCount: number; widthMm: number; heightMm: number }
+  | { status: 'invalid'; issues: FieldIssue[] }
+  | { status: 'failed'; message: string };
+
+/** The drawing's size from the root's width/height attributes ("123.4mm"). */
+export function svgSizeMm(svg: string): { widthMm: number; heightMm: number } {
+  const root = /<svg\b[^>]*>/.exec(svg)?.[0] ?? '';
+  const read = (attr: string) => Number(new RegExp(`\\s${attr}="([\\d.]+)mm"`).exec(root)?.[1] ?? Number.NaN);
+  const widthMm = read('width');
+  const heightMm = read('height');
+  return Number.isFinite(widthMm) && Number.isFinite(heightMm) && widthMm > 0 && heightMm > 0 ? { widthMm, heightMm } : { widthMm: 210, heightMm: 297 };
+}
+
+function describePages(pageCount: number, paper: string, orientation: string): string {
+  if (pageCount <= 1) return `Prints on one page of ${paper} ${orientation}.`;
+  return `Prints on ${pageCount} pages of ${paper} ${orientation}; join the pieces at the marks.`;
+}
+
+/**
+ * A true-proportion preview that follows the form: the request is debounced,
+ * checked with the shared schema in the browser, then drawn by the server action.
+ * Late answers to earlier requests are dropped.
+ */
+export function SheetPreview({ request }: { request: SheetRequestInput }) {
+  const [state, setState] = useState<PreviewState>({ status: 'idle' });
+  const [busy, setBusy] = useState(false);
+  const sequence = useRef(0);
+  const requestKey = JSON.stringify(request);
+
+  useEffect(() => {
+    const ticket = ++sequence.current;
+    const timer = setTimeout(async () => {
+      const input = JSON.parse(requestKey) as SheetRequestInput;
+      const checked = sheetRequestSchema.safeParse({ ...input, format: 'svg' });
+      if (!checked.success) {
+        setState({ status: 'invalid', issues: toFieldIssues(checked.error) });
+        return;
+      }
+      setBusy(true);
+      try {
+        const answer = await previewSheet({ ...input, format: 'svg' });
+        if (ticket !== sequence.current) return;
+        if (answer.ok) setState({ status: 'ready', svg: answer.svg, warnings: answer.warnings, pageCount: answer.pageCount, ...svgSizeMm(answer.svg) });
+        else setState({ status: 'invalid', issues: answer.issues });
+      } catch {
+        if (ticket === sequence.current) setState({ status: 'failed', message: 'The preview could not be drawn. The downloads may still work; try again.' });
+      } finally {
+        if (ticket === sequence.current) setBusy(false);
+      }
+    }, DEBOUNCE_MS);
+    return () => clearTimeout(timer);
+  }, [requestKey]);
+
+  const paper = request.paper ?? 'A4';
+  const orientation = request.orientation ?? 'portrait';
+  const last = state.status === 'ready' ? state : undefined;
+
+  return (
+    <section aria-labelledby="preview-heading" className="space-y-3">
+      <div className="flex items-baseline justify-between gap-3">
+        <h2 id="preview-heading" className="text-xs font-bold uppercase tracking-[0.14em] text-steel-600 dark:text-steel-300">
+          Preview · true proportion
+        </h2>
+        <span className="font-mono text-xs text-steel-500" aria-live="polite">
+          {busy ? 'drawing…' : last ? `${last.widthMm.toFixed(1)} × ${last.heightMm.toFixed(1)} mm` : ''}
+        </span>
+      </div>
+
+      <PaperBox state={state} />
+
+      <div aria-live="polite" className="space-y-2 text-sm">
+        {state.status === 'ready' ? (
+          <p data-testid="page-count" className="font-medium text-steel-800 dark:text-steel-200">
+            {describePages(state.pageCount, paper, orientation)}
+          </p>
+        ) : null}
+        {state.status === 'invalid' ? (
+          <div className="rounded-md border border-red-200 bg-red-50 p-3 text-red-800 dark:border-red-900 dark:bg-red-950/40 dark:text-red-300">
+            <p className="font-medium">The preview waits for these fields:</p>
+            <ul className="mt-1 list-disc pl-5 text-xs">
+              {state.issues.map((issue) => (
+                <li key={`${issue.path}-${issue.message}`}>{issue.message}</li>
+              ))}
+            </ul>
+          </div>
+        ) : null}
+        {state.status === 'failed' ? <p className="text-red-700 dark:text-red-400">{state.message}</p> : null}
+        {state.status === 'ready' && state.warnings.length > 0 ? (
+          <div className="rounded-md border border-spark-400/60 bg-spark-400/10 p-3 text-steel-800 dark:text-steel-200">
+            <p className="text-xs font-bold uppercase tracking-wider text-spark-600">Layout notes</p>
+            <ul data-testid="layout-warnings" className="mt-1 list-disc space-y-0.5 pl-5 text-xs">
+              {state.warnings.map((warning) => (
+                <li key={warning}>{warning}</li>
+              ))}
+            </ul>
+          </div>
+        ) : null}
+      </div>
+    </section>
+  );
+}
+
+function PaperBox({ state }: { state: PreviewState }) {
+  if (state.status !== 'ready')
+    return (
+      <div className="sheet-paper flex aspect-[210/297] max-h-[70vh] w-full items-center justify-center rounded-sm border border-steel-300 text-sm text-steel-400 shadow-sm">
+        {state.status === 'idle' ? 'Drawing the preview…' : 'No preview yet'}
+      </div>
+    );
+  const ratio = state.widthMm / state.heightMm;
+  return (
+    <div className="flex justify-center">
+      <div
+        data-testid="sheet-preview"
+        className="sheet-paper overflow-hidden rounded-sm border border-steel-300 shadow-[0_1px_0_#cfd6da,0_8px_24px_-12px_rgba(16,20,23,0.35)] [&>svg]:block [&>svg]:h-auto [&>svg]:w-full"
+        style={{ width: `min(100%, calc(70vh * ${ratio.toFixed(5)}))` }}
+        // The SVG comes from our own renderer, which escapes every text it draws.
+        dangerouslySetInnerHTML={{ __html: state.svg }}
+      />
+    </div>
+  );
+}

@@ -1,0 +1,60 @@
+'use client';
+
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { FormProvider, useForm } from 'react-hook-form';
+import { describeScale, profileFromMeasurement, printerMeasurementSchema, type PrinterMeasurement } from '@/lib/printer-profile';
+import { NumberField, TextField } from '@/components/generator/fields';
+import { saveProfile } from './printer-profile-store';
+
+type MeasurementForm = { name: string; measuredXMm: number; measuredYMm: number };
+
+/** Step 3: the two measured bar lengths become a profile kept in this browser. */
+export function PrinterProfileForm() {
+  const form = useForm<MeasurementForm, unknown, PrinterMeasurement>({
+    resolver: zodResolver(printerMeasurementSchema),
+    defaultValues: { name: '' },
+    mode: 'onTouched',
+  });
+  const [saved, setSaved] = useState<string | undefined>(undefined);
+
+  const onValid = (measurement: PrinterMeasurement) => {
+    const result = profileFromMeasurement(measurement);
+    if (!result.ok) return; // the resolver already ran the same schema
+    const profile = saveProfile(result.profile);
+    setSaved(`Saved “${profile.name}”: ${describeScale(profile)}. The sheet maker now offers it on every download.`);
+    form.reset({ name: '' });
+  };
+
+  return (
+    <FormProvider {...form}>
+      <form noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Printer profile" className="space-y-4">
+        <TextField<MeasurementForm> name="name" label="Profile name" placeholder="e.g. Workshop laser, plain paper" maxLength={60} />
+        <div className="grid gap-4 sm:grid-cols-2">
+          <NumberField<MeasurementForm>
+            name="measuredXMm"
+            label="Horizontal bar measures"
+            unit="mm"
+            step={0.1}
+            placeholder="100.0"
+            help="The 100 mm bar that runs across the page."
+          />
+          <NumberField<MeasurementForm>
+            name="measuredYMm"
+            label="Vertical bar measures"
+            unit="mm"
+            step={0.1}
+            placeholder="100.0"
+            help="The 100 mm bar that runs down the page."
+          />
+        </div>
+        <button type="submit" className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700">
+          Save profile
+        </button>
+        <p aria-live="polite" className="text-sm text-steel-700 dark:text-steel-200">
+          {saved ?? ''}
+        </p>
+      </form>
+    </FormProvider>
+  );
+}

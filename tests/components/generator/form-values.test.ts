@@ -1,0 +1,64 @@
+import { describe, expect, it } from 'vitest';
+import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
+import { DEFAULT_FORM_VALUES, convertLengths, formValuesFromPrefill, toSheetRequestInput } from '@/components/generator/form-values';
+
+// 1 in = 25.4 mm exactly (international inch, 1959). Field ranges from the shared sheet schema.
+
+describe('toSheetRequestInput', () => {
+  it('converts inch lengths to mm before validation: 4 in → 101.6 mm, 0.5 in → 12.7 mm', () => {
+    const request = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'strip', lengthUnit: 'in', diameterMm: 4, stripWidthMm: 0.5 });
+    expect(request.diameterMm).toBeCloseTo(101.6, 9);
+    expect(request.stripWidthMm).toBeCloseTo(12.7, 9);
+    expect(request.paperThicknessMm).toBe(0.1); // paper thickness is always entered in mm
+  });
+
+  it('sends only the fields of the chosen kind', () => {
+    const ring = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'ring', diameterMm: 9999 });
+    expect(ring).not.toHaveProperty('diameterMm');
+    expect(ring).toMatchObject({ innerDiameterMm: 112, outerDiameterMm: 150 });
+    expect(sheetRequestSchema.safeParse(ring).success).toBe(true);
+    const check = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'check', diameterMm: Number.NaN });
+    expect(Object.keys(check).sort()).toEqual(['kind', 'orientation', 'paper', 'title']);
+  });
+
+  it('parses the advance-mark list and leaves bad entries for the schema to name', () => {
+    const request = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, advanceMarksDeg: '16, 18,x' });
+    expect(request.advanceMarksDeg?.slice(0, 2)).toEqual([16, 18]);
+    const result = sheetRequestSchema.safeParse(request);
+    expect(result.success).toBe(false);
+    expect(result.error?.issues[0]?.message).toMatch(/Advance mark \(advanceMarksDeg\) must be a number, 0–60° BTDC/);
+  });
+
+  it('treats a blank window or band as none, and a half-filled one as an error', () => {
+    expect(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'strip' }).windowCrankDeg).toBeUndefined();
+    const half = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, advanceBandDeg: [16, Number.NaN] });
+    expect(sheetRequestSchema.safeParse(half).error?.issues[0]?.path).toEqual(['advanceBandDeg', 1]);
+  });
+
+  it('an empty diameter (NaN from valueAsNumber) gets the schema message naming field and range', () => {
+    const result = sheetRequestSchema.safeParse(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, diameterMm: Number.NaN }));
+    expect(result.error?.issues[0]?.message).toBe('Diameter (diameterMm) must be a number, 20–600 mm');
+  });
+});
+
+describe('convertLengths', () => {
+  it('turns 101.6 mm into 4 in and back', () => {
+    const inches = convertLengths({ ...DEFAULT_FORM_VALUES, diameterMm: 101.6 }, 'in');
+    expect(inches.diameterMm).toBe(4);
+    const back = convertLengths({ ...DEFAULT_FORM_VALUES, ...inches, lengthUnit: 'in' }, 'mm');
+    expect(back.diameterMm).toBe(101.6);
+  });
+
+  it('leaves blank fields blank', () => {
+    expect(convertLengths({ ...DEFAULT_FORM_VALUES, hubHoleMm: Number.NaN }, 'in').hubHoleMm).toBeNaN();
+  });
+});
+
+describe('formValuesFromPrefill', () => {
+  it('writes the advance list as text and defaults a ring to a stationary carrier', () => {
+    const values = formValuesFromPrefill({ kind: 'ring', advanceMarksDeg: [16, 18.5] });
+    expect(values.advanceMarksDeg).toBe('16, 18.5');
+    expect(values.carrier).toBe('stationary');
+    expect(formValuesFromPrefill({ kind: 'ring', carrier: 'rotating' }).carrier).toBe('rotating');
+  });
+});

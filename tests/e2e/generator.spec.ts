@@ -1,0 +1,161 @@
+import { readFile } from 'node:fs/promises';
+import { expect, test, type Page } from '@playwright/test';
+import { PDFParse } from 'pdf-parse';
+
+const preview = (page: Page) => page.getByTestId('sheet-preview').locator('svg').first();
+const graduations = (page: Page) => page.getByTestId('sheet-preview').locator('svg line[data-level]');
+
+async function svgWidthMm(page: Page): Promise<number> {
+  const width = await preview(page).getAttribute('width');
+  expect(width).toMatch(/^[\d.]+mm$/);
+  return Number.parseFloat(width ?? 'NaN');
+}
+
+/** Page sizes in PDF points via pdf-parse, an independent PDF reader (ISO 32000: 1 pt = 1/72 in). */
+async function pdfPageSizesPt(file: Buffer): Promise<Array<{ width: number; height: number }>> {
+  const parser = new PDFParse({ data: new Uint8Array(file) });
+  try {
+    const info = await parser.getInfo({ parsePageInfo: true });
+    return info.pages.map((p) => ({ width: p.width, height: p.height }));
+  } finally {
+    await parser.destroy();
+  }
+}
+
+test('the preview follows the diameter and the kind as you type', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
+  const diameter = page.getByLabel('Diameter', { exact: true });
+
+  // PRODUCT.md §2: graduations every 0.5° when the pitch allows → 360 / 0.5 = 720 lines on a
+  // 300 mm wheel (0.5° of arc at r ≈ 150 mm is ≈ 1.3 mm, over the 0.6 mm minimum).
+  await diameter.fill('300');
+  await expect(graduations(page)).toHaveCount(720, { timeout: 15_000 });
+
+  // On a 30 mm wheel 1° of arc at r ≤ 15 mm is ≤ 0.26 mm (< 0.6 mm), so only the 10° and 5°
+  // levels remain: 360 / 5 = 72 lines, and the sheet says which levels were dropped.
+  await diameter.fill('30');
+  await expect(graduations(page)).toHaveCount(72, { timeout: 15_000 });
+  await expect(page.getByTestId('layout-warnings')).toBeVisible();
+
+  // A rim strip for D = 100 mm, t = 0.10 mm: 1° along π·(D + t) is π·100.1 / 360 ≈ 0.874 mm (kept, ≥ 0.6 mm)
+  // and 0.5° is ≈ 0.437 mm (dropped), so the graduations sit at 360 distinct crank angles (PRODUCT.md §2–3).
+  await page.getByRole('radio', { name: /^Rim strip/ }).check();
+  await expect(page.getByLabel('Strip width')).toBeVisible();
+  await diameter.fill('100');
+  await expect(preview(page).locator('title')).toHaveText(/Rim strip/, { timeout: 15_000 });
+  const distinctAngles = () =>
+    graduations(page).evaluateAll((lines) => new Set(lines.map((line) => line.getAttribute('data-crank-deg'))).size);
+  await expect.poll(distinctAngles, { timeout: 15_000 }).toBe(360);
+  await expect(graduations(page).and(page.locator('[data-level="0.5"]'))).toHaveCount(0);
+  await expect(page.getByTestId('page-count')).toContainText(/^Prints on (one page|\d+ pages) of A4 portrait/);
+
+  // A 400 mm disc cannot fit A4's printable 198 × 285 mm (ISO 216 210 × 297 less 6 mm margins): tiled.
+  await page.getByRole('radio', { name: /^Degree wheel/ }).check();
+  await diameter.fill('400');
+  await expect(page.getByTestId('page-count')).toHaveText(/^Prints on ([2-9]|\d{2,}) pages of A4 portrait; join the pieces at the marks\.$/, {
+    timeout: 15_000,
+  });
+});
+
+test('4 in typed with the inch toggle draws the same sheet as 101.6 mm', async ({ page }) => {
+  await page.goto('/');
+  const diameter = page.getByLabel('Diameter', { exact: true });
+  await diameter.fill('101.6');
+  await expect(preview(page).locator('title')).toHaveText(/101\.6 mm/, { timeout: 15_000 });
+  const inMm = await preview(page).evaluate((svg) => svg.outerHTML);
+
+  await page.getByRole('radio', { name: 'in', exact: true }).check({ force: true });
+  // 101.6 mm ÷ 25.4 mm/in (international inch) = 4 in exactly.
+  await expect(diameter).toHaveValue('4');
+  await diameter.fill('5');
+  await expect.poll(() => preview(page).evaluate((svg) => svg.outerHTML), { timeout: 15_000 }).not.toBe(inMm);
+  await diameter.fill('4');
+  // The server draws from millimetres only, so 4 in must give exactly the 101.6 mm drawing.
+  await expect.poll(() => preview(page).evaluate((svg) => svg.outerHTML), { timeout: 15_000 }).toBe(inMm);
+});
+
+test('a 700 mm diameter is refused beside the field with the schema’s range', async ({ page }) => {
+  await page.goto('/');
+  const diameter = page.getByLabel('Diameter', { exact: true });
+  await diameter.fill('700');
+  const errorId = (await diameter.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
+  expect(errorId).toBeTruthy();
+  const error = page.locator(`[id="${errorId}"]`);
+  await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
+  await expect(error).toHaveAttribute('aria-live', 'polite');
+  await expect(diameter).toHaveAttribute('aria-invalid', 'true');
+
+  // An empty field gets the schema's message too, never NaN.
+  await diameter.fill('');
+  await expect(error).toHaveText(/Diameter \(diameterMm\) must be a number, 20–600 mm/);
+  await expect(page.getByText('NaN')).toHaveCount(0);
+
+  // Downloading with the bad field keeps the user on the form with a message.
+  await page.getByRole('button', { name: 'Download PDF' }).click();
+  await expect(page.getByRole('region', { name: 'Download' }).getByRole('alert')).toContainText('Some fields need attention');
+});
+
+test('Download PDF gives a PDF of the chosen page size (Letter landscape = 792 × 612 pt)', async ({ page }) => {
+  await page.goto('/');
+  await page.getByLabel('Diameter', { exact: true }).fill('110');
+  await page.getByLabel('Advance marks (° BTDC)').fill('16, 17, 18, 19, 20');
+  await page.getByLabel('Paper', { exact: true }).selectOption('Letter');
+  await page.getByLabel('Orientation').selectOption('landscape');
+  await expect(graduations(page).first()).toBeAttached({ timeout: 15_000 });
+  // Five advance marks in the preview, one per angle in the list.
+  await expect(page.getByTestId('sheet-preview').locator('svg [data-advance-deg]')).not.toHaveCount(0);
+
+  const downloadPromise = page.waitForEvent('download');
+  await page.getByRole('button', { name: 'Download PDF' }).click();
+  const download = await downloadPromise;
+  expect(download.suggestedFilename()).toMatch(/\.pdf$/);
+  const file = await readFile((await download.path()) as string);
+  expect(file.subarray(0, 5).toString('latin1')).toBe('%PDF-'); // ISO 32000-1 §7.5.2 file header
+  // ANSI Letter is 8.5 × 11 in; ISO 32000 user space unit 1/72 in → 612 × 792 pt, landscape 792 × 612.
+  const sizes = await pdfPageSizesPt(file);
+  expect(sizes.length).toBeGreaterThan(0);
+  for (const size of sizes) {
+    expect(size.width).toBeCloseTo(792, 1);
+    expect(size.height).toBeCloseTo(612, 1);
+  }
+});
+
+test('Download SVG gives a true-scale SVG file in millimetres', async ({ page }) => {
+  await page.goto('/');
+  await page.getByRole('radio', { name: /^Flange ring/ }).check();
+  await page.getByLabel('Outer diameter').fill('160');
+  await page.getByLabel('Inner diameter').fill('121');
+  await expect(graduations(page).first()).toBeAttached({ timeout: 15_000 });
+  const downloadPromise = page.waitForEvent('download');
+  await page.getByRole('button', { name: 'Download SVG' }).click();
+  const download = await downloadPromise;
+  expect(download.suggestedFilename()).toMatch(/\.svg$/);
+  const text = await readFile((await download.path()) as string, 'utf8');
+  // The SVG root carries width/height in mm (CSS/SVG absolute unit) so editors and cutters keep scale.
+  expect(text).toMatch(/<svg\b[^>]*\swidth="[\d.]+mm"/);
+  expect(text).toMatch(/data-crank-deg=/);
+});
+
+test('a link prefills the form and reports the values it could not use', async ({ page }) => {
+  const events = encodeURIComponent('[{"name":"Exhaust","opensCrankDeg":97,"closesCrankDeg":263}');
+  await page.goto(`/?kind=strip&diameterMm=130&numbering=full&advanceMarksDeg=16,18,75&portEvents=${events}`);
+  await expect(page.getByRole('radio', { name: /^Rim strip/ })).toBeChecked();
+  await expect(page.getByLabel('Diameter', { exact: true })).toHaveValue('130');
+  await expect(page.getByLabel('Advance marks (° BTDC)')).toHaveValue('16, 18');
+  await expect(page.getByRole('radio', { name: /^Full circle/ })).toBeChecked();
+  const notice = page.getByRole('status').filter({ hasText: 'not used' });
+  await expect(notice).toContainText('Port events (portEvents) are not valid JSON');
+  await expect(notice).toContainText('60° BTDC');
+
+  await page.goto(`/?kind=wheel&numbering=full&portEvents=${encodeURIComponent('[{"name":"Exhaust","opensCrankDeg":97,"closesCrankDeg":263}]')}`);
+  await expect(page.getByLabel('Port 1 name')).toHaveValue('Exhaust');
+  await expect(page.getByLabel('Port 1 opening angle')).toHaveValue('97');
+});
+
+test('the page shows the print-size line and the safety cautions', async ({ page }) => {
+  await page.goto('/');
+  await expect(page.getByText('Print at 100 % / actual size — turn off fit-to-page')).toBeVisible();
+  await expect(page.getByText(/Take the plug lead off/)).toBeVisible();
+  await expect(page.getByText(/hole a piston/)).toBeVisible();
+});
