@@ -12,7 +12,8 @@ import { withWorkerGlobal } from './pdfjs-worker-global';
 export const MM_PER_PT = 25.4 / 72;
 
 export type Segment = { x1Mm: number; y1Mm: number; x2Mm: number; y2Mm: number };
-export type PageGeometry = { widthPt: number; heightPt: number; segments: Segment[] };
+/** Curve end points (circles and ellipses are drawn as four Bézier arcs meeting on their axes). */
+export type PageGeometry = { widthPt: number; heightPt: number; segments: Segment[]; curveEndsMm: Array<[number, number]> };
 
 type Matrix = [number, number, number, number, number, number];
 
@@ -22,6 +23,12 @@ const DRAW_LINE_TO = 1;
 const DRAW_CURVE_TO = 2;
 const DRAW_QUADRATIC_CURVE_TO = 3;
 const DRAW_CLOSE_PATH = 4;
+
+/** pdfjs passes a text matrix either as six numbers or as one typed array of six. */
+function matrixArg(args: unknown[]): Matrix {
+  const first = args[0];
+  return (typeof first === 'number' ? args : Array.from(first as ArrayLike<number>)) as Matrix;
+}
 
 /** m × ctm: the `cm` operator pre-multiplies the current matrix (ISO 32000-1 §8.4.4). */
 function multiply(m: Matrix, ctm: Matrix): Matrix {
@@ -34,7 +41,7 @@ function apply([a, b, c, d, e, f]: Matrix, x: number, y: number): [number, numbe
   return [a * x + c * y + e, b * x + d * y + f];
 }
 
-function segmentsOfPath(path: ArrayLike<number>, ctm: Matrix, heightPt: number): Segment[] {
+function segmentsOfPath(path: ArrayLike<number>, ctm: Matrix, heightPt: number, curveEndsMm: Array<[number, number]>): Segment[] {
   const toMm = (x: number, y: number): [number, number] => {
     const [px, py] = apply(ctm, x, y);
     return [px * MM_PER_PT, (heightPt - py) * MM_PER_PT];
@@ -53,7 +60,8 @@ function segmentsOfPath(path: ArrayLike<number>, ctm: Matrix, heightPt: number):
       current = next;
       i += 3;
     } else if (op === DRAW_CURVE_TO) {
-      current = toMm(path[i + 5]!, path[i + 6]!); // curves (circles) are not measured as segments
+      current = toMm(path[i + 5]!, path[i + 6]!);
+      curveEndsMm.push(current);
       i += 7;
     } else if (op === DRAW_QUADRATIC_CURVE_TO) {
       current = toMm(path[i + 3]!, path[i + 4]!);
@@ -94,6 +102,7 @@ export async function readPdfGeometry(data: Uint8Array): Promise<PageGeometry[]>
       const [, , widthPt, heightPt] = page.view as [number, number, number, number];
       const list = await page.getOperatorList();
       const segments: Segment[] = [];
+      const curveEndsMm: Array<[number, number]> = [];
       let ctm: Matrix = [1, 0, 0, 1, 0, 0];
       const stack: Matrix[] = [];
       list.fnArray.forEach((fn, index) => {
@@ -103,10 +112,10 @@ export async function readPdfGeometry(data: Uint8Array): Promise<PageGeometry[]>
         else if (fn === OPS.transform) ctm = multiply(args as Matrix, ctm);
         else if (fn === OPS.constructPath) {
           const [paintOp, [path]] = args as [number, [ArrayLike<number> | null]];
-          if (path && PAINTING_OPS.has(paintOp)) segments.push(...segmentsOfPath(path, ctm, heightPt));
+          if (path && PAINTING_OPS.has(paintOp)) segments.push(...segmentsOfPath(path, ctm, heightPt, curveEndsMm));
         }
       });
-      pages.push({ widthPt, heightPt, segments });
+      pages.push({ widthPt, heightPt, segments, curveEndsMm });
     }
     return pages;
   } finally {
@@ -128,4 +137,70 @@ export function nearestSegment(segments: Segment[], x1Mm: number, y1Mm: number, 
     if (!best || distanceMm < best.distanceMm) best = { segment, distanceMm };
   }
   return best;
+}
+
+/**
+ * A text run: baseline origin in page millimetres from the top-left, advance width
+ * along the baseline (mm) and the baseline's direction, clockwise degrees with y down.
+ */
+export type TextItem = { text: string; xMm: number; yMm: number; widthMm: number; angleDeg: number; page: number };
+
+type Glyph = { unicode: string; width: number } | number | null;
+
+/**
+ * Each show-text operation as the operator list has it, one run per TJ/Tj (pdfjs's
+ * text-content API merges neighbouring runs). The run starts at the text matrix's
+ * origin under the CTM (ISO 32000-1 §9.4.2); its advance is the sum of the glyph
+ * widths from the embedded font's /W array, × font size / 1000, less TJ adjustments.
+ */
+export async function readPdfTextItems(data: Uint8Array): Promise<TextItem[]> {
+  const doc = await openPdf(data);
+  try {
+    const items: TextItem[] = [];
+    for (let n = 1; n <= doc.numPages; n += 1) {
+      const page = await doc.getPage(n);
+      const heightPt = (page.view as number[])[3]!;
+      const list = await page.getOperatorList();
+      let ctm: Matrix = [1, 0, 0, 1, 0, 0];
+      const stack: Matrix[] = [];
+      let textMatrix: Matrix = [1, 0, 0, 1, 0, 0];
+      let fontSize = 0;
+      list.fnArray.forEach((fn, index) => {
+        const args = list.argsArray[index] as unknown[];
+        if (fn === OPS.save) stack.push(ctm);
+        else if (fn === OPS.restore) ctm = stack.pop() ?? [1, 0, 0, 1, 0, 0];
+        else if (fn === OPS.transform) ctm = multiply(args as Matrix, ctm);
+        else if (fn === OPS.beginText) textMatrix = [1, 0, 0, 1, 0, 0];
+        else if (fn === OPS.setTextMatrix) textMatrix = matrixArg(args);
+        else if (fn === OPS.moveText) textMatrix = multiply([1, 0, 0, 1, args[0] as number, args[1] as number], textMatrix);
+        else if (fn === OPS.setFont) fontSize = args[1] as number;
+        else if (fn === OPS.showText) {
+          const glyphs = args[0] as Glyph[];
+          let text = '';
+          let advance = 0; // text space units
+          for (const glyph of glyphs) {
+            if (typeof glyph === 'number') advance -= (glyph * fontSize) / 1000;
+            else if (glyph) {
+              text += glyph.unicode;
+              advance += (glyph.width * fontSize) / 1000;
+            }
+          }
+          const m = multiply(textMatrix, ctm);
+          const [x, y] = apply(m, 0, 0);
+          const [xEnd, yEnd] = apply(m, advance, 0);
+          items.push({
+            text,
+            xMm: x * MM_PER_PT,
+            yMm: (heightPt - y) * MM_PER_PT,
+            widthMm: Math.hypot(xEnd - x, yEnd - y) * MM_PER_PT,
+            angleDeg: (Math.atan2(-(yEnd - y), xEnd - x) * 180) / Math.PI, // PDF y is up; the page's y is down
+            page: n,
+          });
+        }
+      });
+    }
+    return items;
+  } finally {
+    await doc.destroy();
+  }
 }

@@ -4,9 +4,9 @@ import type { Drawing } from '@/lib/sheet/drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetRequestSchema, type SheetRequestInput } from '@/lib/sheet/sheet-request';
 import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
-import { nearestSegment, readPdfGeometry, segmentLengthMm, type Segment } from './read-pdf-geometry';
+import { nearestSegment, readPdfGeometry, readPdfTextItems, segmentLengthMm, type Segment } from './read-pdf-geometry';
 import { readPdfText } from './read-pdf-text';
-import { svgLines, type SvgLine } from './svg-lines';
+import { svgLines, svgTexts, type SvgLine } from './svg-lines';
 
 /**
  * Real sheets (buildDrawing → renderSheetPdf), checked against independent readers:
@@ -86,7 +86,58 @@ describe('a 100 mm degree wheel as PDF', () => {
   });
 });
 
+describe('a 100 mm degree wheel as PDF: outline and labels', () => {
+  const input: SheetRequestInput = { kind: 'wheel', diameterMm: 100, hubHoleMm: 20, advanceMarksDeg: [18] };
+
+  it('draws the cut circle 100 mm across and the hub hole 20 mm, about the SVG centre (Bézier arc ends, ± 0.01 mm)', async () => {
+    const { drawing, svg } = sheet(input);
+    const [page] = await readPdfGeometry(await renderSheetPdf(drawing));
+    const [cx, cy] = /data-centre-mm="([\d.]+) ([\d.]+)"/.exec(svg)!.slice(1).map(Number) as [number, number];
+    for (const radiusMm of [50, 10]) {
+      // A circle is four arcs meeting at its top, bottom, left and right points.
+      for (const [x, y] of [[cx + radiusMm, cy], [cx - radiusMm, cy], [cx, cy + radiusMm], [cx, cy - radiusMm]] as const) {
+        const nearest = Math.min(...page!.curveEndsMm.map(([px, py]) => Math.hypot(px - x, py - y)));
+        expect(nearest, `arc end at (${x}, ${y})`).toBeLessThan(0.01);
+      }
+    }
+  });
+
+  it('sets every label on the SVG anchor point and angle (pdfjs text runs, widths from the embedded font)', async () => {
+    const { drawing, svg } = sheet(input);
+    const items = await readPdfTextItems(await renderSheetPdf(drawing));
+    const texts = svgTexts(svg).filter((t) => t.text.trim() !== '');
+    expect(texts.length).toBeGreaterThan(40);
+    const share: Record<string, number> = { start: 0, middle: 0.5, end: 1 };
+    for (const t of texts) {
+      const matches = items.filter((item) => item.text.trim() === t.text.trim());
+      expect(matches.length, `a PDF run for "${t.text}"`).toBeGreaterThan(0);
+      // The SVG anchor lies `share` of the run's width along the baseline from its origin.
+      const distanceMm = Math.min(
+        ...matches.map((item) => {
+          const rad = (item.angleDeg * Math.PI) / 180;
+          const along = share[t.anchor]! * item.widthMm;
+          return Math.hypot(item.xMm + along * Math.cos(rad) - t.x, item.yMm + along * Math.sin(rad) - t.y);
+        }),
+      );
+      expect(distanceMm, `"${t.text}" at (${t.x}, ${t.y})`).toBeLessThan(0.01);
+      const angleOff = Math.min(...matches.map((item) => Math.abs(((item.angleDeg - t.rotateDeg + 540) % 360) - 180)));
+      expect(angleOff, `"${t.text}" turned ${t.rotateDeg}°`).toBeLessThan(0.01);
+    }
+  });
+});
+
 describe('printer correction in the PDF', () => {
+  it('with printerScaleX 0.98 draws a 100 mm wheel as an ellipse 102.04 mm wide and 100 mm high', async () => {
+    const { drawing, svg } = sheet({ kind: 'wheel', diameterMm: 100, printerScaleX: 0.98 });
+    const [page] = await readPdfGeometry(await renderSheetPdf(drawing));
+    const [cx, cy] = /data-centre-mm="([\d.]+) ([\d.]+)"/.exec(svg)!.slice(1).map(Number) as [number, number];
+    const rx = 50 / 0.98; // 51.0204 mm
+    for (const [x, y] of [[cx + rx, cy], [cx - rx, cy], [cx, cy + 50], [cx, cy - 50]] as const) {
+      expect(Math.min(...page!.curveEndsMm.map(([px, py]) => Math.hypot(px - x, py - y)))).toBeLessThan(0.01);
+    }
+  });
+
+
   it('with printerScaleX 0.98 draws the horizontal 100 mm bar 102.04 mm and the vertical one 100 mm', async () => {
     const { drawing, svg } = sheet({ kind: 'check', printerScaleX: 0.98 });
     const segments = await pdfSegmentsInDrawingMm(drawing, await renderSheetPdf(drawing));

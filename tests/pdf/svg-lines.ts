@@ -15,3 +15,20 @@ export function svgLines(svg: string): SvgLine[] {
       return { x1: n('x1'), y1: n('y1'), x2: n('x2'), y2: n('y2'), data };
     });
 }
+
+/** Every <text> of an SVG: anchor point, text-anchor, rotation (degrees, from rotate(θ x y)) and content. */
+export type SvgText = { x: number; y: number; anchor: string; rotateDeg: number; text: string };
+
+export function svgTexts(svg: string): SvgText[] {
+  const doc = new DOMParser().parseFromString(svg, 'image/svg+xml');
+  return Array.from(doc.getElementsByTagName('text')).map((el) => {
+    const rotate = /rotate\(\s*([-\d.e]+)/.exec(el.getAttribute('transform') ?? '');
+    return {
+      x: Number(el.getAttribute('x')),
+      y: Number(el.getAttribute('y')),
+      anchor: el.getAttribute('text-anchor') ?? 'start',
+      rotateDeg: rotate ? Number(rotate[1]) : 0,
+      text: el.textContent ?? '',
+    };
+  });
+}
