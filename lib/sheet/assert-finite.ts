@@ -1,25 +1,47 @@
 import type { Drawing, Shape } from './drawing';
 
+function fail(value: number, where: string): never {
+  throw new Error(`Sheet layout produced a non-finite number (${value}) at ${where}; this is a bug, please report the request`);
+}
+
+function check(value: number | undefined, where: string, field: string): void {
+  if (value !== undefined && !Number.isFinite(value)) fail(value, `${where}.${field}`);
+}
+
+function checkShape(shape: Shape, where: string): void {
+  switch (shape.type) {
+    case 'line':
+      check(shape.x1Mm, where, 'x1Mm'), check(shape.y1Mm, where, 'y1Mm'), check(shape.x2Mm, where, 'x2Mm'), check(shape.y2Mm, where, 'y2Mm'), check(shape.dashMm, where, 'dashMm');
+      break;
+    case 'path':
+      shape.pointsMm.forEach(([x, y], i) => (check(x, where, `pointsMm[${i}][0]`), check(y, where, `pointsMm[${i}][1]`)));
+      break;
+    case 'ellipse':
+      check(shape.cxMm, where, 'cxMm'), check(shape.cyMm, where, 'cyMm'), check(shape.rxMm, where, 'rxMm'), check(shape.ryMm, where, 'ryMm'), check(shape.dashMm, where, 'dashMm');
+      break;
+    case 'rect':
+      check(shape.xMm, where, 'xMm'), check(shape.yMm, where, 'yMm'), check(shape.widthMm, where, 'widthMm'), check(shape.heightMm, where, 'heightMm');
+      break;
+    case 'text':
+      check(shape.xMm, where, 'xMm'), check(shape.yMm, where, 'yMm'), check(shape.sizeMm, where, 'sizeMm'), check(shape.rotateDeg, where, 'rotateDeg');
+      break;
+  }
+  if (shape.type !== 'text') check(shape.strokeMm, where, 'strokeMm');
+  const data = shape.data;
+  if (data) check(data.crankDeg, where, 'data.crankDeg'), check(data.advanceDeg, where, 'data.advanceDeg'), check(data.checkMm, where, 'data.checkMm'), check(data.level, where, 'data.level');
+}
+
 /** Throws a clear error instead of letting NaN or Infinity reach a renderer. */
 export function assertFiniteDrawing(drawing: Drawing): Drawing {
-  const check = (value: unknown, where: string) => {
-    if (typeof value === 'number' && !Number.isFinite(value)) throw new Error(`Sheet layout produced a non-finite number (${value}) at ${where}; this is a bug, please report the request`);
-  };
-  const checkShape = (shape: Shape, where: string) => {
-    for (const [key, value] of Object.entries(shape)) {
-      if (key === 'pointsMm') (value as Array<[number, number]>).forEach(([x, y], i) => (check(x, `${where}.pointsMm[${i}]`), check(y, `${where}.pointsMm[${i}]`)));
-      else if (key === 'data') for (const [dk, dv] of Object.entries(value as object)) check(dv, `${where}.data.${dk}`);
-      else check(value, `${where}.${key}`);
-    }
-  };
-  check(drawing.sizeMm.widthMm, 'sizeMm.widthMm');
-  check(drawing.sizeMm.heightMm, 'sizeMm.heightMm');
-  drawing.centreMm?.forEach((v, i) => check(v, `centreMm[${i}]`));
+  check(drawing.sizeMm.widthMm, 'drawing', 'sizeMm.widthMm');
+  check(drawing.sizeMm.heightMm, 'drawing', 'sizeMm.heightMm');
+  drawing.centreMm?.forEach((v, i) => check(v, 'drawing', `centreMm[${i}]`));
   drawing.shapes.forEach((shape, i) => checkShape(shape, `shapes[${i}] (${shape.type})`));
   drawing.pages.forEach((page, p) => {
-    for (const [key, value] of Object.entries(page.viewportMm)) check(value, `pages[${p}].viewportMm.${key}`);
-    page.originMm.forEach((v, i) => check(v, `pages[${p}].originMm[${i}]`));
-    page.pageShapes.forEach((shape, i) => checkShape(shape, `pages[${p}].pageShapes[${i}]`));
+    const v = page.viewportMm;
+    check(v.xMm, `pages[${p}]`, 'viewportMm.xMm'), check(v.yMm, `pages[${p}]`, 'viewportMm.yMm'), check(v.widthMm, `pages[${p}]`, 'viewportMm.widthMm'), check(v.heightMm, `pages[${p}]`, 'viewportMm.heightMm');
+    page.originMm.forEach((o, i) => check(o, `pages[${p}]`, `originMm[${i}]`));
+    page.pageShapes.forEach((shape, i) => checkShape(shape, `pages[${p}].pageShapes[${i}] (${shape.type})`));
   });
   return drawing;
 }

@@ -1,4 +1,5 @@
 import { cosDeg, sinDeg } from '../angle';
+import { IDENTITY_MAP, type AxisMap } from './affine';
 import type { Shape } from './drawing';
 import { textWidthMm } from './sheet-style';
 
@@ -29,33 +30,37 @@ export function textCornersMm(shape: Extract<Shape, { type: 'text' }>): Array<[n
   ].map(([u, v]) => [shape.xMm + u! * c - v! * s, shape.yMm + u! * s + v! * c] as [number, number]);
 }
 
-/** The box a shape inks, strokes included. */
-export function shapeBox(shape: Shape, box: Box = { ...EMPTY_BOX }): Box {
+/** The box a shape inks, strokes included, after `map` (positions mapped, text sizes kept). */
+export function shapeBox(shape: Shape, box: Box = { ...EMPTY_BOX }, map: AxisMap = IDENTITY_MAP): Box {
+  const { scaleX: sx, scaleY: sy, dxMm: dx, dyMm: dy } = map;
   switch (shape.type) {
     case 'line':
-      grow(box, shape.x1Mm, shape.y1Mm, shape.strokeMm / 2);
-      grow(box, shape.x2Mm, shape.y2Mm, shape.strokeMm / 2);
+      grow(box, sx * shape.x1Mm + dx, sy * shape.y1Mm + dy, shape.strokeMm / 2);
+      grow(box, sx * shape.x2Mm + dx, sy * shape.y2Mm + dy, shape.strokeMm / 2);
       break;
     case 'path':
-      for (const [x, y] of shape.pointsMm) grow(box, x, y, shape.strokeMm / 2);
+      for (const [x, y] of shape.pointsMm) grow(box, sx * x + dx, sy * y + dy, shape.strokeMm / 2);
       break;
     case 'ellipse':
-      grow(box, shape.cxMm - shape.rxMm, shape.cyMm - shape.ryMm, shape.strokeMm / 2);
-      grow(box, shape.cxMm + shape.rxMm, shape.cyMm + shape.ryMm, shape.strokeMm / 2);
+      grow(box, sx * (shape.cxMm - shape.rxMm) + dx, sy * (shape.cyMm - shape.ryMm) + dy, shape.strokeMm / 2);
+      grow(box, sx * (shape.cxMm + shape.rxMm) + dx, sy * (shape.cyMm + shape.ryMm) + dy, shape.strokeMm / 2);
       break;
     case 'rect':
-      grow(box, shape.xMm, shape.yMm, shape.strokeMm / 2);
-      grow(box, shape.xMm + shape.widthMm, shape.yMm + shape.heightMm, shape.strokeMm / 2);
+      grow(box, sx * shape.xMm + dx, sy * shape.yMm + dy, shape.strokeMm / 2);
+      grow(box, sx * (shape.xMm + shape.widthMm) + dx, sy * (shape.yMm + shape.heightMm) + dy, shape.strokeMm / 2);
       break;
-    case 'text':
-      for (const [x, y] of textCornersMm(shape)) grow(box, x, y);
+    case 'text': {
+      const ox = sx * shape.xMm + dx - shape.xMm;
+      const oy = sy * shape.yMm + dy - shape.yMm;
+      for (const [x, y] of textCornersMm(shape)) grow(box, x + ox, y + oy);
       break;
+    }
   }
   return box;
 }
 
-export function shapesBox(shapes: readonly Shape[]): Box {
+export function shapesBox(shapes: readonly Shape[], map: AxisMap = IDENTITY_MAP): Box {
   const box = { ...EMPTY_BOX };
-  for (const shape of shapes) shapeBox(shape, box);
+  for (const shape of shapes) shapeBox(shape, box, map);
   return box.minX <= box.maxX ? box : { minX: 0, minY: 0, maxX: 0, maxY: 0 };
 }

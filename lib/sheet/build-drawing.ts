@@ -1,13 +1,12 @@
 import { assertFiniteDrawing } from './assert-finite';
-import { toBlock, type Block } from './block';
+import { nestBlock, toBlock, type Block } from './block';
 import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
 import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
-import { correctForPrinter, correctPointMm } from './printer-correction';
+import { correctionFactors } from './printer-correction';
 import type { SheetRequest } from './sheet-request';
 import { isoDate, sheetTitle, titleBlockLines } from './sheet-notes';
-import { placeBlock } from './block';
 import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
 import { stripLayout } from './strip-layout';
@@ -17,9 +16,10 @@ export type BuildOptions = { date?: Date; marginMm?: number };
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
 export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
 
-function correctedBlock(shapes: Shape[], req: SheetRequest, padMm: number, centreMm?: [number, number]): Block {
-  const corrected = correctForPrinter(shapes, req);
-  return toBlock(corrected, padMm, centreMm ? correctPointMm(centreMm, req) : undefined);
+/** Pre-scales by the printer correction (before any placing or tiling) and frames the result. */
+function correctedBlock(shapes: readonly Shape[], req: SheetRequest, padMm: number, centreMm?: [number, number]): Block {
+  const { x, y } = correctionFactors(req);
+  return toBlock(shapes, padMm, centreMm, { scaleX: x, scaleY: y, dxMm: 0, dyMm: 0 });
 }
 
 function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): ScaleLayout {
@@ -55,7 +55,7 @@ function infoBlock(content: InfoContent, req: SheetRequest, correctedWidthMm: nu
   // Pre-scaling moves text but keeps its size, so when x shrinks (scale > 1) text can reach as far
   // as its true width: lay out at min(1, scale) × the room, less half a millimetre for edge strokes.
   const panel = infoPanel(content, (correctedWidthMm - 0.5) * Math.min(1, req.printerScaleX));
-  return correctedBlock(panel.shapes, req, 0);
+  return correctedBlock(panel, req, 0);
 }
 
 function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content: InfoContent): PagedDrawing {
@@ -71,7 +71,7 @@ function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content
       const combined: Block = {
         widthMm: printable.widthMm,
         heightMm: Math.max(scale.heightMm, side.heightMm),
-        shapes: [...placeBlock(scale, 0, 0), ...placeBlock(side, scale.widthMm + gap, 0)],
+        parts: [...nestBlock(scale, 0, 0), ...nestBlock(side, scale.widthMm + gap, 0)],
         ...(scale.centreMm ? { centreMm: scale.centreMm } : {}),
       };
       return stackOnPages([combined], page);

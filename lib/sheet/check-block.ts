@@ -31,7 +31,7 @@ function bar(lengthMm: number, axis: 'x' | 'y', x0: number, y0: number): Shape[]
   return shapes;
 }
 
-export function checkBlockShapes(): { shapes: Shape[]; widthMm: number; heightMm: number } {
+function drawCheckBlock(): { shapes: Shape[]; widthMm: number; heightMm: number } {
   const shapes: Shape[] = [];
   const [hundred, fourInch] = CHECK_BARS_MM;
   const top = 8;
@@ -56,4 +56,12 @@ export function checkBlockShapes(): { shapes: Shape[]; widthMm: number; heightMm
   const helpTop = cardTop + ID1_CARD_MM.heightMm + 4;
   help.forEach((row, i) => shapes.push(text(left, helpTop + i * 2.8, row, TEXT_MM.small)));
   return { shapes, widthMm: left + fourInch + 1, heightMm: Math.max(top + fourInch + 3, helpTop + help.length * 2.8) };
+}
+
+let cached: ReturnType<typeof drawCheckBlock> | undefined;
+
+/** The check block never changes (the printer correction is applied later), so it is drawn once. */
+export function checkBlockShapes(): { readonly shapes: readonly Shape[]; widthMm: number; heightMm: number } {
+  cached ??= drawCheckBlock();
+  return cached;
 }

@@ -1,4 +1,4 @@
-import { placeBlock, type Block } from './block';
+import { translateShapes } from './affine';
 import { checkBlockShapes } from './check-block';
 import type { Shape } from './drawing';
 import { polarPointMm } from './polar';
@@ -78,26 +78,11 @@ function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; h
   return { shapes, heightMm: y };
 }
 
-/** The info panel at a given width: text beside the scale check when there is room, above it otherwise. */
-export function infoPanel(content: InfoContent, widthMm: number): Block {
+/** The info panel's shapes at a given width: text beside the scale check when there is room, above it otherwise. */
+export function infoPanel(content: InfoContent, widthMm: number): Shape[] {
   const check = checkBlockShapes();
-  const checkBlock: Block = { widthMm: check.widthMm, heightMm: check.heightMm, shapes: check.shapes };
   const besideWidth = widthMm - check.widthMm - GUTTER_MM;
-  if (besideWidth >= MIN_TEXT_COLUMN_MM) {
-    const column = textColumn(content, besideWidth);
-    return {
-      widthMm,
-      heightMm: Math.max(column.heightMm, check.heightMm),
-      shapes: [...placeBlock(checkBlock, 0, 0), ...placeBlock({ widthMm: besideWidth, heightMm: column.heightMm, shapes: column.shapes }, check.widthMm + GUTTER_MM, 0)],
-    };
-  }
-  const columnWidth = Math.max(widthMm, check.widthMm);
-  const column = textColumn(content, columnWidth);
-  return {
-    widthMm: columnWidth,
-    heightMm: column.heightMm + GUTTER_MM + check.heightMm,
-    shapes: [...column.shapes, ...placeBlock(checkBlock, 0, column.heightMm + GUTTER_MM)],
-  };
+  if (besideWidth >= MIN_TEXT_COLUMN_MM) return [...check.shapes, ...translateShapes(textColumn(content, besideWidth).shapes, check.widthMm + GUTTER_MM, 0)];
+  const column = textColumn(content, Math.max(widthMm, check.widthMm));
+  return [...column.shapes, ...translateShapes(check.shapes, 0, column.heightMm + GUTTER_MM)];
 }
-
-export const INFO_PANEL_MIN_WIDTH_MM = () => checkBlockShapes().widthMm;

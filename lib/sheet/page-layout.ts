@@ -52,7 +52,7 @@ export function stackOnPages(blocks: readonly Block[], page: PageSpec): PagedDra
     }
     const x = page.marginMm + Math.max(0, (printable.widthMm - block.widthMm) / 2);
     const y = region * page.sizeMm.heightMm + page.marginMm + cursor;
-    shapes.push(...placeBlock(block, x, y));
+    placeBlock(block, x, y, shapes);
     if (block.centreMm && !centreMm) centreMm = [block.centreMm[0] + x, block.centreMm[1] + y];
     cursor += block.heightMm + BLOCK_GAP_MM;
   }
@@ -82,7 +82,7 @@ export function tileOversized(info: Block, big: Block, page: PageSpec): PagedDra
   const window = { widthMm: printable.widthMm, heightMm: printable.heightMm - TILE_LABEL_BAND_MM };
   const bx = page.marginMm;
   const by = page.sizeMm.heightMm + page.marginMm;
-  const shapes: Shape[] = [...placeBlock(info, page.marginMm, page.marginMm), ...placeBlock(big, bx, by)];
+  const shapes: Shape[] = placeBlock(big, bx, by, placeBlock(info, page.marginMm, page.marginMm));
   const xs = tileStarts(big.widthMm, window.widthMm, TILE_OVERLAP_MM);
   const ys = tileStarts(big.heightMm, window.heightMm, TILE_OVERLAP_MM);
   const viewWidth = Math.min(window.widthMm, big.widthMm);
