@@ -38,8 +38,8 @@ export function PistonDropCalculator() {
           <legend className="sr-only">What you know</legend>
           {(
             [
-              ['angle-to-drop', 'I know the angle (° BTDC) → drop'],
-              ['drop-to-angle', 'I know the drop (mm BTDC) → angle'],
+              ['angle-to-drop', 'I know the crank angle → piston drop'],
+              ['drop-to-angle', 'I know the drop → crank angle'],
             ] as const
           ).map(([value, label]) => (
             <label

@@ -11,12 +11,12 @@ test('piston drop: stroke 54, rod 105, 90° answers 30.531 mm as you type (Heywo
   await expect(page.getByRole('img', { name: /Crank at 90\.0° from TDC/ })).toBeVisible();
 
   // The same length in inches: 30.5308 / 25.4 = 1.2020 in (1 in = 25.4 mm exactly).
-  await page.getByText('inch', { exact: true }).click();
+  await page.getByRole('radio', { name: 'inch', exact: true }).check();
   await expect(page.getByTestId('drop-value')).toHaveText('1.2020 in');
   await expect(page.getByLabel('Stroke')).toHaveValue('2.126');
 
   // A rod shorter than the crank throw answers its own message, naming the field and range.
-  await page.getByText('mm', { exact: true }).first().click();
+  await page.getByRole('radio', { name: 'mm', exact: true }).check();
   await page.getByLabel('Con-rod length').fill('20');
   await expect(page.getByText(/Con-rod length \(rodMm\) must be longer than the crank throw/)).toBeVisible();
   await expect(page.getByTestId('drop-value')).toHaveCount(0);
