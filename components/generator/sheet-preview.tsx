@@ -6,9 +6,10 @@ import { sheetRequestSchema, toFieldIssues, type FieldIssue, type SheetRequestIn
 
 const DEBOUNCE_MS = 250;
 
+type ReadyPreview = { svg: string; warnings: string[]; pageCount: number; widthMm: number; heightMm: number };
 type PreviewState =
   | { status: 'idle' }
-  | { status: 'ready'; svg: string; warnings: string[]; pageCount: number; widthMm: number; heightMm: number }
+  | ({ status: 'ready' } & ReadyPreview)
   | { status: 'invalid'; issues: FieldIssue[] }
   | { status: 'failed'; message: string };
 
@@ -34,6 +35,8 @@ function describePages(pageCount: number, paper: string, orientation: string): s
 export function SheetPreview({ request }: { request: SheetRequestInput }) {
   const [state, setState] = useState<PreviewState>({ status: 'idle' });
   const [busy, setBusy] = useState(false);
+  // While the fields are being corrected the last good drawing stays on screen, dimmed.
+  const [lastGood, setLastGood] = useState<ReadyPreview | undefined>(undefined);
   const sequence = useRef(0);
   const requestKey = JSON.stringify(request);
 
@@ -50,8 +53,11 @@ export function SheetPreview({ request }: { request: SheetRequestInput }) {
       try {
         const answer = await previewSheet({ ...input, format: 'svg' });
         if (ticket !== sequence.current) return;
-        if (answer.ok) setState({ status: 'ready', svg: answer.svg, warnings: answer.warnings, pageCount: answer.pageCount, ...svgSizeMm(answer.svg) });
-        else setState({ status: 'invalid', issues: answer.issues });
+        if (answer.ok) {
+          const ready = { svg: answer.svg, warnings: answer.warnings, pageCount: answer.pageCount, ...svgSizeMm(answer.svg) };
+          setState({ status: 'ready', ...ready });
+          setLastGood(ready);
+        } else setState({ status: 'invalid', issues: answer.issues });
       } catch {
         if (ticket === sequence.current) setState({ status: 'failed', message: 'The preview could not be drawn. The downloads may still work; try again.' });
       } finally {
@@ -76,7 +82,7 @@ export function SheetPreview({ request }: { request: SheetRequestInput }) {
         </span>
       </div>
 
-      <PaperBox state={state} />
+      <PaperBox preview={state.status === 'ready' ? state : lastGood} stale={state.status !== 'ready'} />
 
       <div aria-live="polite" className="space-y-2 text-sm">
         {state.status === 'ready' ? (
@@ -110,22 +116,23 @@ export function SheetPreview({ request }: { request: SheetRequestInput }) {
   );
 }
 
-function PaperBox({ state }: { state: PreviewState }) {
-  if (state.status !== 'ready')
+function PaperBox({ preview, stale }: { preview?: ReadyPreview; stale: boolean }) {
+  if (!preview)
     return (
       <div className="sheet-paper flex aspect-[210/297] max-h-[70vh] w-full items-center justify-center rounded-sm border border-steel-300 text-sm text-steel-400 shadow-sm">
-        {state.status === 'idle' ? 'Drawing the preview…' : 'No preview yet'}
+        Drawing the preview…
       </div>
     );
-  const ratio = state.widthMm / state.heightMm;
+  const ratio = preview.widthMm / preview.heightMm;
   return (
     <div className="flex justify-center">
       <div
         data-testid="sheet-preview"
-        className="sheet-paper overflow-hidden rounded-sm border border-steel-300 shadow-[0_1px_0_#cfd6da,0_8px_24px_-12px_rgba(16,20,23,0.35)] [&>svg]:block [&>svg]:h-auto [&>svg]:w-full"
+        data-stale={stale ? 'true' : undefined}
+        className={`sheet-paper overflow-hidden rounded-sm border border-steel-300 shadow-[0_1px_0_#cfd6da,0_8px_24px_-12px_rgba(16,20,23,0.35)] transition-opacity [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${stale ? 'opacity-35' : ''}`}
         style={{ width: `min(100%, calc(70vh * ${ratio.toFixed(5)}))` }}
         // The SVG comes from our own renderer, which escapes every text it draws.
-        dangerouslySetInnerHTML={{ __html: state.svg }}
+        dangerouslySetInnerHTML={{ __html: preview.svg }}
       />
     </div>
   );

@@ -78,6 +78,7 @@ test('4 in typed with the inch toggle draws the same sheet as 101.6 mm', async (
 test('a 700 mm diameter is refused beside the field with the schema’s range', async ({ page }) => {
   await page.goto('/');
   const diameter = page.getByLabel('Diameter', { exact: true });
+  await expect(graduations(page).first()).toBeAttached({ timeout: 15_000 });
   await diameter.fill('700');
   const errorId = (await diameter.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
   expect(errorId).toBeTruthy();
@@ -85,6 +86,9 @@ test('a 700 mm diameter is refused beside the field with the schema’s range', 
   await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
   await expect(error).toHaveAttribute('aria-live', 'polite');
   await expect(diameter).toHaveAttribute('aria-invalid', 'true');
+  // The preview keeps the last good drawing, dimmed, and lists what it waits for.
+  await expect(page.getByText('The preview waits for these fields:')).toBeVisible();
+  await expect(page.getByTestId('sheet-preview')).toHaveAttribute('data-stale', 'true');
 
   // An empty field gets the schema's message too, never NaN.
   await diameter.fill('');
