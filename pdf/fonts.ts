@@ -57,7 +57,6 @@ export function registerSheetFonts(): void {
     }));
     Font.register({ family: PDF_FONT_FAMILY[key], fonts });
   }
-  Font.registerHyphenationCallback((word) => [word]); // labels never hyphenate
   global[REGISTERED] = true;
 }
 
