@@ -1,10 +1,10 @@
 import type { Fill, GraduationLevel, Shape } from './drawing';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
-import type { ScaleMarks } from './scale-marks';
+import { labelLanes, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
 import { arrow, line, path, text } from './shapes';
-import { STROKE_MM } from './sheet-style';
+import { STROKE_MM, textWidthMm } from './sheet-style';
 
 /**
  * Bends a scale round a circle: the polar transform. Ticks start at the reading edge
@@ -35,6 +35,8 @@ export type PolarScaleOptions = {
   carrier: Carrier;
   marks: ScaleMarks;
   bandFill: Fill;
+  /** How deep (mm from the edge) labels may go: a wheel stops short of its hub hole. */
+  maxDepthMm: number;
 };
 
 export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
@@ -70,31 +72,51 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
     shapes.push(text(x, y, number.label, numeralSize, { anchor: 'middle', rotateDeg: angle(number.alongDeg), font: 'figures', data: { role: 'numeral', crankDeg: number.crankDeg } }));
   }
 
+  const labelSize = POLAR_DEPTH_MM.labelSize * f;
+  const labelRadius = radius(POLAR_DEPTH_MM.labelFrom);
+  const labelGapDeg = (labelSize * 1.15 * 360) / (2 * Math.PI * Math.max(labelRadius, 1e-6));
+  const labelled = [...o.marks.advance, ...o.marks.ports];
+  const laneDepthMm = Math.max(0, ...labelled.map((m) => textWidthMm(m.label, labelSize))) + 1.2 * f;
+  const laneRoom = Math.floor((o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f) / Math.max(laneDepthMm, 1e-6));
+  const lanes = labelLanes(labelled, labelGapDeg, Math.min(3, Math.max(1, laneRoom)));
+
   const radialLabel = (alongDeg: number, label: string, data: Shape['data']) => {
+    const lane = lanes.get(alongDeg);
+    lanes.delete(alongDeg);
+    if (lane === undefined) return [];
     const theta = angle(alongDeg);
-    const [x, y] = at(alongDeg, POLAR_DEPTH_MM.labelFrom);
+    const [x, y] = polarPointMm(o.centreMm, radius(POLAR_DEPTH_MM.labelFrom) + sign * lane * laneDepthMm, theta);
     // Text runs along the radius, away from the reading edge, and is never upside down.
     const outward = theta - 90;
     const rightHalf = theta < 180;
-    return text(x, y, label, POLAR_DEPTH_MM.labelSize * f, {
-      anchor: (sign < 0) === rightHalf ? 'end' : 'start',
-      rotateDeg: rightHalf ? outward : outward + 180,
-      weight: 'bold',
-      data,
-    });
+    // Labels in outer lanes get a fine leader along their own ray.
+    const leader: Shape[] = [];
+    if (lane > 0) {
+      const [lx1, ly1] = at(alongDeg, POLAR_DEPTH_MM.bandTo);
+      leader.push(line(lx1, ly1, x, y, STROKE_MM.fine, { role: 'label-leader' }, 0.5 * f));
+    }
+    return [
+      ...leader,
+      text(x, y, label, labelSize, {
+        anchor: (sign < 0) === rightHalf ? 'end' : 'start',
+        rotateDeg: rightHalf ? outward : outward + 180,
+        weight: 'bold',
+        data,
+      }),
+    ];
   };
 
   for (const mark of o.marks.advance) {
     const [x1, y1] = at(mark.alongDeg, 0);
     const [x2, y2] = at(mark.alongDeg, POLAR_DEPTH_MM.bandTo);
     shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg }));
-    shapes.push(radialLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
+    shapes.push(...radialLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
   }
   for (const mark of o.marks.ports) {
     const [x1, y1] = at(mark.alongDeg, 0);
     const [x2, y2] = at(mark.alongDeg, POLAR_DEPTH_MM.bandTo);
     shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'port', crankDeg: mark.crankDeg }, 0.8 * f));
-    shapes.push(radialLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
+    shapes.push(...radialLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
   }
 
   shapes.push(...tdcPointer(o, at));

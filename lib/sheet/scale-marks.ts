@@ -121,3 +121,20 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
   const bands = options.advanceBandDeg ? bandIntervals(options.advanceBandDeg, range, carrier) : [];
   return { ticks, numbers, advance, ports, bands };
 }
+
+/**
+ * Label lanes: going along the scale, each label takes the first lane (0 = nearest the
+ * ticks) whose last label is at least `gapDeg` behind it, so labels never print over each
+ * other; with every lane taken the label is left off (the mark itself is always drawn).
+ */
+export function labelLanes(marks: readonly PlacedMark[], gapDeg: number, laneCount: number): Map<number, number> {
+  const lanes = new Map<number, number>();
+  const lastInLane = Array.from({ length: Math.max(1, laneCount) }, () => -Infinity);
+  for (const along of [...new Set(marks.map((m) => m.alongDeg))].sort((a, b) => a - b)) {
+    const lane = lastInLane.findIndex((last) => along - last >= gapDeg - 1e-9);
+    if (lane < 0) continue;
+    lanes.set(along, lane);
+    lastInLane[lane] = along;
+  }
+  return lanes;
+}

@@ -1,7 +1,7 @@
 import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
 import { chooseLevels } from './graduations';
-import { formatDeg, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
+import { formatDeg, labelLanes, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, type Carrier } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
@@ -138,15 +138,23 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   }
 
   const labelSize = TEXT_MM.small;
-  const markLabel = (alongDeg: number, label: string, data: ShapeData) =>
-    text(x(alongDeg) + labelSize * 0.35, top + w + 1, label, labelSize, { anchor: 'end', rotateDeg: -90, weight: 'bold', data: tag(data) });
+  const labelled = [...marks.advance, ...marks.ports];
+  const laneDepthMm = Math.max(0, ...labelled.map((m) => textWidthMm(m.label, labelSize))) + 1.2;
+  const lanes = labelLanes(labelled, (labelSize * 1.15) / plan.mmPerDeg, 3);
+  // Labels hang below the strip, reading upwards, in up to three staggered lanes.
+  const markLabel = (alongDeg: number, label: string, data: ShapeData): Shape[] => {
+    const lane = lanes.get(alongDeg);
+    lanes.delete(alongDeg);
+    if (lane === undefined) return [];
+    return [text(x(alongDeg) + labelSize * 0.35, top + w + 1 + lane * laneDepthMm, label, labelSize, { anchor: 'end', rotateDeg: -90, weight: 'bold', data: tag(data) })];
+  };
   for (const mark of marks.advance) {
     shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg })));
-    shapes.push(markLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
+    shapes.push(...markLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
   }
   for (const mark of marks.ports) {
     shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'port', crankDeg: mark.crankDeg }), 0.8));
-    shapes.push(markLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
+    shapes.push(...markLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
   }
 
   shapes.push(...tdcPointers(marks, x, top, depths, w, tag));

@@ -17,7 +17,7 @@ function clampScale(value: number): number {
   return Math.min(1, Math.max(MIN_DEPTH_SCALE, value));
 }
 
-function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string) {
+function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string, maxDepthMm: number) {
   const choice = chooseLevels(arcPitchMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
   const numeralRadius = edgeRadiusMm + (towards === 'centre' ? -1 : 1) * (TICK_DEPTH_MM[10] + 2.4) * depthScale;
   const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale));
@@ -44,6 +44,7 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     carrier: req.carrier,
     marks,
     bandFill: 'hatch',
+    maxDepthMm,
   });
   return { shapes, keptLevels: choice.keptLevels, warnings };
 }
@@ -53,7 +54,7 @@ export function wheelLayout(req: SheetRequest): PolarLayout {
   const radiusMm = (req.diameterMm ?? 0) / 2;
   const hubRadiusMm = Math.min(req.hubHoleMm / 2, radiusMm);
   const depthScale = clampScale((radiusMm - hubRadiusMm) / POLAR_DEPTH_MM.total);
-  const scale = polarScale(req, radiusMm, 'centre', depthScale, 'at this diameter');
+  const scale = polarScale(req, radiusMm, 'centre', depthScale, 'at this diameter', radiusMm - hubRadiusMm - 1);
   const crossMm = Math.min(5, radiusMm * 0.3);
   const shapes: Shape[] = [
     circle(0, 0, radiusMm, STROKE_MM.outline, { role: 'cut-line' }),
@@ -71,7 +72,7 @@ export function ringLayout(req: SheetRequest): PolarLayout {
   const innerRadiusMm = (req.innerDiameterMm ?? 0) / 2;
   const outerRadiusMm = Math.max((req.outerDiameterMm ?? 0) / 2, innerRadiusMm);
   const depthScale = clampScale((outerRadiusMm - innerRadiusMm) / RING_SCALE_DEPTH_MM);
-  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter');
+  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter', 80);
   const shapes: Shape[] = [
     circle(0, 0, outerRadiusMm, STROKE_MM.outline, { role: 'cut-line' }),
     circle(0, 0, innerRadiusMm, STROKE_MM.outline, { role: 'cut-line-inner' }),

@@ -39,6 +39,24 @@ describe('advance band', () => {
   });
 });
 
+describe('advance mark labels', () => {
+  it('label each of 16–20° BTDC on a 150 mm wheel, each on its own mark’s ray, in staggered lanes', () => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 150, advanceMarksDeg: [16, 17, 18, 19, 20] }), { date: FIXED_DATE })));
+    const centre = centreOf(svg);
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label');
+    expect(labels.map((t) => t.textContent).sort()).toEqual(['16° BTDC', '17° BTDC', '18° BTDC', '19° BTDC', '20° BTDC']);
+    const radii = new Set<string>();
+    for (const label of labels) {
+      const advance = n(label, 'data-advance-deg');
+      // Rotating cw: x° BTDC sits x° clockwise from TDC; the label's anchor is on that ray.
+      expect(clockwiseDeg(centre, n(label, 'x'), n(label, 'y'))).toBeCloseTo(advance, 3);
+      radii.add(Math.hypot(n(label, 'x') - centre[0], n(label, 'y') - centre[1]).toFixed(1));
+    }
+    // 1° apart is closer than the text is tall at this radius, so the labels use more than one lane.
+    expect(radii.size).toBeGreaterThan(1);
+  });
+});
+
 describe('port events', () => {
   const ports = [{ name: 'Exhaust', opensCrankDeg: 96, closesCrankDeg: 264 }];
   it('are marked and labelled on full-numbered wheels, at their crank angles', () => {
