@@ -30,6 +30,11 @@ test('measuring 98 and 100 mm stores a profile that the sheet maker offers and s
   expect(body).toMatchObject({ printerScaleX: 0.98, printerScaleY: 1, printerProfileName: 'Workshop laser', format: 'pdf', diameterMm: 120 });
   const file = await readFile((await (await downloadPromise).path()) as string);
   expect(file.subarray(0, 5).toString('latin1')).toBe('%PDF-');
+  // The title block names the profile (issue 3, "Printer check"), read back with pdf-parse.
+  const parser = new PDFParse({ data: new Uint8Array(file) });
+  const { text } = await parser.getText();
+  await parser.destroy();
+  expect(text.replace(/\s+/g, ' ')).toContain('Workshop laser');
 
   // "No correction" sends factors of 1 and no profile name.
   await select.selectOption({ label: 'No correction' });
