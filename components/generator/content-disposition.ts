@@ -4,7 +4,7 @@
  */
 export function fileNameFromContentDisposition(header: string | null, fallback: string): string {
   if (!header) return fallback;
-  const extended = /filename\*\s*=\s*(?:UTF-8|utf-8)''([^;]+)/.exec(header);
+  const extended = /filename\*\s*=\s*UTF-8''([^;]+)/i.exec(header);
   const plain = /filename\s*=\s*(?:"((?:[^"\\]|\\.)*)"|([^;]+))/.exec(header);
   let name: string | undefined;
   if (extended?.[1]) {
