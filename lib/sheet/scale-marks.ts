@@ -34,6 +34,8 @@ export type ScaleMarksOptions = {
   advanceBandDeg?: readonly [number, number];
   portEvents: readonly PortEvent[];
   drawPorts: boolean;
+  /** Numerals this close (degrees) to an advance or port mark are left off, so the heavy line never strikes one through. */
+  numberClearDeg?: number;
 };
 
 export const NUMBER_STRIDES = [1, 2, 3, 6, 9, 18] as const;
@@ -115,7 +117,7 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
   const stride20 = 20 * options.numberStride;
   const numbers: PlacedMark[] = ticks
     .filter((tick) => tick.level === 10 && tick.crankIndex % stride20 === 0)
-    .filter((tick) => !nearAny(tick.alongDeg, advance, 1.5) && !nearAny(tick.alongDeg, ports, 1.5))
+    .filter((tick) => !nearAny(tick.alongDeg, advance, options.numberClearDeg ?? 1.5) && !nearAny(tick.alongDeg, ports, options.numberClearDeg ?? 1.5))
     .map((tick) => ({ alongDeg: tick.alongDeg, crankDeg: tick.crankDeg, label: graduationNumber(tick.crankDeg, options.numbering) }));
 
   const bands = options.advanceBandDeg ? bandIntervals(options.advanceBandDeg, range, carrier) : [];

@@ -90,6 +90,7 @@ export function stripDepths(widthMm: number): StripDepths {
 }
 
 function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment, finestLevel: GraduationLevel, stride: number): ScaleMarks {
+  const numeralWidthMm = textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize);
   const overlapMm = segment.extension === 'overlap' ? segment.extensionMm : 0;
   return scaleMarks({
     range: { fromAlongDeg: segment.startAlongDeg, toAlongDeg: segment.startAlongDeg + (segment.markedMm + overlapMm) / plan.mmPerDeg },
@@ -101,6 +102,7 @@ function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment,
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
     drawPorts: req.numbering === 'full',
+    numberClearDeg: Math.max(1.5, (numeralWidthMm / 2 + 0.4) / plan.mmPerDeg),
   });
 }
 
@@ -272,7 +274,7 @@ function rowLabels(req: SheetRequest, plan: StripPlan, segment: StripSegment, in
     const [from, to] = req.windowCrankDeg!;
     const describe = (crankDeg: number) => (crankDeg === 0 || crankDeg === 360 ? 'TDC' : crankDeg > 180 ? `${formatDeg(360 - crankDeg)}° BTDC` : `${formatDeg(crankDeg)}° ATDC`);
     const caption = `window ${describe(from)} to ${describe(to)}`;
-    shapes.push(text(segment.markedMm, baseline, caption, TEXT_MM.small, { anchor: 'end', data: tag({ role: 'window-label' }) }));
+    shapes.push(text(0, baseline - TEXT_MM.small * 1.5, caption, TEXT_MM.small, { data: tag({ role: 'window-label' }) }));
   }
   return shapes;
 }

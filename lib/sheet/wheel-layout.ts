@@ -20,7 +20,9 @@ function clampScale(value: number): number {
 function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string, maxDepthMm: number) {
   const choice = chooseLevels(arcPitchMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
   const numeralRadius = edgeRadiusMm + (towards === 'centre' ? -1 : 1) * (TICK_DEPTH_MM[10] + 2.4) * depthScale;
-  const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale));
+  const numeralWidthMm = textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale);
+  const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), numeralWidthMm);
+  const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcPitchMm(2 * numeralRadius, 1), 1e-6));
   const drawPorts = req.numbering === 'full';
   const warnings = [...choice.warnings];
   if (req.portEvents.length && !drawPorts) warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
@@ -34,6 +36,7 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
     drawPorts,
+    numberClearDeg,
   });
   const shapes = polarScaleShapes({
     centreMm: [0, 0],

@@ -1,0 +1,64 @@
+// Source under test: lib/sheet/sheet-notes.ts and lib/sheet/info-panel.ts (title block, print line,
+// cautions of PRODUCT.md §6, the "which way" note and diagram), read back from the SVG with @xmldom/xmldom.
+import { describe, expect, it } from 'vitest';
+import { buildDrawing } from '@/lib/sheet/build-drawing';
+import { renderSvg } from '@/lib/sheet/render-svg';
+import { FIXED_DATE, parseSvg, req } from './svg-measure';
+
+function sheetText(input: Parameters<typeof req>[0]) {
+  const svg = parseSvg(renderSvg(buildDrawing(req(input), { date: FIXED_DATE })));
+  return { svg, words: svg.all('text').map((t) => t.textContent).join(' ') };
+}
+
+describe('every sheet says what it is and how to print it', () => {
+  it.each(['wheel', 'ring', 'strip', 'scribe', 'check'] as const)('%s: title block, print line, cautions and which-way note', (kind) => {
+    const { words } = sheetText({
+      kind,
+      diameterMm: 118,
+      innerDiameterMm: 118,
+      outerDiameterMm: 150,
+      title: 'Harbour Lane 125 scooter',
+      printerProfileName: 'Office laser',
+      printerScaleX: 0.99,
+      paper: 'Letter',
+      note: 'checked twice',
+    });
+    expect(words).toContain('Harbour Lane 125 scooter');
+    if (kind !== 'check') expect(words).toContain('118 mm'); // the check sheet has no scale
+    expect(words).toContain('Carrier: rotating');
+    expect(words).toContain('Rotation: clockwise');
+    expect(words).toContain('Numbering: split');
+    expect(words).toContain('Date 2026-12-01');
+    expect(words).toContain('paper Letter portrait');
+    expect(words).toContain('Printer profile: Office laser');
+    expect(words).toContain('printer scale x 0.990');
+    expect(words).toContain('Note: checked twice');
+    expect(words).toContain('Print at 100 % / actual size — turn off fit-to-page');
+    // PRODUCT.md §6, in short.
+    for (const caution of ['plug lead off', 'positive stop by hand only', 'clear of the flywheel and fan', 'ventilation', 'detonation', 'maker’s manual'])
+      expect(words).toContain(caution);
+    expect(words).toContain('Which way:');
+  });
+
+  it.each([
+    ['cw', 'rotating', 'clockwise', 'with'],
+    ['cw', 'stationary', 'counter-clockwise', 'against'],
+    ['ccw', 'rotating', 'counter-clockwise', 'with'],
+    ['ccw', 'stationary', 'clockwise', 'against'],
+  ] as const)('wheel %s %s: BTDC marks lie %s from TDC (%s the rotation), in words and in the diagram', (rotation, carrier, side, relation) => {
+    const { svg, words } = sheetText({ kind: 'wheel', diameterMm: 100, rotation, carrier });
+    expect(words).toContain(`the BTDC marks lie ${side} from TDC (${relation} the rotation)`);
+    // In the small diagram the BTDC label sits right of TDC (clockwise from the top) or left.
+    const label = (role: string) => svg.all('text').find((t) => t.getAttribute('data-role') === role)!;
+    const tdcX = Number(svg.all('line').find((l) => l.getAttribute('data-role') === 'which-way')!.getAttribute('x1'));
+    const btdcX = Number(label('which-way-btdc').getAttribute('x'));
+    expect(btdcX > tdcX).toBe(side === 'clockwise');
+  });
+
+  it('a strip says its arrow carries the direction (no mirror for cw/ccw)', () => {
+    const rotating = sheetText({ kind: 'strip', diameterMm: 50 }).words;
+    expect(rotating).toContain('the BTDC marks lie ahead of TDC along the arrow');
+    expect(rotating).toContain('same strip serves clockwise and counter-clockwise engines');
+    expect(sheetText({ kind: 'strip', diameterMm: 50, carrier: 'stationary' }).words).toContain('the BTDC marks lie behind TDC (against the arrow)');
+  });
+});
