@@ -198,3 +198,18 @@ describe('tiled sheets', () => {
     expect(worst).toBeLessThan(0.01);
   });
 });
+
+describe('every sheet kind renders', () => {
+  it.each([
+    ['wheel', { kind: 'wheel', diameterMm: 180, hubHoleMm: 30, numbering: 'full', portEvents: [{ name: 'Exhaust', opensCrankDeg: 95, closesCrankDeg: 265 }] }],
+    ['ring', { kind: 'ring', innerDiameterMm: 120, outerDiameterMm: 170, carrier: 'stationary', advanceBandDeg: [14, 22] }],
+    ['strip', { kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10] }],
+    ['scribe', { kind: 'scribe', diameterMm: 110, fromDeg: 10, toDeg: 30, stepDeg: 0.5 }],
+    ['check', { kind: 'check', paper: 'Letter' }],
+  ] as Array<[string, SheetRequestInput]>)('a %s sheet: one PDF page per layout page, the print line on the first', async (_, input) => {
+    const { drawing } = sheet(input);
+    const { text, pageCount } = await readPdfText(await renderSheetPdf(drawing));
+    expect(pageCount).toBe(drawing.pages.length);
+    expect(text).toContain('Print at 100 %');
+  });
+});
