@@ -11,12 +11,14 @@ test('piston drop: stroke 54, rod 105, 90° answers 30.531 mm as you type (Heywo
   await expect(page.getByRole('img', { name: /Crank at 90\.0° from TDC/ })).toBeVisible();
 
   // The same length in inches: 30.5308 / 25.4 = 1.2020 in (1 in = 25.4 mm exactly).
-  await page.getByRole('radio', { name: 'inch', exact: true }).check();
+  await page.locator('label').filter({ hasText: /^inch$/ }).click();
+  await expect(page.getByRole('radio', { name: 'inch', exact: true })).toBeChecked();
   await expect(page.getByTestId('drop-value')).toHaveText('1.2020 in');
   await expect(page.getByLabel('Stroke')).toHaveValue('2.126');
 
   // A rod shorter than the crank throw answers its own message, naming the field and range.
-  await page.getByRole('radio', { name: 'mm', exact: true }).check();
+  await page.locator('label').filter({ hasText: /^mm$/ }).click();
+  await expect(page.getByRole('radio', { name: 'mm', exact: true })).toBeChecked();
   await page.getByLabel('Con-rod length').fill('20');
   await expect(page.getByText(/Con-rod length \(rodMm\) must be longer than the crank throw/)).toBeVisible();
   await expect(page.getByTestId('drop-value')).toHaveCount(0);
@@ -62,4 +64,23 @@ test('port events: durations, blowdown and the ring', async ({ page }) => {
   await expect(page.getByTestId('blowdown')).toHaveText('29.0°');
   await expect(page.getByRole('img', { name: /Port timing ring: Exhaust open 82\.6° to 277\.4°/ })).toBeVisible();
   await expect(page.getByRole('link', { name: /Use on a wheel/ })).toHaveAttribute('href', /kind=wheel&numbering=full&portEvents=/);
+});
+
+test('divider distances by keyboard alone, and the scribe chart link', async ({ page }) => {
+  await page.goto('/calculators/arc-chord');
+  await page.getByLabel('Diameter where you mark').focus();
+  await page.keyboard.press('ControlOrMeta+a');
+  await page.keyboard.type('100');
+  await page.keyboard.press('Tab');
+  await expect(page.getByLabel('Angles from TDC')).toBeFocused();
+  await page.keyboard.press('ControlOrMeta+a');
+  await page.keyboard.type('18, 60');
+  // Arc = π·D·θ/360 = 5π = 15.71 mm; chord = D·sin(θ/2) = 100 × sin 9° = 15.64 mm; at 60° the chord is the radius, 50.00.
+  await expect(page.getByTestId('arc-0')).toHaveText('15.71');
+  await expect(page.getByTestId('chord-0')).toHaveText('15.64');
+  await expect(page.getByTestId('chord-1')).toHaveText('50.00');
+  await expect(page.getByRole('link', { name: /scribe chart/ })).toHaveAttribute('href', '/?kind=scribe&diameterMm=100&fromDeg=18&toDeg=60');
+  // A bad entry answers its own message.
+  await page.getByLabel('Angles from TDC').fill('18, 400');
+  await expect(page.getByText('Angle (anglesDeg) must be at most 360° (allowed 0–360°)')).toBeVisible();
 });
