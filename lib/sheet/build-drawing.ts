@@ -5,7 +5,7 @@ import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
 import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
-import type { SheetRequest } from './sheet-request';
+import { sheetRequestSchema, type SheetRequest } from './sheet-request';
 import { isoDate, sheetTitle, titleBlockLines } from './sheet-notes';
 import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
@@ -83,8 +83,24 @@ function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content
   return tileOversized(fullInfo, scale, page);
 }
 
-/** The whole sheet for a validated request: geometry, pages and warnings. Pure; same input, same drawing. */
-export function buildDrawing(request: SheetRequest, options: BuildOptions = {}): Drawing {
+function labelWarnings(shapes: readonly Shape[]): string[] {
+  let marks = 0;
+  let labels = 0;
+  for (const shape of shapes) {
+    const role = shape.data?.role;
+    if (role === 'advance' || role === 'port') marks += 1;
+    else if (role === 'advance-label' || role === 'port-label') labels += 1;
+  }
+  return labels < marks ? [`${marks - labels} of ${marks} advance/port marks are drawn without a label: they sit closer together than the label text`] : [];
+}
+
+/**
+ * The whole sheet for a request: geometry, pages and warnings. Pure; same input, same drawing.
+ * The request is checked against the shared schema once more (callers normally have already),
+ * so a bad one fails with the schema's field messages rather than drawing nonsense.
+ */
+export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): Drawing {
+  const request = sheetRequestSchema.parse(input);
   const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, 6) };
   const title = sheetTitle(request);
   const contentFor = (layout?: ScaleLayout): InfoContent => ({
@@ -101,7 +117,8 @@ export function buildDrawing(request: SheetRequest, options: BuildOptions = {}):
   const layout = scaleLayout(request, page, infoHeightMm);
   const content = contentFor(layout);
   const paged = arrange(request, page, layout, content);
-  const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings: [...layout.warnings, ...paged.warnings], title };
+  const warnings = [...layout.warnings, ...labelWarnings(paged.shapes), ...paged.warnings];
+  const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings, title };
   if (paged.centreMm) drawing.centreMm = paged.centreMm;
   return assertFiniteDrawing(drawing);
 }
