@@ -128,6 +128,12 @@ describe('rim strip', () => {
     }
   });
 
+  it('is the same for cw and ccw engines: the printed arrow carries the direction', () => {
+    const ticks = (rotation: 'cw' | 'ccw') =>
+      lines(stripSvg({ diameterMm: 50, rotation, advanceMarksDeg: [18] }).svg, (el) => isTick(el) || el.hasAttribute('data-advance-deg')).map((t) => [t.x1, t.el.getAttribute('data-crank-deg')]);
+    expect(ticks('ccw')).toEqual(ticks('cw'));
+  });
+
   it('keeps the ignition region unbroken with the seam at BDC by default, or moves it to seamCrankDeg', () => {
     expect(stripRange({ carrier: 'rotating', seamCrankDeg: 180 }).startAlongDeg).toBe(180);
     const { svg } = stripSvg({ diameterMm: 50, seamCrankDeg: 90 });

@@ -149,6 +149,15 @@ describe('degree wheel SVG, measured', () => {
 });
 
 describe('flange ring SVG, measured', () => {
+  it.each([
+    ['cw', 342],
+    ['ccw', 18],
+  ] as const)('stationary ring, rotation %s: 18° BTDC lies %s° clockwise from TDC (against the rotation)', (rotation, expectedDeg) => {
+    const { svg } = wheelSvg({ kind: 'ring', innerDiameterMm: 112, outerDiameterMm: 150, carrier: 'stationary', rotation, advanceMarksDeg: [18] });
+    const mark = lines(svg, (el) => el.getAttribute('data-advance-deg') === '18')[0]!;
+    expect(angularGapDeg(clockwiseDeg(centreOf(svg), mark.x1, mark.y1), expectedDeg)).toBeLessThan(1e-4);
+  });
+
   it('ticks start on the inner circle and run outwards', () => {
     const { svg } = wheelSvg({ kind: 'ring', innerDiameterMm: 112, outerDiameterMm: 150, carrier: 'stationary' });
     const centre = centreOf(svg);
