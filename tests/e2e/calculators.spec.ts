@@ -50,6 +50,11 @@ test('TDC from stops across the 0/360 seam on a full wheel', async ({ page }) =>
   await expect(page.getByTestId('tdc-correction')).toHaveText('−5.0°');
   await expect(page.getByTestId('tdc-stop-angle')).toHaveText('25.0° either side');
   await expect(page.getByRole('link', { name: /note/ })).toHaveAttribute('href', /note=True\+TDC\+reads\+5%C2%B0/);
+
+  await page.getByRole('link', { name: /note/ }).click();
+  await expect(page.getByLabel('Note (optional)')).toHaveValue(
+    'True TDC reads 5° on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side',
+  );
 });
 
 test('port events: durations, blowdown and the ring', async ({ page }) => {
@@ -64,6 +69,14 @@ test('port events: durations, blowdown and the ring', async ({ page }) => {
   await expect(page.getByTestId('blowdown')).toHaveText('29.0°');
   await expect(page.getByRole('img', { name: /Port timing ring: Exhaust open 82\.6° to 277\.4°/ })).toBeVisible();
   await expect(page.getByRole('link', { name: /Use on a wheel/ })).toHaveAttribute('href', /kind=wheel&numbering=full&portEvents=/);
+
+  // The link opens the sheet maker with the port events filled in, nothing dropped.
+  await page.getByRole('link', { name: /Use on a wheel/ }).click();
+  await expect(page).toHaveURL(/\/\?kind=wheel&numbering=full&portEvents=/);
+  await expect(page.getByLabel('Port 1 name')).toHaveValue('Exhaust');
+  await expect(page.getByLabel('Port 1 opening angle')).toHaveValue('82.6');
+  await expect(page.getByLabel('Port 1 closing angle')).toHaveValue('277.4');
+  await expect(page.getByText('Some values in the link were not used')).toHaveCount(0);
 });
 
 test('divider distances by keyboard alone, and the scribe chart link', async ({ page }) => {
