@@ -42,6 +42,22 @@ function AdvanceMarksField() {
   );
 }
 
+function NotesField() {
+  const { register } = useFormContext<Input>();
+  const error = useFieldError('notes');
+  const id = fieldId('notes');
+  return (
+    <div className="space-y-1">
+      <label htmlFor={id} className="block text-sm font-medium">
+        Notes
+      </label>
+      <textarea id={id} rows={4} maxLength={4000} aria-invalid={error ? true : undefined} aria-describedby={`${id}-help ${id}-error`} className={inputClass} {...register('notes')} />
+      <HelpText id={`${id}-help`}>Where the pointer sits, which marks to trust, anything the next person should know.</HelpText>
+      <FieldErrorText id={`${id}-error`} message={error} />
+    </div>
+  );
+}
+
 function PortTargets() {
   const { control, register } = useFormContext<Input>();
   const { fields, append, remove } = useFieldArray({ control, name: 'portTargets' });
@@ -138,7 +154,7 @@ export function TemplateForm({ slug, template }: { slug: string; template: Templ
           <PortTargets />
         </FormSection>
         <FormSection title="Notes">
-          <TextField<Input> name="notes" label="Notes" help="Where the pointer sits, which marks to trust, anything the next person should know." />
+          <NotesField />
         </FormSection>
         <div className="flex items-center gap-3">
           <SubmitButton busy={form.formState.isSubmitting}>{template ? 'Save changes' : 'Create template'}</SubmitButton>

@@ -72,7 +72,14 @@ export function TemplateList({ slug }: { slug: string }) {
                   {row.name}
                 </Link>
               );
-            if (c.key === 'updatedAt') return formatWhen(row.updatedAt);
+            if (c.key === 'updatedAt') return formatWhen(row.updatedAt).slice(0, 10);
+            if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation)}>{row.rotation.toUpperCase()}</abbr>;
+            if (c.key === 'description')
+              return (
+                <span className="block max-w-72 truncate font-sans" title={row.description}>
+                  {row.description}
+                </span>
+              );
             return formatFieldValue(c.key, info.getValue());
           },
         }),
@@ -124,7 +131,7 @@ export function TemplateList({ slug }: { slug: string }) {
                   const key = header.column.id as TemplateSortKey;
                   const active = sort === key;
                   return (
-                    <th key={header.id} scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'} className="px-3 py-2 font-semibold">
+                    <th key={header.id} scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'} className="whitespace-nowrap px-3 py-2 font-semibold">
                       <button type="button" onClick={() => toggleSort(key)} className="inline-flex items-center gap-1 hover:underline">
                         <table.FlexRender header={header} />
                         <span aria-hidden="true" className="text-xs text-steel-400">

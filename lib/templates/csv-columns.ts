@@ -62,7 +62,7 @@ export const CSV_COLUMN_SPECS: readonly CsvColumnSpec[] = [
   { column: 'hub_hole_mm', field: 'hubHoleMm', kind: 'number', meaning: 'Hub hole of a degree wheel in mm (0–600)' },
   { column: 'static_advance_deg_btdc', field: 'staticAdvanceDeg', kind: 'number', meaning: 'Static advance in degrees BTDC (0–60)' },
   { column: 'advance_marks_deg_btdc', field: 'advanceMarksDeg', kind: 'list', meaning: 'Advance marks in degrees BTDC, ";"-separated, e.g. 16;18;20' },
-  { column: 'port_targets', field: 'portTargets', kind: 'ports', meaning: 'name:opens/closes in crank degrees, ";"-separated, e.g. exhaust:92/268' },
+  { column: 'port_targets', field: 'portTargets', kind: 'ports', meaning: 'name:opens/closes in crank degrees (0 = TDC, counting the way the engine turns, 0–360), ";"-separated, e.g. exhaust:92/268' },
   { column: 'notes', field: 'notes', kind: 'text', meaning: 'Free text, up to 4000 characters' },
   { column: 'archived', field: 'archived', kind: 'boolean', meaning: 'true or false' },
 ];

@@ -89,3 +89,36 @@ test('a technician creates a template and prints a strip from it; a viewer can p
   await expect(viewer.getByRole('heading', { level: 1, name })).toBeVisible();
   await viewerContext.close();
 });
+
+test('two edits from the same version: the later save is refused with who and when, and keeps the typed values', async ({ browser }) => {
+  const context = await browser.newContext();
+  const first = await context.newPage();
+  await signIn(first, TECH);
+  // Search and sort run on the server: "scooter" finds the three invented scooters.
+  await first.getByLabel('Search name and engine').fill('scooter');
+  await expect(first.getByRole('status').filter({ hasText: /^3 templates$/ })).toBeVisible();
+  await first.getByRole('button', { name: /^Name/ }).click();
+  await expect(first.locator('tbody tr').first()).toContainText('Quayside 150 scooter, disc valve');
+
+  await first.getByRole('link', { name: 'Coastline 200 scooter' }).click();
+  await expect(first).toHaveURL(/\/templates\/\d+$/);
+  const editUrl = `${first.url()}/edit`;
+  const second = await context.newPage();
+  await first.goto(editUrl);
+  await second.goto(editUrl);
+
+  await first.getByLabel(/^Static advance/).fill('19');
+  await first.getByRole('button', { name: 'Save changes' }).click();
+  await expect(first.getByRole('heading', { level: 1, name: 'Coastline 200 scooter' })).toBeVisible();
+
+  await second.getByLabel(/^Static advance/).fill('16');
+  await second.getByRole('button', { name: 'Save changes' }).click();
+  await expect(second.getByRole('alert').filter({ hasText: /changed by Teo Lindqvist at .* — reload/ })).toBeVisible();
+  await expect(second.getByLabel(/^Static advance/)).toHaveValue('16');
+
+  // The winner's value stands and the history holds it as a revision.
+  await first.reload();
+  await expect(first.getByText('19° BTDC', { exact: true })).toBeVisible();
+  await expect(first.getByRole('list', { name: 'History' })).toContainText(/Static advance: 18° BTDC → 19° BTDC/);
+  await context.close();
+});
