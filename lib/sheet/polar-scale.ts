@@ -1,7 +1,7 @@
 import type { Fill, GraduationLevel, Shape } from './drawing';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
-import { labelLanes, type ScaleMarks } from './scale-marks';
+import { labelLanes, type PlacedMark, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
 import { arrow, line, path, text } from './shapes';
 import { STROKE_MM, textWidthMm } from './sheet-style';
@@ -73,38 +73,12 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   }
 
   const labelSize = POLAR_DEPTH_MM.labelSize * f;
-  const labelRadius = radius(POLAR_DEPTH_MM.labelFrom);
-  const labelGapDeg = (labelSize * 1.15 * 360) / (2 * Math.PI * Math.max(labelRadius, 1e-6));
   const labelled = [...o.marks.advance, ...o.marks.ports];
-  const laneDepthMm = Math.max(0, ...labelled.map((m) => textWidthMm(m.label, labelSize))) + 1.2 * f;
-  const laneRoom = Math.floor((o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f) / Math.max(laneDepthMm, 1e-6));
-  const lanes = labelLanes(labelled, labelGapDeg, Math.min(3, Math.max(1, laneRoom)));
-
-  const radialLabel = (alongDeg: number, label: string, data: Shape['data']) => {
-    const lane = lanes.get(alongDeg);
-    lanes.delete(alongDeg);
-    if (lane === undefined) return [];
-    const theta = angle(alongDeg);
-    const [x, y] = polarPointMm(o.centreMm, radius(POLAR_DEPTH_MM.labelFrom) + sign * lane * laneDepthMm, theta);
-    // Text runs along the radius, away from the reading edge, and is never upside down.
-    const outward = theta - 90;
-    const rightHalf = theta < 180;
-    // Labels in outer lanes get a fine leader along their own ray.
-    const leader: Shape[] = [];
-    if (lane > 0) {
-      const [lx1, ly1] = at(alongDeg, POLAR_DEPTH_MM.bandTo);
-      leader.push(line(lx1, ly1, x, y, STROKE_MM.fine, { role: 'label-leader' }, 0.5 * f));
-    }
-    return [
-      ...leader,
-      text(x, y, label, labelSize, {
-        anchor: (sign < 0) === rightHalf ? 'end' : 'start',
-        rotateDeg: rightHalf ? outward : outward + 180,
-        weight: 'bold',
-        data,
-      }),
-    ];
-  };
+  const longestMm = Math.max(0, ...labelled.map((m) => textWidthMm(m.label, labelSize)));
+  const roomMm = o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f;
+  // Radial labels need their length in depth; a narrow ring gets labels along the circle instead.
+  const tangential = longestMm > roomMm && roomMm >= labelSize * 1.1;
+  const radialLabel = tangential ? tangentialLabeller(o, labelled, longestMm, roomMm, radius, angle) : radialLabeller(o, labelled, longestMm, roomMm, radius, angle, at);
 
   for (const mark of o.marks.advance) {
     const [x1, y1] = at(mark.alongDeg, 0);
@@ -126,6 +100,73 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
 }
 
 type At = (alongDeg: number, depthMm: number) => [number, number];
+type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
+
+/** Labels along their mark's ray, in up to three lanes of depth, outer lanes with a fine leader. */
+function radialLabeller(
+  o: PolarScaleOptions,
+  marks: readonly PlacedMark[],
+  longestMm: number,
+  roomMm: number,
+  radius: (depthMm: number) => number,
+  angle: (alongDeg: number) => number,
+  at: At,
+): Labeller {
+  const f = o.depthScale;
+  const sign = o.towards === 'centre' ? -1 : 1;
+  const labelSize = POLAR_DEPTH_MM.labelSize * f;
+  const labelRadius = radius(POLAR_DEPTH_MM.labelFrom);
+  const gapDeg = (labelSize * 1.15 * 360) / (2 * Math.PI * Math.max(labelRadius, 1e-6));
+  const laneDepthMm = longestMm + 1.2 * f;
+  const lanes = labelLanes(marks, gapDeg, Math.min(3, Math.max(1, Math.floor(roomMm / Math.max(laneDepthMm, 1e-6)))));
+  return (alongDeg, label, data) => {
+    const lane = lanes.get(alongDeg);
+    lanes.delete(alongDeg);
+    if (lane === undefined) return [];
+    const theta = angle(alongDeg);
+    const [x, y] = polarPointMm(o.centreMm, labelRadius + sign * lane * laneDepthMm, theta);
+    // Text runs along the radius, away from the reading edge, and is never upside down.
+    const outward = theta - 90;
+    const rightHalf = theta < 180;
+    const leader: Shape[] = [];
+    if (lane > 0) {
+      const [lx1, ly1] = at(alongDeg, POLAR_DEPTH_MM.bandTo);
+      leader.push(line(lx1, ly1, x, y, STROKE_MM.fine, { role: 'label-leader' }, 0.5 * f));
+    }
+    return [
+      ...leader,
+      text(x, y, label, labelSize, { anchor: (sign < 0) === rightHalf ? 'end' : 'start', rotateDeg: rightHalf ? outward : outward + 180, weight: 'bold', data }),
+    ];
+  };
+}
+
+/** Labels along the circle, centred on their mark, in as many rings of text as the depth holds. */
+function tangentialLabeller(
+  o: PolarScaleOptions,
+  marks: readonly PlacedMark[],
+  longestMm: number,
+  roomMm: number,
+  radius: (depthMm: number) => number,
+  angle: (alongDeg: number) => number,
+): Labeller {
+  const f = o.depthScale;
+  const sign = o.towards === 'centre' ? -1 : 1;
+  const labelSize = POLAR_DEPTH_MM.labelSize * f;
+  const laneMm = labelSize * 1.1;
+  const firstRadius = radius(POLAR_DEPTH_MM.labelFrom);
+  const gapDeg = ((longestMm + 1) * 360) / (2 * Math.PI * Math.max(firstRadius, 1e-6));
+  const lanes = labelLanes(marks, gapDeg, Math.max(1, Math.floor(roomMm / laneMm)));
+  return (alongDeg, label, data) => {
+    const lane = lanes.get(alongDeg);
+    lanes.delete(alongDeg);
+    if (lane === undefined) return [];
+    const theta = angle(alongDeg);
+    // Glyph tops face outward: the baseline is the lane's edge nearer the centre.
+    const baseline = firstRadius + sign * lane * laneMm + (sign > 0 ? 0.2 * labelSize : -0.8 * labelSize);
+    const [x, y] = polarPointMm(o.centreMm, baseline, theta);
+    return [text(x, y, label, labelSize, { anchor: 'middle', rotateDeg: theta, weight: 'bold', data })];
+  };
+}
 
 function tdcPointer(o: PolarScaleOptions, at: At): Shape[] {
   const f = o.depthScale;
@@ -149,9 +190,12 @@ function tdcPointer(o: PolarScaleOptions, at: At): Shape[] {
 function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => number): Shape[] {
   const f = o.depthScale;
   const size = 2.6 * f;
+  // Inside a narrow ring when it fits beyond the band, else at the usual depth (past its edge).
+  const deepest = o.maxDepthMm / Math.max(f, 1e-6) - 2.9;
+  const sideDepth = deepest >= POLAR_DEPTH_MM.bandTo + 0.5 ? Math.min(POLAR_DEPTH_MM.sideLabel, deepest) : POLAR_DEPTH_MM.sideLabel;
   const place = (crankDeg: number, label: string, role: string) => {
     const along = alongRotationDeg(crankDeg, o.carrier);
-    const [x, y] = at(along, crankDeg === 180 ? POLAR_DEPTH_MM.labelFrom + 1 : POLAR_DEPTH_MM.sideLabel);
+    const [x, y] = at(along, crankDeg === 180 ? POLAR_DEPTH_MM.labelFrom + 1 : sideDepth);
     const theta = angle(along);
     const upright = theta > 90 && theta < 270 ? theta + 180 : theta;
     return text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role } });

@@ -75,7 +75,7 @@ export function ringLayout(req: SheetRequest): PolarLayout {
   const innerRadiusMm = (req.innerDiameterMm ?? 0) / 2;
   const outerRadiusMm = Math.max((req.outerDiameterMm ?? 0) / 2, innerRadiusMm);
   const depthScale = clampScale((outerRadiusMm - innerRadiusMm) / RING_SCALE_DEPTH_MM);
-  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter', 80);
+  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter', outerRadiusMm - innerRadiusMm - 0.3);
   const shapes: Shape[] = [
     circle(0, 0, outerRadiusMm, STROKE_MM.outline, { role: 'cut-line' }),
     circle(0, 0, innerRadiusMm, STROKE_MM.outline, { role: 'cut-line-inner' }),
