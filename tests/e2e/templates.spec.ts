@@ -118,7 +118,7 @@ test('two edits from the same version: the later save is refused with who and wh
 
   // The winner's value stands and the history holds it as a revision.
   await first.reload();
-  await expect(first.getByText('19° BTDC', { exact: true })).toBeVisible();
+  await expect(first.locator('dl').getByText('19° BTDC', { exact: true })).toBeVisible();
   await expect(first.getByRole('list', { name: 'History' })).toContainText(/Static advance: 18° BTDC → 19° BTDC/);
   await context.close();
 });
