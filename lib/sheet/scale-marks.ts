@@ -64,9 +64,12 @@ export function bandIntervals(bandDeg: readonly [number, number], range: ScaleMa
   const lo = Math.min(bandDeg[0], bandDeg[1]);
   const hi = Math.max(bandDeg[0], bandDeg[1]);
   if (!(hi > lo)) return [];
-  // Rotating: x° BTDC lies +x along rotation; stationary: −x, i.e. 360 − x.
-  const from = carrier === 'rotating' ? lo : 360 - hi;
-  const to = from + (hi - lo);
+  // Both ends placed by the one direction rule; the band is the short way between them.
+  const widthDeg = hi - lo;
+  const loAlong = normalizeDeg(alongRotationDeg(btdcToCrankDeg(lo), carrier));
+  const hiAlong = normalizeDeg(alongRotationDeg(btdcToCrankDeg(hi), carrier));
+  const from = Math.abs(normalizeDeg(hiAlong - loAlong) - widthDeg) < 1e-6 ? loAlong : hiAlong;
+  const to = from + widthDeg;
   if (range === 'turn') return [{ fromAlongDeg: from, toAlongDeg: to }];
   const pieces: AlongInterval[] = [];
   const firstTurn = Math.floor((range.fromAlongDeg - to) / 360);

@@ -2,7 +2,7 @@ import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
 import { chooseLevels } from './graduations';
 import { formatDeg, labelLanes, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
-import { alongRotationDeg, type Carrier } from './scale-direction';
+import { alongRotationDeg, crankFromAlongDeg } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
 import { STROKE_MM, TEXT_MM, textWidthMm } from './sheet-style';
@@ -51,9 +51,11 @@ export function windowSpanDeg([fromDeg, toDeg]: readonly [number, number]): numb
 export function stripRange(req: Pick<SheetRequest, 'carrier' | 'seamCrankDeg' | 'windowCrankDeg'>): { startAlongDeg: number; spanDeg: number } {
   if (!req.windowCrankDeg) return { startAlongDeg: normalizeDeg(alongRotationDeg(req.seamCrankDeg, req.carrier)), spanDeg: 360 };
   const spanDeg = windowSpanDeg(req.windowCrankDeg);
-  // Along the arrow a rotating strip meets the window's later crank end first.
-  const firstCrank = req.carrier === 'rotating' ? req.windowCrankDeg[1] : req.windowCrankDeg[0];
-  return { startAlongDeg: normalizeDeg(alongRotationDeg(firstCrank, req.carrier)), spanDeg };
+  // The strip starts at whichever window end comes first along the arrow.
+  const fromAlong = normalizeDeg(alongRotationDeg(req.windowCrankDeg[0], req.carrier));
+  const toAlong = normalizeDeg(alongRotationDeg(req.windowCrankDeg[1], req.carrier));
+  const forwards = spanDeg === 360 || Math.abs(normalizeDeg(toAlong - fromAlong) - spanDeg) < 1e-6;
+  return { startAlongDeg: forwards ? fromAlong : toAlong, spanDeg };
 }
 
 /** Splits the strip into the fewest equal segments that fit `rowLengthMm` with their overlap or tail. */
@@ -124,12 +126,12 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
 
   const startRole = index > 0 ? 'segment-start' : plan.window ? 'window-end' : 'seam';
   const startData: ShapeData = { role: startRole };
-  if (index === 0) startData.crankDeg = normalizeDeg(alongToCrank(segment.startAlongDeg, req.carrier));
+  if (index === 0) startData.crankDeg = crankFromAlongDeg(segment.startAlongDeg, req.carrier);
   shapes.push(line(0, top, 0, top + w, STROKE_MM.heavy, tag(startData)));
   if (!last) shapes.push(line(segment.markedMm, top - 1.5, segment.markedMm, top + w + 1.5, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
   else {
     const endAlong = segment.startAlongDeg + segment.markedMm / plan.mmPerDeg;
-    shapes.push(line(segment.markedMm, top, segment.markedMm, top + w, STROKE_MM.heavy, tag({ role: plan.window ? 'window-end' : 'seam', crankDeg: normalizeDeg(alongToCrank(endAlong, req.carrier)) })));
+    shapes.push(line(segment.markedMm, top, segment.markedMm, top + w, STROKE_MM.heavy, tag({ role: plan.window ? 'window-end' : 'seam', crankDeg: crankFromAlongDeg(endAlong, req.carrier) })));
   }
 
   for (const tick of marks.ticks)
@@ -190,10 +192,6 @@ function freeSpot(busy: ReadonlyArray<[number, number]>, lengthMm: number, limit
     if (busy.every(([a, b]) => b < start || a > start + lengthMm)) return start;
   }
   return undefined;
-}
-
-function alongToCrank(alongDeg: number, carrier: Carrier): number {
-  return carrier === 'rotating' ? -alongDeg : alongDeg;
 }
 
 function tdcPointers(marks: ScaleMarks, x: (a: number) => number, top: number, depths: StripDepths, w: number, tag: (d: ShapeData) => ShapeData): Shape[] {
