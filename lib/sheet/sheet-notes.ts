@@ -1,6 +1,7 @@
 import type { SheetKind, SheetRequest } from './sheet-request';
 import { describeCorrection } from './printer-correction';
 import type { GraduationLevel } from './drawing';
+import { btdcToCrankDeg, wheelAngleDeg } from './scale-direction';
 
 /** The words printed on every sheet: title block lines, the print line, cautions and the "which way" note. */
 
@@ -86,7 +87,8 @@ export function whichWayNote(req: SheetRequest): string {
       ? 'Which way: wrap the strip so its arrow points the way the rim moves. On the rim (fixed pointer) the BTDC marks lie ahead of TDC along the arrow, the ATDC marks behind it. The arrow carries the direction, so the same strip serves clockwise and counter-clockwise engines.'
       : 'Which way: stick the strip on the casing with its arrow pointing the way the flywheel rim moves. Read against the flywheel’s mark, the BTDC marks lie behind TDC (against the arrow), the ATDC marks ahead of it. The arrow carries the direction, so the same strip serves clockwise and counter-clockwise engines.';
   const withRotation = req.carrier === 'rotating';
-  const btdcSide = withRotation === (req.rotation === 'cw') ? 'clockwise' : 'counter-clockwise';
+  // Worded from where the one direction rule puts 45° BTDC.
+  const btdcSide = wheelAngleDeg(btdcToCrankDeg(45), req) < 180 ? 'clockwise' : 'counter-clockwise';
   const atdcSide = btdcSide === 'clockwise' ? 'counter-clockwise' : 'clockwise';
   return `Which way: the flywheel turns ${rotationWord(req)} as seen from this side (arrow). ${
     withRotation ? 'On a rotating scale' : 'On a stationary scale'
