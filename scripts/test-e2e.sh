@@ -7,6 +7,8 @@ bash scripts/ensure-chromium.sh
 work=$(mktemp -d -t rimscale-e2e-XXXXXX)
 trap 'rm -rf "$work"' EXIT
 export RIMSCALE_DB_FILE="$work/e2e.sqlite"
+# Template photos uploaded by the browser tests go with the temporary database.
+export RIMSCALE_UPLOAD_DIR="$work/uploads"
 export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-e2e}"
 port=$(node scripts/free-port.mjs)
 export E2E_BASE_URL="http://127.0.0.1:$port"

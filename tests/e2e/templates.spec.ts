@@ -1,6 +1,7 @@
 import { readFile } from 'node:fs/promises';
 import { expect, test, type Page } from '@playwright/test';
 import { PDFParse } from 'pdf-parse';
+import sharp from 'sharp';
 
 // Demo users of db/seeds/01_demo_shop.ts (invented shop).
 const TECH = { email: 'tech@harbourlane.test', password: 'harbour-tech-26' };
@@ -120,5 +121,31 @@ test('two edits from the same version: the later save is refused with who and wh
   await first.reload();
   await expect(first.locator('dl').getByText('19° BTDC', { exact: true })).toBeVisible();
   await expect(first.getByRole('list', { name: 'History' })).toContainText(/Static advance: 18° BTDC → 19° BTDC/);
+  await context.close();
+});
+
+test('a photo uploads through the page (a PNG named .jpg is kept as PNG) and an 11 MB file is refused', async ({ browser }) => {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, TECH);
+  await page.getByRole('link', { name: 'Pier 100 reed-valve kart' }).click();
+  await expect(page).toHaveURL(/\/templates\/\d+$/);
+  const png = await sharp({ create: { width: 120, height: 80, channels: 3, background: '#c04030' } }).png().toBuffer();
+  await page.getByLabel(/^Photo \(JPEG/).setInputFiles({ name: 'pointer.jpg', mimeType: 'image/jpeg', buffer: png });
+  await page.getByLabel('Caption').fill('Pointer at the left crankcase bolt');
+  await page.getByRole('button', { name: 'Upload' }).click();
+  const thumb = page.getByRole('img', { name: 'Pointer at the left crankcase bolt' });
+  await expect(thumb).toBeVisible();
+  const full = await page.request.get((await thumb.locator('..').getAttribute('href'))!);
+  expect(full.headers()['content-type']).toBe('image/png');
+
+  const id = page.url().split('/').pop();
+  const big = Buffer.alloc(11 * 1024 * 1024, 0);
+  png.copy(big);
+  const refused = await page.request.post(`/api/v1/workspaces/harbour-lane/templates/${id}/photos`, {
+    multipart: { photo: { name: 'big.png', mimeType: 'image/png', buffer: big } },
+  });
+  expect(refused.status()).toBe(413);
+  expect((await refused.json()).error).toMatch(/larger than 10 MB/);
   await context.close();
 });
