@@ -70,3 +70,22 @@ describe('printer correction', () => {
     expect(words).toContain('printer scale x 1.020 · y 0.970');
   });
 });
+
+describe('correctForPrinter (lib/sheet/printer-correction.ts)', () => {
+  it('pre-scales coordinates by 1/scale per axis and leaves text sizes alone', async () => {
+    const { correctForPrinter } = await import('@/lib/sheet/printer-correction');
+    const [bar, label] = correctForPrinter(
+      [
+        { type: 'line', x1Mm: 10, y1Mm: 20, x2Mm: 110, y2Mm: 20, strokeMm: 0.2 },
+        { type: 'text', xMm: 49, yMm: 97, text: '100 mm', sizeMm: 2, anchor: 'start', rotateDeg: 0, weight: 'normal', font: 'ui' },
+      ],
+      { printerScaleX: 0.98, printerScaleY: 0.97 },
+    );
+    if (bar?.type !== 'line' || label?.type !== 'text') throw new Error('shape types changed');
+    expect(bar.x2Mm - bar.x1Mm).toBeCloseTo(102.0408, 4); // 100 / 0.98
+    expect(bar.y1Mm).toBeCloseTo(20 / 0.97, 9);
+    expect(label.xMm).toBeCloseTo(50, 9); // 49 / 0.98
+    expect(label.yMm).toBeCloseTo(100, 9); // 97 / 0.97
+    expect(label.sizeMm).toBe(2);
+  });
+});
