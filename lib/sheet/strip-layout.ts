@@ -2,7 +2,7 @@ import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
 import { chooseLevels } from './graduations';
 import { formatDeg, labelLanes, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
-import { alongRotationDeg, crankFromAlongDeg } from './scale-direction';
+import { alongRotationDeg, crankFromAlongDeg, stripXMm } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
 import { STROKE_MM, TEXT_MM, textWidthMm } from './sheet-style';
@@ -114,7 +114,7 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   const depths = stripDepths(w);
   const many = plan.segments.length > 1;
   const tag = (data: ShapeData): ShapeData => (many ? { ...data, segment: segment.letter } : data);
-  const x = (alongDeg: number) => (alongDeg - segment.startAlongDeg) * plan.mmPerDeg;
+  const x = (alongDeg: number) => stripXMm(alongDeg, segment.startAlongDeg, plan.mmPerDeg);
   const marks = segmentMarks(req, plan, segment, finestLevel, stride);
   const rowLength = segment.markedMm + segment.extensionMm;
   const shapes: Shape[] = [];
