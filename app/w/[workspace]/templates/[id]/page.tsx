@@ -68,6 +68,16 @@ export default async function TemplatePage({ params }: Props) {
               label={template.archived ? 'Return to the list' : 'Archive'}
               busyLabel="Saving…"
             />
+            {access.role === 'owner' ? (
+              <ActionButton
+                url={api}
+                method="DELETE"
+                label="Delete"
+                busyLabel="Deleting…"
+                confirm={`Delete ${template.name} with its photos and history? This cannot be undone; archiving keeps it.`}
+                after={`/w/${slug}/templates`}
+              />
+            ) : null}
           </div>
         ) : null}
       </header>
