@@ -1,13 +1,10 @@
 import { z } from 'zod';
 import { jsonError } from '@/app/lib/api';
 import { requireRole } from '@/app/lib/authz';
+import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { findTemplate } from '@/db/templates/find-template';
-import { buildDrawing } from '@/lib/sheet/build-drawing';
-import { renderSvg } from '@/lib/sheet/render-svg';
-import { sheetFileName } from '@/lib/sheet/sheet-file-name';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
 import { availableSheetKinds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
-import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
 import { handle, parseId, templateNotFound, type TemplateParams } from '../../_shared/handle';
 
 export const runtime = 'nodejs';
@@ -48,15 +45,6 @@ export async function GET(request: Request, { params }: TemplateParams): Promise
     const sheet = sheetRequestSchema.safeParse({ ...input, format: query.data.format });
     if (!sheet.success) return jsonError(400, 'The template’s figures do not make a valid sheet', toFieldIssues(sheet.error));
 
-    const drawing = buildDrawing(sheet.data);
-    const body = sheet.data.format === 'svg' ? renderSvg(drawing) : new Uint8Array(await renderSheetPdf(drawing));
-    return new Response(body, {
-      headers: {
-        'Content-Type': sheet.data.format === 'svg' ? 'image/svg+xml; charset=utf-8' : 'application/pdf',
-        'Content-Disposition': `attachment; filename="${sheetFileName(sheet.data)}"`,
-        'Cache-Control': 'no-store',
-        'X-Content-Type-Options': 'nosniff',
-      },
-    });
+    return sheetDownloadResponse(sheet.data);
   });
 }

@@ -1,0 +1,26 @@
+import 'server-only';
+import { buildDrawing } from '@/lib/sheet/build-drawing';
+import { renderSvg } from '@/lib/sheet/render-svg';
+import { sheetFileName } from '@/lib/sheet/sheet-file-name';
+import type { SheetRequest } from '@/lib/sheet/sheet-request';
+import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
+
+const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
+  svg: 'image/svg+xml; charset=utf-8',
+  pdf: 'application/pdf',
+};
+
+/** A validated sheet request drawn and answered as a PDF or SVG download (the public and the template routes alike). */
+export async function sheetDownloadResponse(sheet: SheetRequest): Promise<Response> {
+  const drawing = buildDrawing(sheet);
+  const body = sheet.format === 'svg' ? renderSvg(drawing) : new Uint8Array(await renderSheetPdf(drawing));
+  return new Response(body, {
+    status: 200,
+    headers: {
+      'Content-Type': CONTENT_TYPE[sheet.format],
+      'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
+      'Cache-Control': 'no-store',
+      'X-Content-Type-Options': 'nosniff',
+    },
+  });
+}
