@@ -2,7 +2,9 @@
 # The whole suite: types, unit and integration tests, then browser tests.
 set -euo pipefail
 cd "$(dirname "$0")/.."
+export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-e2e}"
 echo "== typecheck"
+npx next typegen >/dev/null # route types and next-env.d.ts, which tsc reads
 npx tsc --noEmit
 echo "== unit and integration tests"
 npx vitest run
