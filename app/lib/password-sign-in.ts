@@ -32,7 +32,8 @@ export async function signInWithPassword(credentials: unknown, address: string):
   const user = await findUserByEmail(email);
   if (!(await passwordMatches(parsed.data.password, user?.password_hash))) {
     await consumePoint(keys).catch(() => undefined);
-    if (user) await recordAudit({ action: 'sign-in-refused', actorUserId: user.id, detail: { address } });
+    // Written for unknown addresses too, so both refusals cost the same work.
+    await recordAudit({ action: 'sign-in-refused', actorUserId: user?.id ?? null, detail: { address } });
     return null;
   }
   await forgetKey('signInPerAccount', email);

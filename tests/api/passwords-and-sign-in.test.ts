@@ -85,6 +85,9 @@ describe('sign-in', () => {
     // next-auth reports both as CredentialsSignin; the page shows one sentence for it.
     expect(signInErrorMessage('CredentialsSignin')).toBe(SIGN_IN_REFUSED);
     expect(SIGN_IN_REFUSED).not.toMatch(/no account|not found|unknown|exist/i);
+    // Both leave the same trace (one refusal row each), so neither costs different work.
+    const refusals = await world.knex(TABLES.auditLog).where({ action: 'sign-in-refused' }).orderBy('id');
+    expect(refusals.map((r) => r.actor_user_id)).toEqual([null, world.users.viewer.id]);
   });
 
   it('accepts the address in any case and with spaces around it', async () => {
