@@ -3,6 +3,7 @@ import { nestBlock, toBlock, type Block } from './block';
 import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
+import { addPageBands, pageBandHeightMm } from './page-band';
 import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
 import { sheetRequestSchema, type SheetRequest } from './sheet-request';
@@ -79,7 +80,8 @@ function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content
   }
   if (fitsPage({ widthMm: Math.max(scale.widthMm, fullInfo.widthMm), heightMm: scale.heightMm + BLOCK_GAP_MM + fullInfo.heightMm }, page))
     return stackOnPages([scale, fullInfo], page);
-  if (fitsPage(scale, page)) return stackOnPages([fullInfo, scale], page);
+  // The wheel is what the user came for: it takes page 1, the info page follows.
+  if (fitsPage(scale, page)) return stackOnPages([scale, fullInfo], page);
   return tileOversized(fullInfo, scale, page);
 }
 
@@ -114,9 +116,15 @@ export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): D
   });
   // The scribe chart's first page holds what the info panel leaves; its lines do not depend on the table.
   const infoHeightMm = request.kind === 'scribe' ? infoBlock(contentFor(), request, printableMm(page).widthMm).heightMm : 0;
-  const layout = scaleLayout(request, page, infoHeightMm);
+  let layout = scaleLayout(request, page, infoHeightMm);
   const content = contentFor(layout);
-  const paged = arrange(request, page, layout, content);
+  let paged = arrange(request, page, layout, content);
+  if (paged.pages.length > 1) {
+    // Several pages: each gets a band (title, page N of M, print line, check bar), so lay out again in what it leaves.
+    const banded: PageSpec = { ...page, bandMm: pageBandHeightMm(printableMm(page).widthMm) };
+    if (request.kind === 'scribe') layout = scaleLayout(request, banded, infoHeightMm);
+    paged = addPageBands(arrange(request, banded, layout, content), banded, title, request);
+  }
   const warnings = [...layout.warnings, ...labelWarnings(paged.shapes), ...paged.warnings];
   const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings, title };
   if (paged.centreMm) drawing.centreMm = paged.centreMm;

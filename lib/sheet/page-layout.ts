@@ -7,21 +7,29 @@ import { STROKE_MM, TEXT_MM } from './sheet-style';
  * Puts blocks on pages. Two ways, both expressed through Drawing.pages:
  * - stackOnPages: blocks flow top to bottom into page-sized regions stacked down the drawing;
  *   page i's viewport is region i, placed at the page's top-left corner (origin [0, 0]).
- * - tileOversized: page 1 is a region holding the info panel; below it the oversized block
- *   (a big wheel or ring) is covered by a grid of overlapping viewports, one page each, with
- *   registration crosses drawn in the overlaps and a tile label in each page's top band.
+ * - tileOversized: the oversized block (a big wheel or ring) is covered by a grid of overlapping
+ *   viewports, one page each, with registration crosses drawn in the overlaps and a tile label
+ *   in each page's top band; the info panel's region (drawn above the block) is the last page.
+ * A page may reserve `bandMm` at the top of its printable area for the page band (page-band.ts).
  */
 
-export type PageSpec = { sizeMm: Size; marginMm: number };
-export type PagedDrawing = { sizeMm: Size; shapes: Shape[]; pages: PageLayout[]; centreMm?: [number, number]; warnings: string[] };
+export type PageSpec = { sizeMm: Size; marginMm: number; bandMm?: number };
+/** `tileNames[i]` names page i when it is a tile of an oversized block ('A1', 'B2', …). */
+export type PagedDrawing = { sizeMm: Size; shapes: Shape[]; pages: PageLayout[]; centreMm?: [number, number]; warnings: string[]; tileNames?: Array<string | undefined> };
 
 export const BLOCK_GAP_MM = 5;
 export const TILE_LABEL_BAND_MM = 7;
 export const TILE_OVERLAP_MM = 12;
 const EPS = 1e-6;
 
+/** The room for content: the page less its margins and less the page band, if it has one. */
 export function printableMm(page: PageSpec): Size {
-  return { widthMm: page.sizeMm.widthMm - 2 * page.marginMm, heightMm: page.sizeMm.heightMm - 2 * page.marginMm };
+  return { widthMm: page.sizeMm.widthMm - 2 * page.marginMm, heightMm: page.sizeMm.heightMm - 2 * page.marginMm - (page.bandMm ?? 0) };
+}
+
+/** Where content starts below the page's top edge. */
+export function contentTopMm(page: PageSpec): number {
+  return page.marginMm + (page.bandMm ?? 0);
 }
 
 export function fitsPage(block: Pick<Block, 'widthMm' | 'heightMm'>, page: PageSpec): boolean {
@@ -51,7 +59,7 @@ export function stackOnPages(blocks: readonly Block[], page: PageSpec): PagedDra
       cursor = 0;
     }
     const x = page.marginMm + Math.max(0, (printable.widthMm - block.widthMm) / 2);
-    const y = region * page.sizeMm.heightMm + page.marginMm + cursor;
+    const y = region * page.sizeMm.heightMm + contentTopMm(page) + cursor;
     placeBlock(block, x, y, shapes);
     if (block.centreMm && !centreMm) centreMm = [block.centreMm[0] + x, block.centreMm[1] + y];
     cursor += block.heightMm + BLOCK_GAP_MM;
@@ -82,7 +90,8 @@ export function tileOversized(info: Block, big: Block, page: PageSpec): PagedDra
   const window = { widthMm: printable.widthMm, heightMm: printable.heightMm - TILE_LABEL_BAND_MM };
   const bx = page.marginMm;
   const by = page.sizeMm.heightMm + page.marginMm;
-  const shapes: Shape[] = placeBlock(big, bx, by, placeBlock(info, page.marginMm, page.marginMm));
+  const top = contentTopMm(page);
+  const shapes: Shape[] = placeBlock(big, bx, by, placeBlock(info, page.marginMm, top));
   const xs = tileStarts(big.widthMm, window.widthMm, TILE_OVERLAP_MM);
   const ys = tileStarts(big.heightMm, window.heightMm, TILE_OVERLAP_MM);
   const viewWidth = Math.min(window.widthMm, big.widthMm);
@@ -96,27 +105,33 @@ export function tileOversized(info: Block, big: Block, page: PageSpec): PagedDra
     const yc = by + (ys[j + 1]! + ys[j]! + viewHeight) / 2;
     for (const x of xs) shapes.push(...registrationCross(bx + x + viewWidth / 2, yc));
   }
-  const pages: PageLayout[] = [wholePage(page, 0)];
+  const pages: PageLayout[] = [];
+  const tileNames: Array<string | undefined> = [];
   ys.forEach((y, row) =>
     xs.forEach((x, column) => {
       const name = `${ROW_LETTERS[row % 26]}${column + 1}`;
+      tileNames.push(name);
       pages.push({
         sizeMm: { ...page.sizeMm },
         viewportMm: { xMm: bx + x, yMm: by + y, widthMm: viewWidth, heightMm: viewHeight },
-        originMm: [page.marginMm, page.marginMm + TILE_LABEL_BAND_MM],
+        originMm: [page.marginMm, top + TILE_LABEL_BAND_MM],
         pageShapes: [
-          text(page.marginMm, page.marginMm + TEXT_MM.body + 0.5, `Tile ${name} (row ${ROW_LETTERS[row % 26]} of ${ys.length}, column ${column + 1} of ${xs.length}): overlap the neighbours so the registration crosses coincide, then tape. Print at 100 %.`, TEXT_MM.small, {
+          text(page.marginMm, top + TEXT_MM.body + 0.5, `Tile ${name} (row ${ROW_LETTERS[row % 26]} of ${ys.length}, column ${column + 1} of ${xs.length}): overlap the neighbours so the registration crosses coincide, then tape. Print at 100 %.`, TEXT_MM.small, {
             data: { role: 'tile-label' },
           }),
         ],
       });
     }),
   );
+  // The wheel is what the user came for: its tiles come first, the info page after them.
+  pages.push(wholePage(page, 0));
+  tileNames.push(undefined);
   const drawing: PagedDrawing = {
     sizeMm: { widthMm: Math.max(page.sizeMm.widthMm, big.widthMm + 2 * page.marginMm), heightMm: by + big.heightMm + page.marginMm },
     shapes,
     pages,
-    warnings: [`The sheet is larger than one ${'page'}: it is split into ${xs.length * ys.length} tiles (${ys.length} × ${xs.length}) after an info page`],
+    tileNames,
+    warnings: [`The sheet is larger than one ${'page'}: it is split into ${xs.length * ys.length} tiles (${ys.length} × ${xs.length}), followed by an info page`],
   };
   if (big.centreMm) drawing.centreMm = [big.centreMm[0] + bx, big.centreMm[1] + by];
   return drawing;
