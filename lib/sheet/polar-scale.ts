@@ -94,7 +94,7 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   }
 
   shapes.push(...tdcPointer(o, at));
-  shapes.push(...sideLabels(o, at, angle));
+  shapes.push(...sideLabels(o, at, angle, labelled.map((m) => m.alongDeg)));
   shapes.push(...rotationArrow(o, radius(POLAR_DEPTH_MM.arrow)));
   return shapes;
 }
@@ -187,20 +187,55 @@ function tdcPointer(o: PolarScaleOptions, at: At): Shape[] {
   ];
 }
 
-function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => number): Shape[] {
+/** Along-rotation distance between two positions on a turn, 0–180°. */
+function turnDistanceDeg(a: number, b: number): number {
+  const d = Math.abs(a - b) % 360;
+  return d > 180 ? 360 - d : d;
+}
+
+/**
+ * Where on its half a side label goes: the crank angle nearest the half's middle (90 or 270)
+ * that keeps `clearDeg` from every labelled mark, TDC, BDC and the rotation arrow by BDC;
+ * when none does, the one farthest from them all.
+ */
+export function sideLabelCrankDeg(middleCrankDeg: 90 | 270, busyAlongDeg: readonly number[], carrier: Carrier, clearDeg: number): number {
+  const busy = [...busyAlongDeg, ...[0, 166, 180, 194].map((crank) => alongRotationDeg(crank, carrier))];
+  const clearance = (crankDeg: number) => Math.min(...busy.map((b) => turnDistanceDeg(alongRotationDeg(crankDeg, carrier), b)));
+  let best = middleCrankDeg as number;
+  let bestClearance = clearance(best);
+  if (bestClearance >= clearDeg) return best;
+  // Outward from the middle in 2° steps, so the nearest clear angle wins.
+  for (let step = 1; step <= 30; step += 1) {
+    for (const crankDeg of [middleCrankDeg - 2 * step, middleCrankDeg + 2 * step]) {
+      const c = clearance(crankDeg);
+      if (c >= clearDeg) return crankDeg;
+      if (c > bestClearance) [best, bestClearance] = [crankDeg, c];
+    }
+  }
+  return best;
+}
+
+function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => number, markAlongDeg: readonly number[]): Shape[] {
   const f = o.depthScale;
   const size = 2.6 * f;
   // Inside a narrow ring when it fits beyond the band, else at the usual depth (past its edge).
   const deepest = o.maxDepthMm / Math.max(f, 1e-6) - 2.9;
   const sideDepth = deepest >= POLAR_DEPTH_MM.bandTo + 0.5 ? Math.min(POLAR_DEPTH_MM.sideLabel, deepest) : POLAR_DEPTH_MM.sideLabel;
+  const sideRadiusMm = Math.max(o.edgeRadiusMm + (o.towards === 'centre' ? -1 : 1) * sideDepth * f, 1e-6);
+  // Half the side label's length plus a mark label's thickness and a gap, as an angle at its radius.
+  const clearDeg = (((textWidthMm('BTDC side', size) / 2 + POLAR_DEPTH_MM.labelSize * f + 0.8) / sideRadiusMm) * 180) / Math.PI;
   const place = (crankDeg: number, label: string, role: string) => {
     const along = alongRotationDeg(crankDeg, o.carrier);
     const [x, y] = at(along, crankDeg === 180 ? POLAR_DEPTH_MM.labelFrom + 1 : sideDepth);
     const theta = angle(along);
     const upright = theta > 90 && theta < 270 ? theta + 180 : theta;
-    return text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role } });
+    return text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role, crankDeg } });
   };
-  return [place(270, 'BTDC side', 'btdc-side'), place(90, 'ATDC side', 'atdc-side'), place(180, 'BDC', 'bdc-label')];
+  return [
+    place(sideLabelCrankDeg(270, markAlongDeg, o.carrier, clearDeg), 'BTDC side', 'btdc-side'),
+    place(sideLabelCrankDeg(90, markAlongDeg, o.carrier, clearDeg), 'ATDC side', 'atdc-side'),
+    place(180, 'BDC', 'bdc-label'),
+  ];
 }
 
 /** A curved arrow over BDC ± 14° (TDC side is busy with advance marks), pointing the way the flywheel turns as seen. */
