@@ -10,12 +10,13 @@ export type UserRow = {
   name: string;
   password_hash: string | null;
   email_verified_at: string | null;
+  session_version: number;
 };
 export type WorkspaceKind = 'personal' | 'shop';
 export type WorkspaceRow = { id: number; slug: string; name: string; kind: WorkspaceKind };
 export type MemberRow = { membershipId: number; userId: number; email: string; name: string; role: Role };
 
-const USER_FIELDS = ['id', 'email', 'name', 'password_hash', 'email_verified_at'] as const;
+const USER_FIELDS = ['id', 'email', 'name', 'password_hash', 'email_verified_at', 'session_version'] as const;
 const WORKSPACE_FIELDS = ['id', 'slug', 'name', 'kind'] as const;
 
 export function normalizeEmail(email: string): string {

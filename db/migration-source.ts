@@ -3,6 +3,7 @@ import * as createAccounts from './migrations/20261201000000_create_accounts';
 import * as createAccountRecords from './migrations/20261201000100_create_account_records';
 import * as createPrinterProfiles from './migrations/20261201000200_create_printer_profiles';
 import * as createTemplates from './migrations/20261201000600_create_templates';
+import * as addSessionVersion from './migrations/20261201001500_add_session_version';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
 
@@ -16,6 +17,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261201000100_create_account_records.ts': createAccountRecords,
   '20261201000200_create_printer_profiles.ts': createPrinterProfiles,
   '20261201000600_create_templates.ts': createTemplates,
+  '20261201001500_add_session_version.ts': addSessionVersion,
 };
 
 export const staticMigrationSource: Knex.MigrationSource<string> = {

@@ -90,6 +90,8 @@ export async function resetPassword(token: string, password: string): Promise<Se
     .update({
       password_hash: await hashPassword(password),
       email_verified_at: db().raw('coalesce(email_verified_at, ?)', [now]),
+      // Signs the account out everywhere: sessions made with the old password stop working.
+      session_version: db().raw('session_version + 1'),
     });
   await retireTokens('reset-password', used.userId);
   await recordAudit({ action: 'password-reset', actorUserId: used.userId });

@@ -30,11 +30,14 @@ export const authOptions: NextAuthOptions = {
   ],
   callbacks: {
     jwt({ token, user }) {
-      if (user) token.sub = user.id;
+      if (user) {
+        token.sub = user.id;
+        token.sv = user.sessionVersion ?? 0;
+      }
       return token;
     },
     session({ session, token }) {
-      session.user = { id: token.sub ?? '', email: token.email ?? '', name: token.name ?? '' };
+      session.user = { id: token.sub ?? '', email: token.email ?? '', name: token.name ?? '', sessionVersion: token.sv ?? 0 };
       return session;
     },
   },

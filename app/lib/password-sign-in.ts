@@ -5,7 +5,7 @@ import { signInSchema } from '@/lib/account-forms';
 import { passwordMatches } from './passwords';
 import { assertNotLimited, consumePoint, forgetKey, RateLimitedError } from './rate-limit';
 
-export type SignedInUser = { id: string; email: string; name: string };
+export type SignedInUser = { id: string; email: string; name: string; sessionVersion: number };
 
 /** The error code next-auth passes to /sign-in when the limiter refuses an attempt. */
 export const RATE_LIMITED_CODE = 'RateLimited';
@@ -38,5 +38,5 @@ export async function signInWithPassword(credentials: unknown, address: string):
   }
   await forgetKey('signInPerAccount', email);
   await recordAudit({ action: 'sign-in', actorUserId: user!.id, detail: { address } });
-  return { id: String(user!.id), email: user!.email, name: user!.name };
+  return { id: String(user!.id), email: user!.email, name: user!.name, sessionVersion: user!.session_version };
 }

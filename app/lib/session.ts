@@ -1,6 +1,7 @@
 import 'server-only';
 import { getServerSession } from 'next-auth';
 import { cookies } from 'next/headers';
+import { findUserById } from '@/db/accounts';
 import { isSessionCookieName } from '@/lib/session-cookie';
 import { authOptions } from './auth-options';
 
@@ -15,5 +16,8 @@ export async function sessionUserId(): Promise<number | null> {
   if (!jar.getAll().some((c) => isSessionCookieName(c.name))) return null;
   const session = await getServerSession(authOptions);
   const id = Number(session?.user?.id);
-  return Number.isInteger(id) && id > 0 ? id : null;
+  if (!Number.isInteger(id) || id <= 0) return null;
+  const user = await findUserById(id);
+  // A password reset raises the version: sessions signed before it read as signed out.
+  return user && user.session_version === session?.user?.sessionVersion ? id : null;
 }

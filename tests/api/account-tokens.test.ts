@@ -58,6 +58,8 @@ describe('password reset links', () => {
     const token = await tokenMailedTo(email, '/reset-password/confirm');
     const first = await callRoute(confirmReset, { body: { token, password: 'a fresh long password' } });
     expect(first.status).toBe(200);
+    // The reset ends the account's older sessions (app/lib/session.ts compares this version).
+    expect((await world.knex(TABLES.users).where({ email }).first()).session_version).toBe(1);
     const again = await callRoute(confirmReset, { body: { token, password: 'another long password' } });
     expect(again.status).toBe(400);
     expect(again.json.error).toBe(TOKEN_REFUSAL_MESSAGES.used);

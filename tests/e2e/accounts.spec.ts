@@ -115,12 +115,17 @@ test('an owner invites by e-mail; the invitee signs up through the link and join
   await expect(page.getByRole('cell', { name: invitee })).toBeVisible();
 });
 
-test('password reset by e-mailed link: the new password works, the old one and the used link do not', async ({ page, request }) => {
+test('password reset by e-mailed link: the new password works, the old one and the used link do not', async ({ page, request, browser }) => {
   const email = `reset-${unique()}@example.test`;
   const created = await request.post('/api/v1/account/sign-up', {
     data: { name: 'Reset Tester', email, password: 'the original password' },
   });
   expect(created.status()).toBe(201);
+  // A session opened with the old password somewhere else…
+  const elsewhere = await browser.newContext();
+  const oldSession = await elsewhere.newPage();
+  await signIn(oldSession, email, 'the original password');
+  await expect(oldSession).toHaveURL(/\/account$/);
 
   await page.goto('/reset-password');
   await page.getByLabel('E-mail', { exact: true }).fill(email);
@@ -140,6 +145,10 @@ test('password reset by e-mailed link: the new password works, the old one and t
   await signIn(page, email, 'a brand new password');
   await expect(page).toHaveURL(/\/account$/);
   await expect(page.getByText(`Reset Tester · ${email}`)).toBeVisible();
+  // …ends with the reset.
+  await oldSession.goto('/account');
+  await expect(oldSession).toHaveURL(/\/sign-in\?callbackUrl=%2Faccount/);
+  await elsewhere.close();
 
   await page.goto(link!);
   await page.getByLabel('New password', { exact: true }).fill('yet another password');
