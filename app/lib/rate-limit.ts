@@ -7,6 +7,8 @@ const LIMITS = {
   signInPerAddress: { points: 30, duration: 15 * 60 },
   resetPerAccount: { points: 3, duration: 60 * 60 },
   resetPerAddress: { points: 10, duration: 60 * 60 },
+  // Sign-up says when an address already has an account, so it is limited like a guess.
+  signUpPerAddress: { points: 20, duration: 60 * 60 },
 } as const;
 
 export type LimitName = keyof typeof LIMITS;

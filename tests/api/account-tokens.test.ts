@@ -150,6 +150,17 @@ describe('e-mail verification links', () => {
     expect([late.status, late.json.error]).toEqual([400, TOKEN_REFUSAL_MESSAGES.expired]);
   });
 
+  it('sign-ups are limited to 20 per client address per hour, then 429', async () => {
+    const headers = { 'x-forwarded-for': '198.51.100.20' }; // TEST-NET-2, RFC 5737
+    const statuses: number[] = [];
+    for (let i = 0; i < 21; i++) {
+      const body = { name: `N${i}`, email: `n${i}@world.test`, password: 'a long password' };
+      statuses.push((await callRoute(signUpRoute, { body, headers })).status);
+    }
+    expect(statuses.filter((s) => s === 201)).toHaveLength(20);
+    expect(statuses[20]).toBe(429);
+  });
+
   it('give every sign-up a personal workspace it owns', async () => {
     const signedUp = await callRoute(signUpRoute, { body: { name: 'Pim Aalto', email: 'pim@world.test', password: 'a long password' } });
     const rows = await world.knex(TABLES.memberships)

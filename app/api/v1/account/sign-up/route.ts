@@ -1,13 +1,20 @@
 import { signUp } from '@/app/lib/account-service';
-import { parseJsonBody } from '@/app/lib/api';
+import { jsonError, parseJsonBody } from '@/app/lib/api';
 import { appOrigin } from '@/app/lib/app-origin';
+import { clientAddress, consumePoint, RateLimitedError } from '@/app/lib/rate-limit';
 import { serviceResponse } from '@/app/lib/service-response';
 import { signUpSchema } from '@/lib/account-forms';
 
-/** POST: create an account (open to anyone) with its personal workspace. */
+/** POST: create an account (open to anyone, 20 an hour per client address) with its personal workspace. */
 export async function POST(request: Request) {
   const parsed = await parseJsonBody(request, signUpSchema);
   if (!parsed.ok) return parsed.response;
+  try {
+    await consumePoint([['signUpPerAddress', clientAddress(request.headers)]]);
+  } catch (err) {
+    if (err instanceof RateLimitedError) return jsonError(429, err.message);
+    throw err;
+  }
   const result = await signUp(parsed.data, appOrigin(request));
   return serviceResponse(result, 201);
 }
