@@ -43,8 +43,28 @@ test('a signed-out visitor of a workspace page is sent to sign-in and back', asy
   await expect(page).toHaveURL(/\/w\/harbour-lane$/);
   await expect(page.getByRole('heading', { level: 1, name: 'Harbour Lane Motor Works' })).toBeVisible();
   await expect(page.getByText('you are viewer')).toBeVisible();
-  // Viewers see no owner settings.
+  // Viewers see no owner settings, and the seeded printer profile without a delete button.
   await expect(page.getByRole('form', { name: 'Invite someone' })).toHaveCount(0);
+  const profiles = page.getByRole('list', { name: 'Workspace printer profiles' });
+  await expect(profiles.getByText('Front desk laser')).toBeVisible();
+  await expect(profiles.getByRole('button')).toHaveCount(0);
+});
+
+test('a technician copies a printer profile kept in the browser into the workspace', async ({ page }) => {
+  const name = `Bench laser ${unique()}`;
+  await page.addInitScript((profileName) => {
+    const profile = { id: 'local-1', name: profileName, printerScaleX: 0.987, printerScaleY: 1.004, createdAt: '2026-12-01T10:00:00.000Z' };
+    window.localStorage.setItem('rimscale.printer-profiles.v1', JSON.stringify([profile]));
+  }, name);
+  await signIn(page, 'tech@harbourlane.test', 'harbour-tech-26');
+  await expect(page).toHaveURL(/\/account$/);
+  await page.goto('/w/harbour-lane');
+  await page.getByRole('button', { name: `Save ${name} to the workspace` }).click();
+  const profiles = page.getByRole('list', { name: 'Workspace printer profiles' });
+  await expect(profiles.getByText(name, { exact: true })).toBeVisible();
+  await expect(profiles.getByText('X 0.987 · Y 1.004')).toBeVisible();
+  await profiles.getByRole('button', { name: `Delete ${name}` }).click();
+  await expect(profiles.getByText(name, { exact: true })).toHaveCount(0);
 });
 
 test('sign-in says the same for an unknown address and a wrong password', async ({ page }) => {
