@@ -16,9 +16,12 @@ export function MembersPanel({ slug, members, myUserId, isOwner }: Props) {
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | undefined>();
 
-  const act = async (method: string, url: string, body: unknown, done: string, after?: () => void) => {
+  const act = async (method: string, url: string, body: unknown, done: string, after?: () => void, undo?: () => void) => {
     const result = await submitJson(url, method, body);
-    if (!result.ok) return setMessage({ tone: 'error', text: String(result.body.error ?? `Failed (HTTP ${result.status})`) });
+    if (!result.ok) {
+      undo?.();
+      return setMessage({ tone: 'error', text: String(result.body.error ?? `Failed (HTTP ${result.status})`) });
+    }
     setMessage({ tone: 'info', text: done });
     if (after) after();
     else router.refresh();
@@ -47,9 +50,14 @@ export function MembersPanel({ slug, members, myUserId, isOwner }: Props) {
                     aria-label={`Role of ${m.name}`}
                     defaultValue={m.role}
                     className={`${inputClass} max-w-[11rem] py-1`}
-                    onChange={(e) =>
-                      act('PATCH', `/api/v1/workspaces/${slug}/members/${m.userId}`, { role: e.target.value }, `${m.name} is now ${e.target.value}.`)
-                    }
+                    onChange={(e) => {
+                      const select = e.currentTarget;
+                      const role = select.value;
+                      // A refused change (the last owner) puts the menu back to the role that stands.
+                      void act('PATCH', `/api/v1/workspaces/${slug}/members/${m.userId}`, { role }, `${m.name} is now ${role}.`, undefined, () => {
+                        select.value = m.role;
+                      });
+                    }}
                   >
                     {ROLE_OPTIONS.map((o) => (
                       <option key={o.value} value={o.value}>{o.value}</option>

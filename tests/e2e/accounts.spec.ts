@@ -133,6 +133,12 @@ test('an owner invites by e-mail; the invitee signs up through the link and join
   // The owner sees the new member.
   await page.reload();
   await expect(page.getByRole('cell', { name: invitee })).toBeVisible();
+
+  // The only owner cannot demote themselves: the page says why and keeps the role.
+  const ownRole = page.getByRole('combobox', { name: 'Role of Maren Ostby' });
+  await ownRole.selectOption('viewer');
+  await expect(page.getByRole('alert').filter({ hasText: 'last owner of Harbour Lane Motor Works' })).toBeVisible();
+  await expect(ownRole).toHaveValue('owner');
 });
 
 test('password reset by e-mailed link: the new password works, the old one and the used link do not', async ({ page, request, browser }) => {

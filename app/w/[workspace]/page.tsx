@@ -72,6 +72,7 @@ export default async function WorkspaceHomePage({ params }: Props) {
           </div>
           <div className="space-y-2">
             <h3 className="font-medium">Recent activity</h3>
+            {audit.length === 0 ? <p className="text-sm text-steel-500">Nothing recorded yet.</p> : null}
             <ul className="space-y-1 text-xs text-steel-600 dark:text-steel-300">
               {audit.map((entry) => (
                 <li key={entry.id}>
