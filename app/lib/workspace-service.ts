@@ -27,6 +27,10 @@ export async function invite(
   if (access.workspace.kind === 'personal') {
     return refuse(409, 'A personal workspace has only you in it: create a shop workspace to invite others');
   }
+  const inviter = await findUserById(access.user.id);
+  if (!inviter?.email_verified_at) {
+    return refuse(403, 'Confirm your own e-mail address before inviting others: use the link we sent, or ask for a new one on your account page');
+  }
   const members = await membersOf(access.workspace.id);
   if (members.some((m) => m.email === input.email.trim().toLowerCase())) {
     return refuse(409, `${input.email} is already a member of ${access.workspace.name}`);

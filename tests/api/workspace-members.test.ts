@@ -154,6 +154,25 @@ describe('printer profiles per workspace', () => {
   });
 });
 
+describe('inviting', () => {
+  it('needs the owner’s own address confirmed first', async () => {
+    await world.knex(TABLES.users).where({ id: world.users.owner.id }).update({ email_verified_at: null });
+    const res = await callRoute(inviteRoute, { params: { workspace: world.shop.slug }, body: { email: 'early@world.test', role: 'viewer' } });
+    expect(res.status).toBe(403);
+    expect(res.json.error).toMatch(/^Confirm your own e-mail address before inviting others/);
+    expect(await world.knex(TABLES.invitations)).toEqual([]);
+  });
+
+  it('is refused in a personal workspace and for someone already a member', async () => {
+    const [personal] = await world.knex(TABLES.workspaces).insert({ slug: 'owner-own', name: 'Own', kind: 'personal' }).returning('id');
+    await world.knex(TABLES.memberships).insert({ user_id: world.users.owner.id, workspace_id: personal.id, role: 'owner' });
+    const inPersonal = await callRoute(inviteRoute, { params: { workspace: 'owner-own' }, body: { email: 'x@world.test', role: 'viewer' } });
+    expect([inPersonal.status, inPersonal.json.error]).toEqual([409, expect.stringContaining('create a shop workspace')]);
+    const member = await callRoute(inviteRoute, { params: { workspace: world.shop.slug }, body: { email: 'VIEWER@world.test', role: 'owner' } });
+    expect([member.status, member.json.error]).toEqual([409, 'VIEWER@world.test is already a member of World Shop']);
+  });
+});
+
 describe('when the mail server is down', () => {
   it('an invitation is answered 502 with a clear message and its link never works', async () => {
     process.env.SMTP_URL = 'smtp://127.0.0.1:9'; // discard port: nothing listens there

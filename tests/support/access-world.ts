@@ -40,7 +40,9 @@ export async function createAccessWorld(): Promise<AccessWorld> {
   const addUser = async (key: string, workspace: WorldWorkspace, role: Role): Promise<WorldUser> => {
     const email = `${key}@world.test`;
     const name = `World ${key}`;
-    const [row] = await knex(TABLES.users).insert({ email, name, password_hash: passwordHash }).returning('id');
+    const [row] = await knex(TABLES.users)
+      .insert({ email, name, password_hash: passwordHash, email_verified_at: new Date().toISOString() })
+      .returning('id');
     await knex(TABLES.memberships).insert({ user_id: row.id, workspace_id: workspace.id, role });
     return { id: row.id, email, name, password: WORLD_PASSWORD };
   };
