@@ -92,7 +92,7 @@ describe('sign-in', () => {
 
   it('accepts the address in any case and with spaces around it', async () => {
     const user = await signInWithPassword({ email: '  VIEWER@World.Test ', password: WORLD_PASSWORD }, 'local');
-    expect(user).toEqual({ id: String(world.users.viewer.id), email: 'viewer@world.test', name: 'World viewer' });
+    expect(user).toEqual({ id: String(world.users.viewer.id), email: 'viewer@world.test', name: 'World viewer', sessionVersion: 0 });
   });
 
   it('records sign-ins in the audit log with the address, never the password', async () => {
