@@ -2,7 +2,7 @@ import { assertFiniteDrawing } from './assert-finite';
 import { nestBlock, toBlock, type Block } from './block';
 import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
-import { BLOCK_GAP_MM, fitsPage, printableMm, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
+import { BLOCK_GAP_MM, fitsPage, printableMm, stackedPageCount, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
 import { addPageBands, pageBandHeightMm } from './page-band';
 import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
@@ -59,14 +59,33 @@ function infoBlock(content: InfoContent, req: SheetRequest, correctedWidthMm: nu
   return correctedBlock(panel, req, 0);
 }
 
-function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content: InfoContent): PagedDrawing {
+/** How the pieces go on pages, decided from their sizes; `place` then copies the shapes (the costly part). */
+type Arrangement = { multiPage: boolean; place: () => PagedDrawing };
+
+function stacked(blocks: Block[], page: PageSpec): Arrangement {
+  return { multiPage: stackedPageCount(blocks, page) > 1, place: () => stackOnPages(blocks, page) };
+}
+
+/** The info panel laid out at a width, each width once (a banded page arranges the same panels again). */
+type InfoAt = (correctedWidthMm: number) => Block;
+
+function infoByWidth(content: InfoContent, req: SheetRequest): InfoAt {
+  const made = new Map<number, Block>();
+  return (widthMm) => {
+    let block = made.get(widthMm);
+    if (!block) made.set(widthMm, (block = infoBlock(content, req, widthMm)));
+    return block;
+  };
+}
+
+function arrange(page: PageSpec, layout: ScaleLayout, infoAt: InfoAt): Arrangement {
   const printable = printableMm(page);
-  const fullInfo = infoBlock(content, req, printable.widthMm);
-  if (layout.infoFirst) return stackOnPages([fullInfo, ...layout.blocks], page);
+  const fullInfo = infoAt(printable.widthMm);
+  if (layout.infoFirst) return stacked([fullInfo, ...layout.blocks], page);
   const scale = layout.blocks[0]!;
   const besideWidth = printable.widthMm - scale.widthMm - BLOCK_GAP_MM;
   if (besideWidth > 0 && scale.heightMm <= printable.heightMm) {
-    const side = infoBlock(content, req, besideWidth);
+    const side = infoAt(besideWidth);
     if (side.widthMm <= besideWidth + 1e-6 && side.heightMm <= printable.heightMm) {
       const gap = (printable.widthMm - scale.widthMm - side.widthMm) / 2;
       const combined: Block = {
@@ -75,14 +94,14 @@ function arrange(req: SheetRequest, page: PageSpec, layout: ScaleLayout, content
         parts: [...nestBlock(scale, 0, 0), ...nestBlock(side, scale.widthMm + gap, 0)],
         ...(scale.centreMm ? { centreMm: scale.centreMm } : {}),
       };
-      return stackOnPages([combined], page);
+      return stacked([combined], page);
     }
   }
   if (fitsPage({ widthMm: Math.max(scale.widthMm, fullInfo.widthMm), heightMm: scale.heightMm + BLOCK_GAP_MM + fullInfo.heightMm }, page))
-    return stackOnPages([scale, fullInfo], page);
+    return stacked([scale, fullInfo], page);
   // The wheel is what the user came for: it takes page 1, the info page follows.
-  if (fitsPage(scale, page)) return stackOnPages([scale, fullInfo], page);
-  return tileOversized(fullInfo, scale, page);
+  if (fitsPage(scale, page)) return stacked([scale, fullInfo], page);
+  return { multiPage: true, place: () => tileOversized(fullInfo, scale, page) };
 }
 
 function labelWarnings(shapes: readonly Shape[]): string[] {
@@ -118,12 +137,15 @@ export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): D
   const infoHeightMm = request.kind === 'scribe' ? infoBlock(contentFor(), request, printableMm(page).widthMm).heightMm : 0;
   let layout = scaleLayout(request, page, infoHeightMm);
   const content = contentFor(layout);
-  let paged = arrange(request, page, layout, content);
-  if (paged.pages.length > 1) {
-    // Several pages: each gets a band (title, page N of M, print line, check bar), so lay out again in what it leaves.
+  const infoAt = infoByWidth(content, request);
+  const plain = arrange(page, layout, infoAt);
+  let paged: PagedDrawing;
+  if (!plain.multiPage) paged = plain.place();
+  else {
+    // Several pages: each gets a band (title, page N of M, print line, check bar), so arrange in what it leaves.
     const banded: PageSpec = { ...page, bandMm: pageBandHeightMm(printableMm(page).widthMm) };
     if (request.kind === 'scribe') layout = scaleLayout(request, banded, infoHeightMm);
-    paged = addPageBands(arrange(request, banded, layout, content), banded, title, request);
+    paged = addPageBands(arrange(banded, layout, infoAt).place(), banded, title, request);
   }
   const warnings = [...layout.warnings, ...labelWarnings(paged.shapes), ...paged.warnings];
   const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings, title };

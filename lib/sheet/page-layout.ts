@@ -46,6 +46,21 @@ function wholePage(page: PageSpec, regionTopMm: number): PageLayout {
   };
 }
 
+/** How many pages stackOnPages would fill, from the heights alone (nothing placed). */
+export function stackedPageCount(blocks: readonly Pick<Block, 'heightMm'>[], page: PageSpec): number {
+  const printable = printableMm(page);
+  let pages = 1;
+  let cursor = 0;
+  for (const block of blocks) {
+    if (cursor > 0 && cursor + block.heightMm > printable.heightMm + EPS) {
+      pages += 1;
+      cursor = 0;
+    }
+    cursor += block.heightMm + BLOCK_GAP_MM;
+  }
+  return pages;
+}
+
 /** Blocks in order, each centred across the printable width; a block that does not fit below the last starts a new page. */
 export function stackOnPages(blocks: readonly Block[], page: PageSpec): PagedDrawing {
   const printable = printableMm(page);
