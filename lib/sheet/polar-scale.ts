@@ -1,6 +1,7 @@
 import type { Fill, GraduationLevel, Shape } from './drawing';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
+import { spreadOnTurn } from './label-fan';
 import { labelLanes, type PlacedMark, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
 import { arrow, line, path, text } from './shapes';
@@ -20,6 +21,8 @@ export const POLAR_DEPTH_MM = {
   bandTo: 14.8,
   labelFrom: 15.6,
   labelSize: 2.2,
+  /** Depth of the zone where fanned labels' leaders bend away from their marks. */
+  fan: 3.5,
   sideLabel: 30,
   arrow: 21,
   /** Everything above fits in this depth. */
@@ -78,7 +81,9 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   const roomMm = o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f;
   // Radial labels need their length in depth; a narrow ring gets labels along the circle instead.
   const tangential = longestMm > roomMm && roomMm >= labelSize * 1.1;
-  const radialLabel = tangential ? tangentialLabeller(o, labelled, longestMm, roomMm, radius, angle) : radialLabeller(o, labelled, longestMm, roomMm, radius, angle, at);
+  const radial = tangential ? undefined : radialLabeller(o, labelled, longestMm, roomMm, radius, angle, at);
+  const radialLabel = radial ?? tangentialLabeller(o, labelled, longestMm, roomMm, radius, angle);
+  const busyAlongDeg = [...labelled.map((m) => m.alongDeg), ...(radial?.labelAlongDeg ?? [])];
 
   for (const mark of o.marks.advance) {
     const [x1, y1] = at(mark.alongDeg, 0);
@@ -94,7 +99,7 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   }
 
   shapes.push(...tdcPointer(o, at));
-  shapes.push(...sideLabels(o, at, angle, labelled.map((m) => m.alongDeg)));
+  shapes.push(...sideLabels(o, at, angle, busyAlongDeg));
   shapes.push(...rotationArrow(o, radius(POLAR_DEPTH_MM.arrow)));
   return shapes;
 }
@@ -102,7 +107,13 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
 type At = (alongDeg: number, depthMm: number) => [number, number];
 type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
 
-/** Labels along their mark's ray, in up to three lanes of depth, outer lanes with a fine leader. */
+const MAX_FAN_MM = 15;
+
+/**
+ * Labels along the radius, away from the reading edge, their ink centred on the ray. Marks closer
+ * than a label is thick fan their labels out (label-fan.ts) past a fan zone deep enough for
+ * leaders no flatter than 2 across : 1 down, each leader joining a label to its own mark.
+ */
 function radialLabeller(
   o: PolarScaleOptions,
   marks: readonly PlacedMark[],
@@ -111,33 +122,53 @@ function radialLabeller(
   radius: (depthMm: number) => number,
   angle: (alongDeg: number) => number,
   at: At,
-): Labeller {
+): Labeller & { labelAlongDeg: number[] } {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
   const labelSize = POLAR_DEPTH_MM.labelSize * f;
-  const labelRadius = radius(POLAR_DEPTH_MM.labelFrom);
-  const gapDeg = (labelSize * 1.15 * 360) / (2 * Math.PI * Math.max(labelRadius, 1e-6));
-  const laneDepthMm = longestMm + 1.2 * f;
-  const lanes = labelLanes(marks, gapDeg, Math.min(3, Math.max(1, Math.floor(roomMm / Math.max(laneDepthMm, 1e-6)))));
-  return (alongDeg, label, data) => {
-    const lane = lanes.get(alongDeg);
-    lanes.delete(alongDeg);
-    if (lane === undefined) return [];
-    const theta = angle(alongDeg);
-    const [x, y] = polarPointMm(o.centreMm, labelRadius + sign * lane * laneDepthMm, theta);
-    // Text runs along the radius, away from the reading edge, and is never upside down.
-    const outward = theta - 90;
-    const rightHalf = theta < 180;
-    const leader: Shape[] = [];
-    if (lane > 0) {
-      const [lx1, ly1] = at(alongDeg, POLAR_DEPTH_MM.bandTo);
-      leader.push(line(lx1, ly1, x, y, STROKE_MM.fine, { role: 'label-leader' }, 0.5 * f));
-    }
-    return [
-      ...leader,
-      text(x, y, label, labelSize, { anchor: (sign < 0) === rightHalf ? 'end' : 'start', rotateDeg: rightHalf ? outward : outward + 180, weight: 'bold', data }),
-    ];
+  const startRadius = Math.max(radius(POLAR_DEPTH_MM.labelFrom), labelSize);
+  const fanRoomMm = Math.max(0, roomMm - longestMm);
+  const alongs = marks.map((m) => m.alongDeg);
+  // The pitch holds where labels are closest: at their far end on a wheel, their start on a ring.
+  const pitchFor = (fanMm: number) => (labelSize * 1.3 * 180) / (Math.PI * Math.max(sign < 0 ? startRadius - fanMm - longestMm : startRadius, labelSize));
+  const widestShiftMm = (spread: ReadonlyMap<number, number>) => {
+    let widest = 0;
+    for (const [along, placed] of spread) widest = Math.max(widest, Math.abs(placed - along));
+    return ((widest * Math.PI) / 180) * startRadius;
   };
+  // Deepen the fan until its leaders need be no flatter than 2 : 1 (a deeper fan spreads a little more).
+  let fanMm = Math.min(POLAR_DEPTH_MM.fan * f, fanRoomMm);
+  for (let pass = 0; pass < 4; pass += 1) fanMm = Math.min(Math.max(POLAR_DEPTH_MM.fan * f, widestShiftMm(spreadOnTurn(alongs, pitchFor(fanMm))) / 2), fanRoomMm, MAX_FAN_MM * f);
+  const pitchDeg = pitchFor(fanMm);
+  // Labels that would still go farther than 2.2 × the fan depth are left off (thinned evenly).
+  const spread = spreadOnTurn(alongs, pitchDeg, ((2.2 * Math.max(fanMm, 1e-6)) / startRadius) * (180 / Math.PI));
+  const labelAlongDeg = [...spread.values()];
+  // A label is fanned when it moved, or when a neighbour is within the pitch (the middle of a cluster).
+  const fannedAlong = new Set([...spread].filter(([along, placed]) => Math.abs(placed - along) > 1e-6 || [...spread.keys()].some((other) => other !== along && turnDistanceDeg(other, along) < pitchDeg)).map(([along]) => along));
+  const labeller = (alongDeg: number, label: string, data: Shape['data']): Shape[] => {
+    const labelAlong = spread.get(alongDeg);
+    spread.delete(alongDeg);
+    if (labelAlong === undefined) return [];
+    const fanned = fannedAlong.has(alongDeg);
+    const theta = angle(labelAlong);
+    const startDepth = POLAR_DEPTH_MM.labelFrom + (fanned ? fanMm / Math.max(f, 1e-6) : 0);
+    const [rx, ry] = at(labelAlong, startDepth);
+    // Text runs along the radius, away from the reading edge, and is never upside down.
+    const outward = ((theta % 360) + 360) % 360 - 90;
+    const rightHalf = outward < 90;
+    const rotateDeg = rightHalf ? outward : outward + 180;
+    // Ink spans 0.75 of the size above the baseline and 0.2 below: a baseline 0.275 × size below the ray centres it.
+    const a = (rotateDeg * Math.PI) / 180;
+    const [x, y] = [rx - 0.275 * labelSize * Math.sin(a), ry + 0.275 * labelSize * Math.cos(a)];
+    const leader: Shape[] = [];
+    if (fanned) {
+      const [lx1, ly1] = at(alongDeg, POLAR_DEPTH_MM.bandTo);
+      const [lx2, ly2] = at(labelAlong, startDepth - 0.4);
+      leader.push(line(lx1, ly1, lx2, ly2, STROKE_MM.fine, { role: 'label-leader' }));
+    }
+    return [...leader, text(x, y, label, labelSize, { anchor: (sign < 0) === rightHalf ? 'end' : 'start', rotateDeg, weight: 'bold', data })];
+  };
+  return Object.assign(labeller, { labelAlongDeg });
 }
 
 /** Labels along the circle, centred on their mark, in as many rings of text as the depth holds. */

@@ -1,7 +1,8 @@
 import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
 import { chooseLevels } from './graduations';
-import { formatDeg, labelLanes, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
+import { spreadInRange } from './label-fan';
+import { formatDeg, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, crankFromAlongDeg, stripXMm } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
@@ -18,6 +19,9 @@ import { STROKE_MM, TEXT_MM, textWidthMm } from './sheet-style';
 export const STRIP_OVERLAP_MM = 10;
 export const GLUE_TAIL_MM = 15;
 export const STRIP_LABEL_BAND_MM = 5;
+/** Depth below the strip where fanned labels' leaders run from their marks to the labels (least, most). */
+export const STRIP_FAN_MM = 3;
+export const STRIP_MAX_FAN_MM = 12;
 
 export type StripSegment = {
   letter: string;
@@ -137,20 +141,36 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   for (const tick of marks.ticks)
     shapes.push(line(x(tick.alongDeg), top, x(tick.alongDeg), top + depths.tick[tick.level], tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, tag({ crankDeg: tick.crankDeg, level: tick.level })));
   for (const number of marks.numbers) {
-    const [nx, anchor] = keepInside(x(number.alongDeg), textWidthMm(number.label, depths.numeralSize), rowLength);
+    // The glue tail is unmarked (its own words sit there); an overlap repeats the next segment's numerals.
+    const [nx, anchor] = keepInside(x(number.alongDeg), textWidthMm(number.label, depths.numeralSize), segment.extension === 'tail' ? segment.markedMm : rowLength);
     shapes.push(text(nx, top + depths.numeralBaseline, number.label, depths.numeralSize, { anchor, font: 'figures', data: tag({ role: 'numeral', crankDeg: number.crankDeg }) }));
   }
 
   const labelSize = TEXT_MM.small;
   const labelled = [...marks.advance, ...marks.ports];
-  const laneDepthMm = Math.max(0, ...labelled.map((m) => textWidthMm(m.label, labelSize))) + 1.2;
-  const lanes = labelLanes(labelled, (labelSize * 1.15) / plan.mmPerDeg, 3);
-  // Labels hang below the strip, reading upwards, in up to three staggered lanes.
+  // Labels hang below the strip, reading upwards; marks closer than a label is thick fan their
+  // labels out (label-fan.ts) below a short fan zone, each joined to its mark by a fine leader.
+  const alongs = [...new Set(labelled.map((m) => m.alongDeg))].sort((a, b) => a - b);
+  const pitchMm = labelSize * 1.3;
+  const range = [labelSize * 0.5, rowLength - labelSize * 0.5] as const;
+  // The fan is as deep as leaders no flatter than 2 across : 1 down need, up to STRIP_MAX_FAN_MM;
+  // labels that would go farther than that allows are left off (thinned evenly).
+  let widestMm = 0;
+  for (const [wanted, at] of spreadInRange(alongs.map(x), pitchMm, range)) widestMm = Math.max(widestMm, Math.abs(at - wanted));
+  const fanMm = Math.min(Math.max(STRIP_FAN_MM, widestMm / 2), STRIP_MAX_FAN_MM);
+  const placed = spreadInRange(alongs.map(x), pitchMm, range, 2.2 * fanMm);
+  const labelX = new Map(alongs.flatMap((along) => (placed.has(x(along)) ? [[along, placed.get(x(along))!] as const] : [])));
+  // Fanned: moved, or within a pitch of a neighbouring mark (the middle of a cluster).
+  const fanned = new Set(alongs.filter((along, i) => Math.abs((labelX.get(along) ?? x(along)) - x(along)) > 1e-6 || Math.abs(x(alongs[i - 1] ?? -Infinity) - x(along)) < pitchMm || Math.abs(x(alongs[i + 1] ?? Infinity) - x(along)) < pitchMm));
   const markLabel = (alongDeg: number, label: string, data: ShapeData): Shape[] => {
-    const lane = lanes.get(alongDeg);
-    lanes.delete(alongDeg);
-    if (lane === undefined) return [];
-    return [text(x(alongDeg) + labelSize * 0.35, top + w + 1 + lane * laneDepthMm, label, labelSize, { anchor: 'end', rotateDeg: -90, weight: 'bold', data: tag(data) })];
+    const lx = labelX.get(alongDeg);
+    labelX.delete(alongDeg);
+    if (lx === undefined) return [];
+    const startY = top + w + 1 + (fanned.has(alongDeg) ? fanMm : 0);
+    const shapes: Shape[] = [];
+    if (fanned.has(alongDeg)) shapes.push(line(x(alongDeg), top + w, lx, startY - 0.4, STROKE_MM.fine, tag({ role: 'label-leader' })));
+    shapes.push(text(lx + labelSize * 0.35, startY, label, labelSize, { anchor: 'end', rotateDeg: -90, weight: 'bold', data: tag(data) }));
+    return shapes;
   };
   for (const mark of marks.advance) {
     shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg })));

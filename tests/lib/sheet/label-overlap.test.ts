@@ -6,6 +6,7 @@ import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { boxesOverlap, overlappingTexts, textBox } from './text-boxes';
+import { expectPagesPrintable } from './sheet-checks';
 import { FIXED_DATE, n, parseSvg, req, type Svg } from './svg-measure';
 
 const PORTS = [
@@ -67,5 +68,67 @@ describe('side labels keep clear of mark labels', () => {
   it.each([120, 180, 240])('a %s mm full wheel with the same ports: no two texts overlap', (diameterMm) => {
     const svg = svgOf({ kind: 'wheel', diameterMm, numbering: 'full', portEvents: PORTS, advanceMarksDeg: [18] });
     expect(overlappingTexts(svg, insideWheel(svg))).toEqual([]);
+  });
+});
+
+describe('advance marks 1° apart keep legible labels', () => {
+  const ADVANCE = [16, 17, 18, 19, 20];
+
+  it.each([
+    ['cw', 'rotating', 150],
+    ['ccw', 'rotating', 150],
+    ['cw', 'stationary', 150],
+    ['cw', 'rotating', 100],
+    ['cw', 'rotating', 240],
+  ] as const)('a %s %s %s mm wheel with 16–20° BTDC: five labels, no two texts overlap', (rotation, carrier, diameterMm) => {
+    const svg = svgOf({ kind: 'wheel', diameterMm, advanceMarksDeg: ADVANCE, rotation, carrier });
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label');
+    expect(labels.map((t) => t.textContent).sort()).toEqual(ADVANCE.map((d) => `${d}° BTDC`));
+    expect(overlappingTexts(svg, insideWheel(svg))).toEqual([]);
+  });
+
+  it('a full wheel with 16–20° BTDC and the ports at 92/268 and 120/240: no two texts overlap', () => {
+    const svg = svgOf({ kind: 'wheel', diameterMm: 150, numbering: 'full', advanceMarksDeg: ADVANCE, portEvents: PORTS });
+    expect(svg.all('text').filter((t) => ['advance-label', 'port-label'].includes(t.getAttribute('data-role') ?? ''))).toHaveLength(9);
+    expect(overlappingTexts(svg, insideWheel(svg))).toEqual([]);
+  });
+
+  it.each([
+    ['a 120 mm strip (3 segments)', { kind: 'strip', diameterMm: 120 }],
+    ['a 60 mm strip (1 segment)', { kind: 'strip', diameterMm: 60, paper: 'A4', orientation: 'landscape' }],
+    ['a 120 mm full strip with ports', { kind: 'strip', diameterMm: 120, numbering: 'full', portEvents: PORTS }],
+  ] as const)('%s with 16–20° BTDC: every label drawn, joined to its own mark, no two texts overlap', (_, input) => {
+    const svg = svgOf({ ...input, advanceMarksDeg: ADVANCE });
+    // The strip rows, stacked below the info panel: from 6 mm above the first row's cut line down
+    // (its segment letter and captions sit in the 5 mm band above it).
+    const rowsTop = Math.min(...svg.all('rect').filter((r) => r.getAttribute('data-role') === 'cut-line').map((r) => n(r, 'y'))) - 6;
+    const inRows = (el: Parameters<typeof textBox>[0]) => n(el, 'y') > rowsTop;
+    expect(svg.all('text').filter(inRows).length).toBeGreaterThan(20);
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label');
+    expect(new Set(labels.map((t) => t.textContent))).toEqual(new Set(ADVANCE.map((d) => `${d}° BTDC`)));
+    expect(overlappingTexts(svg, inRows)).toEqual([]);
+    // Each label's leader starts on its own mark's lower end (the strip's edge) at the mark's x.
+    const marks = svg.all('line').filter((l) => l.getAttribute('data-role') === 'advance');
+    const leaders = svg.all('line').filter((l) => l.getAttribute('data-role') === 'label-leader');
+    for (const mark of marks) expect(leaders.some((l) => Math.abs(n(l, 'x1') - n(mark, 'x1')) < 1e-3 && Math.abs(n(l, 'y1') - n(mark, 'y2')) < 1e-3)).toBe(true);
+  });
+});
+
+describe('more marks than labels can hold', () => {
+  const EVERY_DEGREE = Array.from({ length: 61 }, (_, i) => i); // 0–60° BTDC, the schema's whole range
+
+  it.each([
+    ['a 100 mm wheel', { kind: 'wheel', diameterMm: 100 }],
+    ['a 100 mm strip', { kind: 'strip', diameterMm: 100 }],
+  ] as const)('%s with a mark every degree: labels left off with a warning, the rest clear of each other, pages printable', (_, input) => {
+    const drawing = buildDrawing(req({ ...input, advanceMarksDeg: EVERY_DEGREE }), { date: FIXED_DATE });
+    expectPagesPrintable(drawing);
+    expect(drawing.warnings.some((w) => /advance\/port marks are drawn without a label/.test(w))).toBe(true);
+    const svg = parseSvg(renderSvg(drawing));
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label');
+    expect(labels.length).toBeGreaterThan(5);
+    expect(labels.length).toBeLessThan(61);
+    const isLabel = (el: Parameters<typeof textBox>[0]) => el.getAttribute('data-role') === 'advance-label';
+    expect(overlappingTexts(svg, isLabel)).toEqual([]);
   });
 });

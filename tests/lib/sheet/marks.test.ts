@@ -40,20 +40,32 @@ describe('advance band', () => {
 });
 
 describe('advance mark labels', () => {
-  it('label each of 16–20° BTDC on a 150 mm wheel, each on its own mark’s ray, in staggered lanes', () => {
+  it('label each of 16–20° BTDC on a 150 mm wheel, fanned out in mark order, each joined to its own mark by a leader', () => {
     const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 150, advanceMarksDeg: [16, 17, 18, 19, 20] }), { date: FIXED_DATE })));
     const centre = centreOf(svg);
     const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label');
     expect(labels.map((t) => t.textContent).sort()).toEqual(['16° BTDC', '17° BTDC', '18° BTDC', '19° BTDC', '20° BTDC']);
-    const radii = new Set<string>();
-    for (const label of labels) {
-      const advance = n(label, 'data-advance-deg');
-      // Rotating cw: x° BTDC sits x° clockwise from TDC; the label's anchor is on that ray.
-      expect(clockwiseDeg(centre, n(label, 'x'), n(label, 'y'))).toBeCloseTo(advance, 3);
-      radii.add(Math.hypot(n(label, 'x') - centre[0], n(label, 'y') - centre[1]).toFixed(1));
+    const marks = lines(svg, (el) => el.getAttribute('data-role') === 'advance');
+    const leaders = lines(svg, (el) => el.getAttribute('data-role') === 'label-leader');
+    expect(leaders).toHaveLength(5);
+    // Each leader starts at the inner end of one mark; its far end says where that mark's label went.
+    const fanned = marks
+      .map((mark) => {
+        const leader = leaders.find((l) => Math.hypot(l.x1 - mark.x2, l.y1 - mark.y2) < 1e-3)!;
+        expect(leader).toBeDefined();
+        return { advance: n(mark.el, 'data-advance-deg'), leader, deg: clockwiseDeg(centre, leader.x2, leader.y2) };
+      })
+      .sort((a, b) => a.advance - b.advance);
+    // Rotating cw: x° BTDC sits x° clockwise from TDC; the fanned labels keep that order, centred on 18°.
+    for (let i = 1; i < fanned.length; i += 1) expect(fanned[i]!.deg).toBeGreaterThan(fanned[i - 1]!.deg);
+    expect(fanned[2]!.deg).toBeCloseTo(18, 3);
+    for (const { advance, leader } of fanned) {
+      // The label of that mark sits on the leader's ray (its baseline 0.275 × size off it, to centre the ink).
+      const label = labels.find((t) => n(t, 'data-advance-deg') === advance)!;
+      const [ux, uy] = [leader.x2 - centre[0], leader.y2 - centre[1]];
+      const offRay = Math.abs((n(label, 'x') - centre[0]) * uy - (n(label, 'y') - centre[1]) * ux) / Math.hypot(ux, uy);
+      expect(offRay).toBeCloseTo(0.275 * n(label, 'font-size'), 3);
     }
-    // 1° apart is closer than the text is tall at this radius, so the labels use more than one lane.
-    expect(radii.size).toBeGreaterThan(1);
   });
 });
 
