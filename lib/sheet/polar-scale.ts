@@ -59,11 +59,7 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
       shapes.push(path(piece.pointsMm, piece.closed, o.bandFill, STROKE_MM.fine, { role: 'advance-band' }));
   }
 
-  for (const tick of o.marks.ticks) {
-    const [x1, y1] = at(tick.alongDeg, 0);
-    const [x2, y2] = at(tick.alongDeg, TICK_DEPTH_MM[tick.level]);
-    shapes.push(line(x1, y1, x2, y2, tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, { crankDeg: tick.crankDeg, level: tick.level }));
-  }
+  tickShapes(o, radius, angle, shapes);
 
   const numeralSize = POLAR_DEPTH_MM.numeralSize * f;
   const numeralBaseline =
@@ -105,6 +101,17 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
 }
 
 type At = (alongDeg: number, depthMm: number) => [number, number];
+
+/** The graduations: the hot loop of every wheel (up to 720 ticks), kept small so it compiles on its own. */
+function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, angle: (alongDeg: number) => number, into: Shape[]): void {
+  const edge = radius(0);
+  for (const tick of o.marks.ticks) {
+    const theta = angle(tick.alongDeg);
+    const [x1, y1] = polarPointMm(o.centreMm, edge, theta);
+    const [x2, y2] = polarPointMm(o.centreMm, radius(TICK_DEPTH_MM[tick.level]), theta);
+    into.push(line(x1, y1, x2, y2, tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, { crankDeg: tick.crankDeg, level: tick.level }));
+  }
+}
 type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
 
 const MAX_FAN_MM = 15;
