@@ -29,7 +29,7 @@ export function pageBandHeightMm(widthMm: number): number {
 }
 
 function checkBar(x0: number, y0: number): Shape[] {
-  const data = { role: 'page-check-bar', checkMm: BAND_CHECK_MM, axis: 'x' as const };
+  const data = { checkMm: BAND_CHECK_MM, axis: 'x' as const, role: 'page-check-bar' };
   const shapes: Shape[] = [line(x0, y0, x0 + BAND_CHECK_MM, y0, STROKE_MM.outline, data)];
   for (const end of [x0, x0 + BAND_CHECK_MM]) shapes.push(line(end, y0 - 1.2, end, y0 + 1.6, STROKE_MM.outline, { role: 'page-check-end' }));
   for (let mm = 10; mm < BAND_CHECK_MM; mm += 10) shapes.push(line(x0 + mm, y0, x0 + mm, y0 + (mm % 50 === 0 ? 1.4 : 0.9), STROKE_MM.fine, { role: 'page-check-mm' }));
