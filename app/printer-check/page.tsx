@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { CheckSheetDownload } from '@/components/printer-check/check-sheet-download';
 import { PrinterProfileForm } from '@/components/printer-check/printer-profile-form';
 import { ProfileList } from '@/components/printer-check/profile-list';
+import { SignedInWorkspaceProfiles } from '@/components/printer-check/signed-in-workspace-profiles';
 
 export const metadata: Metadata = { title: 'Printer check' };
 
@@ -53,6 +54,7 @@ export default function PrinterCheckPage() {
         </p>
         <ProfileList />
       </Step>
+      <SignedInWorkspaceProfiles />
     </div>
   );
 }

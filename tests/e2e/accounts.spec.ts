@@ -50,6 +50,16 @@ test('a signed-out visitor of a workspace page is sent to sign-in and back', asy
   await expect(profiles.getByRole('button')).toHaveCount(0);
 });
 
+test("another member's workspace answers a real HTTP 404 and shows none of its data", async ({ page }) => {
+  await signIn(page, 'viewer@harbourlane.test', 'harbour-view-26');
+  await expect(page).toHaveURL(/\/account$/);
+  // maren-ostby is the owner's personal workspace (db/seeds/01_demo_shop.ts); the viewer is not in it.
+  const response = await page.goto('/w/maren-ostby');
+  expect(response?.status()).toBe(404);
+  await expect(page.getByRole('heading', { level: 1, name: 'Not found' })).toBeVisible();
+  await expect(page.getByText('Maren Ostby')).toHaveCount(0);
+});
+
 test('a technician copies a printer profile kept in the browser into the workspace', async ({ page }) => {
   const name = `Bench laser ${unique()}`;
   await page.addInitScript((profileName) => {
