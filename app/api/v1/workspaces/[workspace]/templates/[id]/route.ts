@@ -2,21 +2,17 @@ import { parseJsonBody } from '@/app/lib/api';
 import { requireRole } from '@/app/lib/authz';
 import { deleteObject } from '@/app/lib/storage';
 import { deleteTemplate } from '@/db/templates/delete-template';
-import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos, publicPhoto } from '@/db/templates/photos';
 import { updateTemplate } from '@/db/templates/update-template';
 import { templatePatchSchema } from '@/lib/templates/template-schema';
 import { handle, parseId, templateNotFound, type TemplateParams } from '../_shared/handle';
 import { updateResponse } from '../_shared/responses';
+import { templateFor } from '../_shared/template-for';
 
 /** GET …/templates/[id] — the template and its photos, viewer or above. */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
   return handle(async () => {
-    const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'viewer');
-    const templateId = parseId(id);
-    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-    if (!template) return templateNotFound();
+    const { template } = await templateFor(params, 'viewer');
     const photos = (await listPhotos(template.id)).map(publicPhoto);
     return Response.json({ template, photos });
   });

@@ -1,6 +1,6 @@
 import 'server-only';
 import { jsonError } from '@/app/lib/api';
-import { accessErrorResponse } from '@/app/lib/authz';
+import { accessErrorResponse, NOT_FOUND_MESSAGE } from '@/app/lib/authz';
 
 export type WorkspaceParams = { params: Promise<{ workspace: string }> };
 export type TemplateParams = { params: Promise<{ workspace: string; id: string }> };
@@ -26,5 +26,5 @@ export function parseId(text: string): number | null {
 }
 
 export function templateNotFound(): Response {
-  return jsonError(404, 'No such workspace or item');
+  return jsonError(404, NOT_FOUND_MESSAGE);
 }

@@ -1,11 +1,10 @@
 import { z } from 'zod';
 import { parseJsonBody } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
-import { findTemplate } from '@/db/templates/find-template';
 import { updateTemplate } from '@/db/templates/update-template';
 import { versionSchema } from '@/lib/templates/template-schema';
-import { handle, parseId, templateNotFound, type TemplateParams } from '../../_shared/handle';
+import { handle, type TemplateParams } from '../../_shared/handle';
 import { updateResponse } from '../../_shared/responses';
+import { templateFor } from '../../_shared/template-for';
 
 const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.boolean().default(true) }).strict();
 
@@ -15,11 +14,7 @@ const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.
  */
 export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
   return handle(async () => {
-    const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'technician');
-    const templateId = parseId(id);
-    const current = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-    if (!current) return templateNotFound();
+    const { access, template: current } = await templateFor(params, 'technician');
     // An empty body means "archive at whatever version it is now".
     const text = await request.text();
     const body = await parseJsonBody(new Request(request.url, { method: 'POST', body: text.trim() || '{}' }), archiveSchema);

@@ -1,12 +1,11 @@
 import { randomUUID } from 'node:crypto';
 import { jsonError } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
 import { deleteObject, putObject } from '@/app/lib/storage';
-import { findTemplate } from '@/db/templates/find-template';
 import { insertPhoto, listPhotos, publicPhoto } from '@/db/templates/photos';
 import { MAX_PHOTO_BYTES } from '@/lib/templates/photo-type';
 import { reencodePhoto } from '@/lib/templates/reencode-photo';
-import { handle, parseId, templateNotFound, type TemplateParams } from '../../_shared/handle';
+import { handle, type TemplateParams } from '../../_shared/handle';
+import { templateFor } from '../../_shared/template-for';
 
 /** Room for the multipart boundaries and the caption field around the file itself. */
 const MULTIPART_OVERHEAD_BYTES = 16 * 1024;
@@ -20,11 +19,7 @@ function tooLarge(): Response {
 /** GET …/templates/[id]/photos — the template's photos (metadata), viewer or above. */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
   return handle(async () => {
-    const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'viewer');
-    const templateId = parseId(id);
-    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-    if (!template) return templateNotFound();
+    const { template } = await templateFor(params, 'viewer');
     return Response.json({ photos: (await listPhotos(template.id)).map(publicPhoto) });
   });
 }
@@ -36,11 +31,7 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  */
 export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
   return handle(async () => {
-    const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'technician');
-    const templateId = parseId(id);
-    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-    if (!template) return templateNotFound();
+    const { access, template } = await templateFor(params, 'technician');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES) return tooLarge();
     if (!request.headers.get('content-type')?.startsWith('multipart/form-data'))
       return jsonError(415, 'Send the photo as multipart/form-data', [{ path: 'photo', message: 'Use a form upload with a "photo" file field' }]);

@@ -1,11 +1,10 @@
 import { z } from 'zod';
 import { jsonError } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
-import { findTemplate } from '@/db/templates/find-template';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
 import { availableSheetKinds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
-import { handle, parseId, templateNotFound, type TemplateParams } from '../../_shared/handle';
+import { handle, type TemplateParams } from '../../_shared/handle';
+import { templateFor } from '../../_shared/template-for';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -29,11 +28,7 @@ const NEEDS: Record<(typeof TEMPLATE_SHEET_KINDS)[number], string> = {
  */
 export async function GET(request: Request, { params }: TemplateParams): Promise<Response> {
   return handle(async () => {
-    const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'viewer');
-    const templateId = parseId(id);
-    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-    if (!template) return templateNotFound();
+    const { template } = await templateFor(params, 'viewer');
     const query = querySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
 

@@ -1,18 +1,14 @@
-import { requireRole } from '@/app/lib/authz';
 import { deleteObject, getObject } from '@/app/lib/storage';
-import { findTemplate } from '@/db/templates/find-template';
 import { deletePhotoRow, findPhoto } from '@/db/templates/photos';
 import { handle, parseId, templateNotFound } from '../../../_shared/handle';
+import { templateFor } from '../../../_shared/template-for';
 
 type Params = { params: Promise<{ workspace: string; id: string; photoId: string }> };
 
 async function locate(params: Params['params'], minimum: 'viewer' | 'technician') {
-  const { workspace, id, photoId } = await params;
-  const access = await requireRole(workspace, minimum);
-  const templateId = parseId(id);
-  const photoNumber = parseId(photoId);
-  const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-  return template && photoNumber ? findPhoto(template.id, photoNumber) : null;
+  const { template } = await templateFor(params, minimum);
+  const photoNumber = parseId((await params).photoId);
+  return photoNumber ? findPhoto(template.id, photoNumber) : null;
 }
 
 /** GET …/photos/[photoId] (`?size=thumb` for the WebP thumbnail) — the stored image, viewer or above. */

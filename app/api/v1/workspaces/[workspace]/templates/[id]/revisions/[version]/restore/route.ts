@@ -1,12 +1,11 @@
 import { z } from 'zod';
 import { parseJsonBody } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
-import { findTemplate } from '@/db/templates/find-template';
 import { revisionSnapshot } from '@/db/templates/revisions';
 import { updateTemplate } from '@/db/templates/update-template';
 import { versionSchema } from '@/lib/templates/template-schema';
 import { handle, parseId, templateNotFound } from '../../../../_shared/handle';
 import { updateResponse } from '../../../../_shared/responses';
+import { templateFor } from '../../../../_shared/template-for';
 
 type Params = { params: Promise<{ workspace: string; id: string; version: string }> };
 
@@ -18,13 +17,10 @@ const restoreSchema = z.object({ version: versionSchema }).strict();
  */
 export async function POST(request: Request, { params }: Params): Promise<Response> {
   return handle(async () => {
-    const { workspace, id, version } = await params;
-    const access = await requireRole(workspace, 'technician');
-    const templateId = parseId(id);
-    const revision = parseId(version);
-    const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
-    const snapshot = template && revision ? await revisionSnapshot(template.id, revision) : null;
-    if (!template || !snapshot || !revision) return templateNotFound();
+    const { access, template } = await templateFor(params, 'technician');
+    const revision = parseId((await params).version);
+    const snapshot = revision ? await revisionSnapshot(template.id, revision) : null;
+    if (!snapshot || !revision) return templateNotFound();
     const body = await parseJsonBody(request, restoreSchema);
     if (!body.ok) return body.response;
     return updateResponse(

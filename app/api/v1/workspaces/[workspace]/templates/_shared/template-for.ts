@@ -1,0 +1,22 @@
+import 'server-only';
+import { AccessError, NOT_FOUND_MESSAGE, requireRole, type Access } from '@/app/lib/authz';
+import { findTemplate } from '@/db/templates/find-template';
+import type { Template } from '@/lib/templates/template';
+import type { Role } from '@/lib/roles';
+import { parseId } from './handle';
+
+/**
+ * The template named by the path, for a caller with at least `minimum` role in its workspace.
+ * A bad id or a template of another workspace throws the same 404 as a missing workspace.
+ */
+export async function templateFor(
+  params: Promise<{ workspace: string; id: string }>,
+  minimum: Role,
+): Promise<{ access: Access; template: Template }> {
+  const { workspace, id } = await params;
+  const access = await requireRole(workspace, minimum);
+  const templateId = parseId(id);
+  const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
+  if (!template) throw new AccessError(404, NOT_FOUND_MESSAGE);
+  return { access, template };
+}
