@@ -53,18 +53,7 @@ export async function requireRole(workspaceSlug: string, minimum: Role): Promise
   return { user, workspace, role };
 }
 
-/** Turns an AccessError into the API's error response; anything else is not ours to answer. */
+/** Turns an AccessError into the API's error response (see `guarded` in route-handler.ts); anything else is not ours to answer. */
 export function accessErrorResponse(err: unknown): Response | null {
   return err instanceof AccessError ? jsonError(err.status, err.message) : null;
-}
-
-/** Runs a route handler body, answering AccessErrors in the API shape and rethrowing the rest. */
-export async function guarded(body: () => Promise<Response>): Promise<Response> {
-  try {
-    return await body();
-  } catch (err) {
-    const response = accessErrorResponse(err);
-    if (response) return response;
-    throw err;
-  }
 }

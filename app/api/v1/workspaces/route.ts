@@ -1,5 +1,6 @@
 import { parseJsonBody } from '@/app/lib/api';
-import { guarded, requireUser } from '@/app/lib/authz';
+import { requireUser } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { createShop } from '@/app/lib/workspace-service';
 import { workspacesOf } from '@/db/accounts';
 import { createShopSchema } from '@/lib/account-forms';

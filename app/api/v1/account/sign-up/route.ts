@@ -4,17 +4,20 @@ import { appOrigin } from '@/app/lib/app-origin';
 import { clientAddress, consumePoint, RateLimitedError } from '@/app/lib/rate-limit';
 import { serviceResponse } from '@/app/lib/service-response';
 import { signUpSchema } from '@/lib/account-forms';
+import { guarded } from '@/app/lib/route-handler';
 
 /** POST: create an account (open to anyone, 20 an hour per client address) with its personal workspace. */
 export async function POST(request: Request) {
-  const parsed = await parseJsonBody(request, signUpSchema);
-  if (!parsed.ok) return parsed.response;
-  try {
-    await consumePoint([['signUpPerAddress', clientAddress(request.headers)]]);
-  } catch (err) {
-    if (err instanceof RateLimitedError) return jsonError(429, err.message);
-    throw err;
-  }
-  const result = await signUp(parsed.data, appOrigin(request));
-  return serviceResponse(result, 201);
+  return guarded(async () => {
+    const parsed = await parseJsonBody(request, signUpSchema);
+    if (!parsed.ok) return parsed.response;
+    try {
+      await consumePoint([['signUpPerAddress', clientAddress(request.headers)]]);
+    } catch (err) {
+      if (err instanceof RateLimitedError) return jsonError(429, err.message);
+      throw err;
+    }
+    const result = await signUp(parsed.data, appOrigin(request));
+    return serviceResponse(result, 201);
+  });
 }

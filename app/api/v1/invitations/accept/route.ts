@@ -1,5 +1,6 @@
 import { parseJsonBody } from '@/app/lib/api';
-import { guarded, requireUser } from '@/app/lib/authz';
+import { requireUser } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { serviceResponse } from '@/app/lib/service-response';
 import { acceptInvitationFor } from '@/app/lib/workspace-service';
 import { tokenSchema } from '@/lib/account-forms';

@@ -1,5 +1,6 @@
 import { parseJsonBody } from '@/app/lib/api';
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { renameWorkspace } from '@/app/lib/workspace-service';
 import { createShopSchema } from '@/lib/account-forms';
 

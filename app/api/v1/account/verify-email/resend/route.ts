@@ -1,6 +1,7 @@
 import { sendVerification } from '@/app/lib/account-service';
 import { appOrigin } from '@/app/lib/app-origin';
-import { guarded, requireUser } from '@/app/lib/authz';
+import { requireUser } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 
 /** POST: mails the signed-in user a new confirmation link (nothing if already confirmed). */
 export async function POST(request: Request) {

@@ -1,6 +1,7 @@
 import { parseJsonBody } from '@/app/lib/api';
 import { appOrigin } from '@/app/lib/app-origin';
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { serviceResponse } from '@/app/lib/service-response';
 import { invite } from '@/app/lib/workspace-service';
 import { pendingInvitations } from '@/db/invitations';

@@ -1,4 +1,5 @@
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { serviceResponse } from '@/app/lib/service-response';
 import { removeMember } from '@/app/lib/workspace-service';
 

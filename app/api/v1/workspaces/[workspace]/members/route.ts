@@ -1,4 +1,5 @@
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { membersOf } from '@/db/accounts';
 
 type Context = { params: Promise<{ workspace: string }> };

@@ -1,5 +1,6 @@
 import { parseJsonBody } from '@/app/lib/api';
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { addProfile, profilesOf } from '@/db/printer-profiles';
 import { workspacePrinterProfileSchema } from '@/lib/workspace-printer-profile';
 

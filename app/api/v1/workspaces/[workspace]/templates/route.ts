@@ -5,11 +5,12 @@ import { listTemplates } from '@/db/templates/list-templates';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
 import { listQueryFromParams } from '@/lib/templates/list-query';
 import { templateSchema } from '@/lib/templates/template-schema';
-import { handle, type WorkspaceParams } from './_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type WorkspaceParams } from './_shared/template-params';
 
 /** GET …/templates?q=&sort=&dir=&archived=false|true|all&page=&pageSize= — one page, viewer or above. */
 export async function GET(request: Request, { params }: WorkspaceParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { workspace } = await params;
     const access = await requireRole(workspace, 'viewer');
     const query = listQueryFromParams(new URL(request.url).searchParams);
@@ -20,7 +21,7 @@ export async function GET(request: Request, { params }: WorkspaceParams): Promis
 
 /** POST …/templates — create (technician or above); answers 201 with the template at version 1. */
 export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { workspace } = await params;
     const access = await requireRole(workspace, 'technician');
     const body = await parseJsonBody(request, templateSchema);

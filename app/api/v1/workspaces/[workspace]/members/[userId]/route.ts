@@ -1,5 +1,6 @@
 import { jsonError, parseJsonBody } from '@/app/lib/api';
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { idParam, serviceResponse } from '@/app/lib/service-response';
 import { changeRole, removeMember } from '@/app/lib/workspace-service';
 import { roleChangeSchema } from '@/lib/account-forms';

@@ -1,5 +1,6 @@
 import { jsonError } from '@/app/lib/api';
-import { guarded, requireRole } from '@/app/lib/authz';
+import { requireRole } from '@/app/lib/authz';
+import { guarded } from '@/app/lib/route-handler';
 import { idParam } from '@/app/lib/service-response';
 import { deleteProfile } from '@/db/printer-profiles';
 

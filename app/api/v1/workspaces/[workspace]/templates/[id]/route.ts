@@ -5,13 +5,14 @@ import { deleteTemplate } from '@/db/templates/delete-template';
 import { listPhotos, publicPhoto } from '@/db/templates/photos';
 import { updateTemplate } from '@/db/templates/update-template';
 import { templatePatchSchema } from '@/lib/templates/template-schema';
-import { handle, parseId, templateNotFound, type TemplateParams } from '../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { parseId, templateNotFound, type TemplateParams } from '../_shared/template-params';
 import { updateResponse } from '../_shared/responses';
 import { templateFor } from '../_shared/template-for';
 
 /** GET …/templates/[id] — the template and its photos, viewer or above. */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { template } = await templateFor(params, 'viewer');
     const photos = (await listPhotos(template.id)).map(publicPhoto);
     return Response.json({ template, photos });
@@ -24,7 +25,7 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  * `{ version, archived: true }` archives.
  */
 export async function PATCH(request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { workspace, id } = await params;
     const access = await requireRole(workspace, 'technician');
     const templateId = parseId(id);
@@ -38,7 +39,7 @@ export async function PATCH(request: Request, { params }: TemplateParams): Promi
 
 /** DELETE …/templates/[id] — owner only: removes the template, its history and its photo files. */
 export async function DELETE(_request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { workspace, id } = await params;
     const access = await requireRole(workspace, 'owner');
     const templateId = parseId(id);

@@ -2,7 +2,7 @@ import 'server-only';
 import type { Template } from '@/lib/templates/template';
 import type { UpdateOutcome } from '@/db/templates/update-template';
 import { jsonError } from '@/app/lib/api';
-import { templateNotFound } from './handle';
+import { templateNotFound } from './template-params';
 
 /** "changed by X at T — reload": a stale save never overwrites; the caller gets the current state back. */
 export function conflictResponse(current: Template): Response {

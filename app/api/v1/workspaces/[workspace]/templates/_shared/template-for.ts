@@ -3,7 +3,7 @@ import { AccessError, NOT_FOUND_MESSAGE, requireRole, type Access } from '@/app/
 import { findTemplate } from '@/db/templates/find-template';
 import type { Template } from '@/lib/templates/template';
 import type { Role } from '@/lib/roles';
-import { parseId } from './handle';
+import { parseId } from './template-params';
 
 /**
  * The template named by the path, for a caller with at least `minimum` role in its workspace.

@@ -1,11 +1,12 @@
 import { requireRole } from '@/app/lib/authz';
 import { allTemplateFields } from '@/db/templates/list-templates';
 import { templatesToCsv } from '@/lib/templates/template-csv';
-import { handle, type WorkspaceParams } from '../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type WorkspaceParams } from '../_shared/template-params';
 
 /** GET …/templates/export — every template of the workspace as CSV (column set in lib/templates/csv-columns.ts). */
 export async function GET(_request: Request, { params }: WorkspaceParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { workspace } = await params;
     const access = await requireRole(workspace, 'viewer');
     const csv = templatesToCsv(await allTemplateFields(access.workspace.id));

@@ -2,7 +2,8 @@ import { jsonError } from '@/app/lib/api';
 import { requireRole } from '@/app/lib/authz';
 import { importTemplates } from '@/db/templates/import-templates';
 import { parseTemplatesCsv } from '@/lib/templates/template-csv';
-import { handle, type WorkspaceParams } from '../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type WorkspaceParams } from '../_shared/template-params';
 
 const MAX_IMPORT_BYTES = 16 * 1024 * 1024;
 
@@ -31,7 +32,7 @@ function tooLarge(): Response {
  * Otherwise all rows go in one transaction: 201 `{ imported }`.
  */
 export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { workspace } = await params;
     const access = await requireRole(workspace, 'technician');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_IMPORT_BYTES + 64 * 1024) return tooLarge();

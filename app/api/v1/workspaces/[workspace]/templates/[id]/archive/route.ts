@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { parseJsonBody } from '@/app/lib/api';
 import { updateTemplate } from '@/db/templates/update-template';
 import { versionSchema } from '@/lib/templates/template-schema';
-import { handle, type TemplateParams } from '../../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type TemplateParams } from '../../_shared/template-params';
 import { updateResponse } from '../../_shared/responses';
 import { templateFor } from '../../_shared/template-for';
 
@@ -13,7 +14,7 @@ const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.
  * archives (or with `archived: false` restores to the list); with a version, a stale one answers 409.
  */
 export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { access, template: current } = await templateFor(params, 'technician');
     // An empty body means "archive at whatever version it is now".
     const text = await request.text();

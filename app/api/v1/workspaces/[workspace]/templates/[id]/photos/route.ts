@@ -4,7 +4,8 @@ import { deleteObject, putObject } from '@/app/lib/storage';
 import { insertPhoto, listPhotos, publicPhoto } from '@/db/templates/photos';
 import { MAX_PHOTO_BYTES } from '@/lib/templates/photo-type';
 import { reencodePhoto } from '@/lib/templates/reencode-photo';
-import { handle, type TemplateParams } from '../../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
 
 /** Room for the multipart boundaries and the caption field around the file itself. */
@@ -18,7 +19,7 @@ function tooLarge(): Response {
 
 /** GET …/templates/[id]/photos — the template's photos (metadata), viewer or above. */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { template } = await templateFor(params, 'viewer');
     return Response.json({ photos: (await listPhotos(template.id)).map(publicPhoto) });
   });
@@ -30,7 +31,7 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  * the stored file is re-encoded without metadata. Refusals: 413 too large, 415 not an image.
  */
 export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { access, template } = await templateFor(params, 'technician');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES) return tooLarge();
     if (!request.headers.get('content-type')?.startsWith('multipart/form-data'))

@@ -1,10 +1,11 @@
 import { listRevisions } from '@/db/templates/revisions';
-import { handle, type TemplateParams } from '../../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
 
 /** GET …/templates/[id]/revisions — the history, newest first: who, when, fields old → new. Viewer or above. */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { template } = await templateFor(params, 'viewer');
     return Response.json({ revisions: await listRevisions(template.id) });
   });

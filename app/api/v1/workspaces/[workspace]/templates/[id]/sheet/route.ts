@@ -3,7 +3,8 @@ import { jsonError } from '@/app/lib/api';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
 import { availableSheetKinds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
-import { handle, type TemplateParams } from '../../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
 
 export const runtime = 'nodejs';
@@ -27,7 +28,7 @@ const NEEDS: Record<(typeof TEMPLATE_SHEET_KINDS)[number], string> = {
  * template’s diameters allow. Same drawing and file name as the public sheets route.
  */
 export async function GET(request: Request, { params }: TemplateParams): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { template } = await templateFor(params, 'viewer');
     const query = querySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));

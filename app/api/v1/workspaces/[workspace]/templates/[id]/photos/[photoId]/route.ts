@@ -1,6 +1,7 @@
 import { deleteObject, getObject } from '@/app/lib/storage';
 import { deletePhotoRow, findPhoto } from '@/db/templates/photos';
-import { handle, parseId, templateNotFound } from '../../../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { parseId, templateNotFound } from '../../../_shared/template-params';
 import { templateFor } from '../../../_shared/template-for';
 
 type Params = { params: Promise<{ workspace: string; id: string; photoId: string }> };
@@ -13,7 +14,7 @@ async function locate(params: Params['params'], minimum: 'viewer' | 'technician'
 
 /** GET …/photos/[photoId] (`?size=thumb` for the WebP thumbnail) — the stored image, viewer or above. */
 export async function GET(request: Request, { params }: Params): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const photo = await locate(params, 'viewer');
     if (!photo) return templateNotFound();
     const thumb = new URL(request.url).searchParams.get('size') === 'thumb';
@@ -32,7 +33,7 @@ export async function GET(request: Request, { params }: Params): Promise<Respons
 
 /** DELETE …/photos/[photoId] — technician or above; removes the row and both files. */
 export async function DELETE(_request: Request, { params }: Params): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const photo = await locate(params, 'technician');
     if (!photo) return templateNotFound();
     await deletePhotoRow(photo.id);

@@ -3,7 +3,8 @@ import { parseJsonBody } from '@/app/lib/api';
 import { revisionSnapshot } from '@/db/templates/revisions';
 import { updateTemplate } from '@/db/templates/update-template';
 import { versionSchema } from '@/lib/templates/template-schema';
-import { handle, parseId, templateNotFound } from '../../../../_shared/handle';
+import { guarded } from '@/app/lib/route-handler';
+import { parseId, templateNotFound } from '../../../../_shared/template-params';
 import { updateResponse } from '../../../../_shared/responses';
 import { templateFor } from '../../../../_shared/template-for';
 
@@ -16,7 +17,7 @@ const restoreSchema = z.object({ version: versionSchema }).strict();
  * caller saw). Brings back the template as it was at revision [version], recorded as a new revision.
  */
 export async function POST(request: Request, { params }: Params): Promise<Response> {
-  return handle(async () => {
+  return guarded(async () => {
     const { access, template } = await templateFor(params, 'technician');
     const revision = parseId((await params).version);
     const snapshot = revision ? await revisionSnapshot(template.id, revision) : null;
