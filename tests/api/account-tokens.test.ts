@@ -1,4 +1,4 @@
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { POST as requestReset } from '@/app/api/v1/account/password-reset/route';
 import { POST as confirmReset } from '@/app/api/v1/account/password-reset/confirm/route';
 import { POST as signUpRoute } from '@/app/api/v1/account/sign-up/route';
@@ -8,31 +8,17 @@ import { POST as inviteRoute } from '@/app/api/v1/workspaces/[workspace]/invitat
 import { hashToken, TOKEN_REFUSAL_MESSAGES } from '@/app/lib/one-time-token';
 import { resetAllLimits } from '@/app/lib/rate-limit';
 import { TABLES } from '@/db/tables';
-import { createAccessWorld, type AccessWorld } from '@/tests/support/access-world';
 import { callRoute } from '@/tests/support/call-route';
-import { useMailFake } from '@/tests/support/mail-fake';
+import { useAccessWorldPerTest, useMailFakeForFile } from '@/tests/support/route-test-hooks';
 import { actAs } from '@/tests/support/session';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
-let mail: Awaited<ReturnType<typeof useMailFake>>;
-let world: AccessWorld;
-beforeAll(async () => {
-  mail = await useMailFake();
-  process.env.APP_URL = 'http://rimscale.test';
-});
-afterAll(async () => {
-  delete process.env.APP_URL;
-  await mail.stop();
-});
-beforeEach(async () => {
-  world = await createAccessWorld();
-  resetAllLimits();
-});
-afterEach(async () => {
+const mail = useMailFakeForFile();
+const world = useAccessWorldPerTest();
+beforeEach(() => resetAllLimits());
+afterEach(() => {
   vi.useRealTimers();
-  actAs(null);
-  await world.cleanup();
 });
 
 /** The token of the newest link mailed to `to` whose path contains `path`, read over the fake's HTTP API. */

@@ -1,10 +1,10 @@
 import fs from 'node:fs';
 import path from 'node:path';
-import { afterAll, beforeAll, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { AccessError } from '@/app/lib/authz';
 import { resetAllLimits } from '@/app/lib/rate-limit';
 import { createAccessWorld } from '@/tests/support/access-world';
-import { useMailFake } from '@/tests/support/mail-fake';
+import { useMailFakeForFile } from '@/tests/support/route-test-hooks';
 import { ACTION_MATRIX, ACTORS, ROUTE_MATRIX, type Actor, type Method } from '@/tests/support/route-matrix';
 import { actAs } from '@/tests/support/session';
 
@@ -13,15 +13,7 @@ vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 const METHODS: Method[] = ['GET', 'POST', 'PUT', 'PATCH', 'DELETE'];
 const ROOT = process.cwd();
 
-let mail: Awaited<ReturnType<typeof useMailFake>>;
-beforeAll(async () => {
-  mail = await useMailFake();
-  process.env.APP_URL = 'http://rimscale.test';
-});
-afterAll(async () => {
-  delete process.env.APP_URL;
-  await mail.stop();
-});
+useMailFakeForFile();
 
 function routeFiles(dir = path.join(ROOT, 'app')): string[] {
   return fs.readdirSync(dir, { withFileTypes: true }).flatMap((entry) => {

@@ -1,4 +1,4 @@
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { POST as confirmReset } from '@/app/api/v1/account/password-reset/confirm/route';
 import { POST as requestReset } from '@/app/api/v1/account/password-reset/route';
 import { POST as signUpRoute } from '@/app/api/v1/account/sign-up/route';
@@ -6,36 +6,26 @@ import { RATE_LIMITED_CODE, signInWithPassword } from '@/app/lib/password-sign-i
 import { resetAllLimits } from '@/app/lib/rate-limit';
 import { TABLES } from '@/db/tables';
 import { SIGN_IN_REFUSED, signInErrorMessage } from '@/lib/sign-in-messages';
-import { createAccessWorld, WORLD_PASSWORD, type AccessWorld } from '@/tests/support/access-world';
+import { WORLD_PASSWORD } from '@/tests/support/access-world';
 import { callRoute } from '@/tests/support/call-route';
-import { useMailFake } from '@/tests/support/mail-fake';
+import { useAccessWorldPerTest, useMailFakeForFile } from '@/tests/support/route-test-hooks';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
 const PASSWORD = 'plain-text-marker-71-correct';
 
-let mail: Awaited<ReturnType<typeof useMailFake>>;
-let world: AccessWorld;
+const mail = useMailFakeForFile();
+const world = useAccessWorldPerTest();
 const consoleCalls: unknown[][] = [];
-beforeAll(async () => {
-  mail = await useMailFake();
-  process.env.APP_URL = 'http://rimscale.test';
-});
-afterAll(async () => {
-  delete process.env.APP_URL;
-  await mail.stop();
-});
-beforeEach(async () => {
-  world = await createAccessWorld();
+beforeEach(() => {
   resetAllLimits();
   consoleCalls.length = 0;
   for (const level of ['log', 'info', 'warn', 'error', 'debug'] as const) {
     vi.spyOn(console, level).mockImplementation((...args: unknown[]) => void consoleCalls.push(args));
   }
 });
-afterEach(async () => {
+afterEach(() => {
   vi.restoreAllMocks();
-  await world.cleanup();
 });
 
 /** Everything stored or said that could leak a password: every table's rows, console output, mail. */

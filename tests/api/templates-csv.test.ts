@@ -1,22 +1,15 @@
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import Papa from 'papaparse';
 import { CSV_COLUMNS } from '@/lib/templates/csv-columns';
-import { actAs } from '@/tests/support/session';
-import { createAccessWorld, type AccessWorld } from '@/tests/support/access-world';
+import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
 import { api, SAMPLE } from './templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
-let world: AccessWorld;
+const world = useAccessWorldPerTest({ actingAs: 'technician' });
 let ws: string;
-beforeEach(async () => {
-  world = await createAccessWorld();
+beforeEach(() => {
   ws = world.shop.slug;
-  actAs(world.users.technician.id);
-});
-afterEach(async () => {
-  actAs(null);
-  await world.cleanup();
 });
 
 const HEADER = CSV_COLUMNS.join(',');

@@ -4,29 +4,25 @@ import path from 'node:path';
 import sharp from 'sharp';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { actAs } from '@/tests/support/session';
-import { createAccessWorld, type AccessWorld } from '@/tests/support/access-world';
+import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
 import { api, SAMPLE } from './templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
-let world: AccessWorld;
+const world = useAccessWorldPerTest({ actingAs: 'technician' });
 let ws: string;
 let uploadDir: string;
 let templateId: number;
 
 beforeEach(async () => {
-  world = await createAccessWorld();
   ws = world.shop.slug;
   uploadDir = fs.mkdtempSync(path.join(os.tmpdir(), 'rimscale-uploads-'));
   process.env.RIMSCALE_UPLOAD_DIR = uploadDir;
-  actAs(world.users.technician.id);
   templateId = (await (await api.create(ws, SAMPLE)).json()).template.id;
 });
-afterEach(async () => {
-  actAs(null);
+afterEach(() => {
   delete process.env.RIMSCALE_UPLOAD_DIR;
   fs.rmSync(uploadDir, { recursive: true, force: true });
-  await world.cleanup();
 });
 
 const png = () => sharp({ create: { width: 64, height: 48, channels: 3, background: { r: 200, g: 40, b: 40 } } }).png().toBuffer();

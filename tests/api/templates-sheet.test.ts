@@ -1,27 +1,21 @@
 import { DOMParser } from '@xmldom/xmldom';
 import { PDFParse } from 'pdf-parse';
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import * as sheet from '@/app/api/v1/workspaces/[workspace]/templates/[id]/sheet/route';
 import { RING_CLEARANCE_MM } from '@/lib/templates/template-schema';
 import { actAs } from '@/tests/support/session';
-import { createAccessWorld, type AccessWorld } from '@/tests/support/access-world';
+import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
 import { api, SAMPLE } from './templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
-let world: AccessWorld;
+const world = useAccessWorldPerTest({ actingAs: 'technician' });
 let ws: string;
 let templateId: number;
 beforeEach(async () => {
-  world = await createAccessWorld();
   ws = world.shop.slug;
-  actAs(world.users.technician.id);
   templateId = (await (await api.create(ws, SAMPLE)).json()).template.id;
   actAs(world.users.viewer.id);
-});
-afterEach(async () => {
-  actAs(null);
-  await world.cleanup();
 });
 
 function getSheet(query: string, id: number = templateId, workspace = ws) {

@@ -1,19 +1,14 @@
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { beforeEach, describe, expect, it, vi } from 'vitest';
 import { actAs } from '@/tests/support/session';
-import { createAccessWorld, type AccessWorld } from '@/tests/support/access-world';
+import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
 import { api, SAMPLE } from './templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
-let world: AccessWorld;
+const world = useAccessWorldPerTest();
 let ws: string;
-beforeEach(async () => {
-  world = await createAccessWorld();
+beforeEach(() => {
   ws = world.shop.slug;
-});
-afterEach(async () => {
-  actAs(null);
-  await world.cleanup();
 });
 
 async function createAs(userId: number, body: unknown = SAMPLE) {

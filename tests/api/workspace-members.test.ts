@@ -1,35 +1,18 @@
-import { afterAll, afterEach, beforeAll, beforeEach, describe, expect, it, vi } from 'vitest';
+import { describe, expect, it, vi } from 'vitest';
 import { POST as leaveRoute } from '@/app/api/v1/workspaces/[workspace]/leave/route';
 import { DELETE as removeRoute, PATCH as roleRoute } from '@/app/api/v1/workspaces/[workspace]/members/[userId]/route';
 import { DELETE as deleteProfileRoute } from '@/app/api/v1/workspaces/[workspace]/printer-profiles/[profileId]/route';
 import { GET as listProfilesRoute, POST as addProfileRoute } from '@/app/api/v1/workspaces/[workspace]/printer-profiles/route';
 import { POST as inviteRoute } from '@/app/api/v1/workspaces/[workspace]/invitations/route';
 import { TABLES } from '@/db/tables';
-import { createAccessWorld, type AccessWorld } from '@/tests/support/access-world';
 import { callRoute } from '@/tests/support/call-route';
-import { useMailFake } from '@/tests/support/mail-fake';
+import { useAccessWorldPerTest, useMailFakeForFile } from '@/tests/support/route-test-hooks';
 import { actAs } from '@/tests/support/session';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 
-let mail: Awaited<ReturnType<typeof useMailFake>>;
-let world: AccessWorld;
-beforeAll(async () => {
-  mail = await useMailFake();
-  process.env.APP_URL = 'http://rimscale.test';
-});
-afterAll(async () => {
-  delete process.env.APP_URL;
-  await mail.stop();
-});
-beforeEach(async () => {
-  world = await createAccessWorld();
-  actAs(world.users.owner.id);
-});
-afterEach(async () => {
-  actAs(null);
-  await world.cleanup();
-});
+const mail = useMailFakeForFile();
+const world = useAccessWorldPerTest({ actingAs: 'owner' });
 
 const roleOf = async (userId: number) =>
   (await world.knex(TABLES.memberships).where({ user_id: userId, workspace_id: world.shop.id }).first())?.role;
