@@ -12,11 +12,31 @@ export const SHEET_FONT_FAMILIES = {
 export const HATCH_PATTERN_ID = 'rimscale-hatch';
 export const GREY15 = '#d9d9d9'; // 15 % black on white
 
-/** Fixed small precision (4 decimals ≈ 0.1 µm), no exponent, never NaN. */
+function decimalsOf(tenThousandths: number): string {
+  if (tenThousandths % 1000 === 0) return '.' + tenThousandths / 1000;
+  if (tenThousandths % 100 === 0) return (tenThousandths < 1000 ? '.0' : '.') + tenThousandths / 100;
+  if (tenThousandths % 10 === 0) return (tenThousandths < 100 ? '.00' : tenThousandths < 1000 ? '.0' : '.') + tenThousandths / 10;
+  return (tenThousandths < 10 ? '.000' : tenThousandths < 100 ? '.00' : tenThousandths < 1000 ? '.0' : '.') + tenThousandths;
+}
+
+// '', '.0001', … '.9999', trailing zeros dropped: made on the first SVG, then shared.
+let decimalsTable: string[] | undefined;
+
+/**
+ * Fixed small precision (4 decimals ≈ 0.1 µm), no exponent, never NaN. Written from the whole
+ * count of ten-thousandths, which gives the digits String(rounded) gives without the
+ * float-to-shortest conversion (a third of the SVG's time on a wheel).
+ */
 export function num(value: number): string {
   if (!Number.isFinite(value)) throw new Error(`SVG renderer was given a non-finite number (${value})`);
-  const rounded = Math.round(value * 1e4) / 1e4;
-  return rounded === 0 ? '0' : String(rounded);
+  const scaled = Math.round(value * 1e4);
+  if (scaled === 0) return '0';
+  const magnitude = scaled < 0 ? -scaled : scaled;
+  // Past 2^53 the count is no longer exact: the general conversion then.
+  if (magnitude >= 2 ** 53) return String(scaled / 1e4);
+  decimalsTable ??= Array.from({ length: 10000 }, (_, i) => (i === 0 ? '' : decimalsOf(i)));
+  const whole = Math.floor(magnitude / 1e4);
+  return (scaled < 0 ? '-' : '') + whole + decimalsTable[magnitude - whole * 1e4];
 }
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
