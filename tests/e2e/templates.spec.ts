@@ -96,7 +96,10 @@ test('two edits from the same version: the later save is refused with who and wh
   const first = await context.newPage();
   await signIn(first, TECH);
   // Search and sort run on the server: "scooter" finds the three invented scooters.
+  // Wait for the client list to have loaded (it is fetched after hydration), so typing is not lost.
+  await expect(first.getByRole('status').filter({ hasText: /^\d+ templates$/ })).toBeVisible();
   await first.getByLabel('Search name and engine').fill('scooter');
+  await expect(first.getByLabel('Search name and engine')).toHaveValue('scooter');
   await expect(first.getByRole('status').filter({ hasText: /^3 templates$/ })).toBeVisible();
   await first.getByRole('button', { name: /^Name/ }).click();
   await expect(first.locator('tbody tr').first()).toContainText('Quayside 150 scooter, disc valve');
