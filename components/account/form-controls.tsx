@@ -1,7 +1,7 @@
 'use client';
 
 import { useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
-import { FieldErrorText, HelpText, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+import { LabelledField, inputClass } from '@/components/generator/fields';
 
 type InputFieldProps<T extends FieldValues> = {
   name: FieldPath<T>;
@@ -14,25 +14,10 @@ type InputFieldProps<T extends FieldValues> = {
 /** A labelled text, e-mail or password input with help and a live error line. */
 export function InputField<T extends FieldValues>({ name, label, type = 'text', autoComplete, help }: InputFieldProps<T>) {
   const { register } = useFormContext<T>();
-  const error = useFieldError(name);
-  const id = fieldId(name);
   return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
-        {label}
-      </label>
-      <input
-        id={id}
-        type={type}
-        autoComplete={autoComplete}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={`${id}-help ${id}-error`}
-        className={inputClass}
-        {...register(name)}
-      />
-      <HelpText id={`${id}-help`}>{help}</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name={name} label={label} help={help}>
+      {(wiring) => <input {...wiring} type={type} autoComplete={autoComplete} className={inputClass} {...register(name)} />}
+    </LabelledField>
   );
 }
 

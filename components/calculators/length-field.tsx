@@ -2,7 +2,7 @@
 
 import { useState } from 'react';
 import { useController, useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
-import { FieldErrorText, HelpText, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+import { LabelledField, UnitSuffix, inputClass } from '@/components/generator/fields';
 import { fromUnit, lengthText, parseTypedNumber, type LengthUnit } from './length-unit';
 
 type LengthFieldProps<T extends FieldValues> = {
@@ -21,8 +21,6 @@ type LengthFieldProps<T extends FieldValues> = {
 export function LengthField<T extends FieldValues>({ name, label, unit, help, className }: LengthFieldProps<T>) {
   const { control } = useFormContext<T>();
   const { field } = useController({ name, control });
-  const error = useFieldError(name);
-  const id = fieldId(name);
   const valueMm = typeof field.value === 'number' ? field.value : Number.NaN;
   const [shown, setShown] = useState({ unit, valueMm, text: lengthText(valueMm, unit) });
   if (shown.unit !== unit || !Object.is(shown.valueMm, valueMm)) {
@@ -37,29 +35,23 @@ export function LengthField<T extends FieldValues>({ name, label, unit, help, cl
   };
 
   return (
-    <div className={`space-y-1 ${className ?? ''}`}>
-      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
-        {label}
-      </label>
-      <div className="relative">
-        <input
-          id={id}
-          ref={field.ref}
-          name={field.name}
-          type="text"
-          inputMode="decimal"
-          autoComplete="off"
-          value={shown.text}
-          onChange={(event) => onChange(event.target.value)}
-          onBlur={field.onBlur}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={`${id}-help ${id}-error`}
-          className={`${inputClass} pr-12 font-mono tabular-nums`}
-        />
-        <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center font-mono text-xs text-steel-500">{unit}</span>
-      </div>
-      <HelpText id={`${id}-help`}>{help}</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name={name} label={label} help={help} className={className}>
+      {(wiring) => (
+        <UnitSuffix unit={unit}>
+          <input
+            {...wiring}
+            ref={field.ref}
+            name={field.name}
+            type="text"
+            inputMode="decimal"
+            autoComplete="off"
+            value={shown.text}
+            onChange={(event) => onChange(event.target.value)}
+            onBlur={field.onBlur}
+            className={`${inputClass} pr-12 font-mono tabular-nums`}
+          />
+        </UnitSuffix>
+      )}
+    </LabelledField>
   );
 }

@@ -37,6 +37,38 @@ export function HelpText({ id, children }: { id: string; children?: React.ReactN
   );
 }
 
+/** The attributes that tie a control to its label, help line and error line. */
+export type FieldWiring = {
+  id: string;
+  'aria-invalid': true | undefined;
+  'aria-describedby': string;
+};
+
+type LabelledFieldProps = {
+  name: string;
+  label: React.ReactNode;
+  help?: React.ReactNode;
+  className?: string;
+  /** Renders the one control, spreading `wiring` onto it. */
+  children: (wiring: FieldWiring) => React.ReactNode;
+};
+
+/** A label above one control, then its help and its live error line, all wired by id and aria-describedby. */
+export function LabelledField({ name, label, help, className, children }: LabelledFieldProps) {
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <div className={`space-y-1 ${className ?? ''}`}>
+      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
+        {label}
+      </label>
+      {children({ id, 'aria-invalid': error ? true : undefined, 'aria-describedby': `${id}-help ${id}-error` })}
+      <HelpText id={`${id}-help`}>{help}</HelpText>
+      <FieldErrorText id={`${id}-error`} message={error} />
+    </div>
+  );
+}
+
 type NumberFieldProps<T extends FieldValues> = {
   name: FieldPath<T>;
   label: string;
@@ -51,33 +83,23 @@ type NumberFieldProps<T extends FieldValues> = {
 /** A number input read with valueAsNumber: blank or bad text reaches the schema as NaN and gets its message. */
 export function NumberField<T extends FieldValues>({ name, label, unit, help, step = 'any', min, placeholder, className }: NumberFieldProps<T>) {
   const { register } = useFormContext<T>();
-  const error = useFieldError(name);
-  const id = fieldId(name);
   return (
-    <div className={`space-y-1 ${className ?? ''}`}>
-      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
-        {label}
-      </label>
-      <div className="relative">
-        <input
-          id={id}
-          type="number"
-          inputMode="decimal"
-          step={step}
-          min={min}
-          placeholder={placeholder}
-          aria-invalid={error ? true : undefined}
-          aria-describedby={`${id}-help ${id}-error`}
-          className={`${inputClass} font-mono tabular-nums ${unit ? 'pr-12' : ''}`}
-          {...register(name, { valueAsNumber: true })}
-        />
-        {unit ? (
-          <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center font-mono text-xs text-steel-500">{unit}</span>
-        ) : null}
-      </div>
-      <HelpText id={`${id}-help`}>{help}</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name={name} label={label} help={help} className={className}>
+      {(wiring) => (
+        <UnitSuffix unit={unit}>
+          <input
+            {...wiring}
+            type="number"
+            inputMode="decimal"
+            step={step}
+            min={min}
+            placeholder={placeholder}
+            className={`${inputClass} font-mono tabular-nums ${unit ? 'pr-12' : ''}`}
+            {...register(name, { valueAsNumber: true })}
+          />
+        </UnitSuffix>
+      )}
+    </LabelledField>
   );
 }
 
@@ -93,26 +115,19 @@ type TextFieldProps<T extends FieldValues> = {
 
 export function TextField<T extends FieldValues>({ name, label, help, placeholder, maxLength, className, mono }: TextFieldProps<T>) {
   const { register } = useFormContext<T>();
-  const error = useFieldError(name);
-  const id = fieldId(name);
   return (
-    <div className={`space-y-1 ${className ?? ''}`}>
-      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
-        {label}
-      </label>
-      <input
-        id={id}
-        type="text"
-        placeholder={placeholder}
-        maxLength={maxLength}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={`${id}-help ${id}-error`}
-        className={`${inputClass} ${mono ? 'font-mono' : ''}`}
-        {...register(name)}
-      />
-      <HelpText id={`${id}-help`}>{help}</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name={name} label={label} help={help} className={className}>
+      {(wiring) => (
+        <input
+          {...wiring}
+          type="text"
+          placeholder={placeholder}
+          maxLength={maxLength}
+          className={`${inputClass} ${mono ? 'font-mono' : ''}`}
+          {...register(name)}
+        />
+      )}
+    </LabelledField>
   );
 }
 
@@ -126,29 +141,18 @@ type SelectFieldProps<T extends FieldValues> = {
 
 export function SelectField<T extends FieldValues>({ name, label, options, help, className }: SelectFieldProps<T>) {
   const { register } = useFormContext<T>();
-  const error = useFieldError(name);
-  const id = fieldId(name);
   return (
-    <div className={`space-y-1 ${className ?? ''}`}>
-      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
-        {label}
-      </label>
-      <select
-        id={id}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={`${id}-help ${id}-error`}
-        className={inputClass}
-        {...register(name)}
-      >
-        {options.map((option) => (
-          <option key={option.value} value={option.value}>
-            {option.label}
-          </option>
-        ))}
-      </select>
-      <HelpText id={`${id}-help`}>{help}</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name={name} label={label} help={help} className={className}>
+      {(wiring) => (
+        <select {...wiring} className={inputClass} {...register(name)}>
+          {options.map((option) => (
+            <option key={option.value} value={option.value}>
+              {option.label}
+            </option>
+          ))}
+        </select>
+      )}
+    </LabelledField>
   );
 }
 
@@ -185,6 +189,18 @@ export function ChoiceGroup<T extends FieldValues>({ name, legend, options, help
       <HelpText id={`${id}-help`}>{help}</HelpText>
       <FieldErrorText id={`${id}-error`} message={error} />
     </fieldset>
+  );
+}
+
+/** A unit shown inside the right end of its input (the input leaves room with pr-12). */
+export function UnitSuffix({ unit, children }: { unit?: string; children: React.ReactNode }) {
+  return (
+    <div className="relative">
+      {children}
+      {unit ? (
+        <span className="pointer-events-none absolute inset-y-0 right-3 flex items-center font-mono text-xs text-steel-500">{unit}</span>
+      ) : null}
+    </div>
   );
 }
 

@@ -1,7 +1,7 @@
 'use client';
 
 import { useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
-import { FieldErrorText, HelpText, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+import { LabelledField, inputClass } from '@/components/generator/fields';
 
 /** Blank means "not known" (null); anything else must be a number, so bad text reaches the schema as NaN. */
 export const blankAsNull = (value: unknown) => (value === '' || value === null || value === undefined ? null : Number(value));
@@ -20,25 +20,17 @@ type Props<T extends FieldValues> = { name: FieldPath<T>; label: string; unit?: 
 
 export function OptionalNumberField<T extends FieldValues>({ name, label, unit, help }: Props<T>) {
   const { register } = useFormContext<T>();
-  const error = useFieldError(name);
-  const id = fieldId(name);
   return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block text-sm font-medium text-steel-800 dark:text-steel-200">
-        {label}
-        {unit ? <span className="font-normal text-steel-500"> ({unit})</span> : null}
-      </label>
-      <input
-        id={id}
-        type="text"
-        inputMode="decimal"
-        aria-invalid={error ? true : undefined}
-        aria-describedby={`${id}-help ${id}-error`}
-        className={`${inputClass} font-mono tabular-nums`}
-        {...register(name, { setValueAs: blankAsNull })}
-      />
-      <HelpText id={`${id}-help`}>{help}</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name={name} label={<>{label}{unit ? <span className="font-normal text-steel-500"> ({unit})</span> : null}</>} help={help}>
+      {(wiring) => (
+        <input
+          {...wiring}
+          type="text"
+          inputMode="decimal"
+          className={`${inputClass} font-mono tabular-nums`}
+          {...register(name, { setValueAs: blankAsNull })}
+        />
+      )}
+    </LabelledField>
   );
 }

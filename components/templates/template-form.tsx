@@ -7,7 +7,7 @@ import { FormProvider, useFieldArray, useForm, useFormContext, type UseFormRegis
 import type { z } from 'zod';
 import { FormMessage, SubmitButton } from '@/components/account/form-controls';
 import { applyIssues, submitJson } from '@/components/account/submit-json';
-import { FieldErrorText, FormSection, HelpText, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+import { FieldErrorText, FormSection, LabelledField, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
 import type { Template } from '@/lib/templates/template';
 import { EMPTY_TEMPLATE, templateFormSchema } from '@/lib/templates/template-schema';
 import { OptionalNumberField, commaListAsNumbers } from './optional-number-field';
@@ -28,33 +28,23 @@ function defaults(template: Template | null): Input {
 
 function AdvanceMarksField() {
   const { register } = useFormContext<Input>();
-  const error = useFieldError('advanceMarksDeg');
-  const id = fieldId('advanceMarksDeg');
   return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block text-sm font-medium">
-        Advance marks <span className="font-normal text-steel-500">(° BTDC, comma-separated)</span>
-      </label>
-      <input id={id} aria-invalid={error ? true : undefined} aria-describedby={`${id}-help ${id}-error`} className={`${inputClass} font-mono`} {...register('advanceMarksDeg', { setValueAs: commaListAsNumbers })} />
-      <HelpText id={`${id}-help`}>For example 16, 18, 20. Left empty, the sheet marks the static advance alone.</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField
+      name="advanceMarksDeg"
+      label={<>Advance marks <span className="font-normal text-steel-500">(° BTDC, comma-separated)</span></>}
+      help="For example 16, 18, 20. Left empty, the sheet marks the static advance alone."
+    >
+      {(wiring) => <input {...wiring} className={`${inputClass} font-mono`} {...register('advanceMarksDeg', { setValueAs: commaListAsNumbers })} />}
+    </LabelledField>
   );
 }
 
 function NotesField() {
   const { register } = useFormContext<Input>();
-  const error = useFieldError('notes');
-  const id = fieldId('notes');
   return (
-    <div className="space-y-1">
-      <label htmlFor={id} className="block text-sm font-medium">
-        Notes
-      </label>
-      <textarea id={id} rows={4} maxLength={4000} aria-invalid={error ? true : undefined} aria-describedby={`${id}-help ${id}-error`} className={inputClass} {...register('notes')} />
-      <HelpText id={`${id}-help`}>Where the pointer sits, which marks to trust, anything the next person should know.</HelpText>
-      <FieldErrorText id={`${id}-error`} message={error} />
-    </div>
+    <LabelledField name="notes" label="Notes" help="Where the pointer sits, which marks to trust, anything the next person should know.">
+      {(wiring) => <textarea {...wiring} rows={4} maxLength={4000} className={inputClass} {...register('notes')} />}
+    </LabelledField>
   );
 }
 
