@@ -41,7 +41,11 @@ export function num(value: number): string {
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 
+// One test for anything escapeXml would change: most labels and roles need nothing.
+const NEEDS_ESCAPE = /[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF&<>"']/;
+
 export function escapeXml(content: string): string {
+  if (!NEEDS_ESCAPE.test(content)) return content;
   // Drop characters XML 1.0 forbids, then escape markup.
   return content.replace(/[\u0000-\u0008\u000B\u000C\u000E-\u001F\uFFFE\uFFFF]/g, '').replace(/[&<>"']/g, (c) => ESCAPES[c]!);
 }
@@ -74,9 +78,18 @@ function fillValue(fill: Fill): string {
   }
 }
 
+// A sheet uses a handful of stroke weights: each one's attribute text is made once (a few kept).
+const strokeAttributes = new Map<number, string>();
+const MAX_STROKE_ATTRIBUTES = 32;
+
 function stroke(strokeMm: number, dashMm?: number): string {
   if (strokeMm <= 0) return ' stroke="none"';
-  return ` stroke="#000" stroke-width="${num(strokeMm)}"${dashMm ? ` stroke-dasharray="${num(dashMm)} ${num(dashMm)}"` : ''}`;
+  let weight = strokeAttributes.get(strokeMm);
+  if (weight === undefined) {
+    weight = ` stroke="#000" stroke-width="${num(strokeMm)}"`;
+    if (strokeAttributes.size < MAX_STROKE_ATTRIBUTES) strokeAttributes.set(strokeMm, weight);
+  }
+  return dashMm ? `${weight} stroke-dasharray="${num(dashMm)} ${num(dashMm)}"` : weight;
 }
 
 export function shapeToSvg(shape: Shape): string {
