@@ -1,4 +1,4 @@
-import type { TemplateSortKey } from '@/lib/templates/list-query';
+import { TEMPLATE_SORT_KEYS, type TemplateSortKey } from '@/lib/templates/list-query';
 import type { Template } from '@/lib/templates/template';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 
@@ -49,22 +49,11 @@ export const FIELD_COLUMNS = {
   archived: 'archived',
 } as const satisfies Record<keyof TemplateFields, string>;
 
-export const SORT_COLUMNS: Record<TemplateSortKey, string> = {
-  name: 'name',
-  description: 'description',
-  boreMm: 'bore_mm',
-  strokeMm: 'stroke_mm',
-  rodMm: 'rod_mm',
-  rotation: 'rotation',
-  rimDiameterMm: 'rim_diameter_mm',
-  faceDiameterMm: 'face_diameter_mm',
-  flangeDiameterMm: 'flange_diameter_mm',
-  hubHoleMm: 'hub_hole_mm',
-  staticAdvanceDeg: 'static_advance_deg',
-  version: 'version',
-  createdAt: 'created_at',
-  updatedAt: 'updated_at',
-};
+/** Every column the API names: the fields, the version and the timestamps. */
+const API_COLUMNS = { ...FIELD_COLUMNS, version: 'version', createdAt: 'created_at', updatedAt: 'updated_at' } as const;
+
+/** Sort key → SQL column: exactly the sortable keys, so nothing else can reach ORDER BY. */
+export const SORT_COLUMNS = Object.fromEntries(TEMPLATE_SORT_KEYS.map((key) => [key, API_COLUMNS[key]])) as Record<TemplateSortKey, string>;
 
 export function rowToFields(row: TemplateRow): TemplateFields {
   return {
