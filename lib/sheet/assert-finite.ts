@@ -8,6 +8,40 @@ function check(value: number | undefined, where: string, field: string): void {
   if (value !== undefined && !Number.isFinite(value)) fail(value, `${where}.${field}`);
 }
 
+/** A finite number, or one left out (optional fields). */
+function ok(value: number | undefined): boolean {
+  return value === undefined || Number.isFinite(value);
+}
+
+// Checked without naming the shape: its location text is made only for the one that fails.
+function shapeIsFinite(shape: Shape): boolean {
+  let fine: boolean;
+  switch (shape.type) {
+    case 'line':
+      fine = ok(shape.x1Mm) && ok(shape.y1Mm) && ok(shape.x2Mm) && ok(shape.y2Mm) && ok(shape.dashMm);
+      break;
+    case 'path': {
+      fine = true;
+      const points = shape.pointsMm;
+      for (let i = 0; i < points.length && fine; i += 1) fine = ok(points[i]![0]) && ok(points[i]![1]);
+      break;
+    }
+    case 'ellipse':
+      fine = ok(shape.cxMm) && ok(shape.cyMm) && ok(shape.rxMm) && ok(shape.ryMm) && ok(shape.dashMm);
+      break;
+    case 'rect':
+      fine = ok(shape.xMm) && ok(shape.yMm) && ok(shape.widthMm) && ok(shape.heightMm);
+      break;
+    case 'text':
+      fine = ok(shape.xMm) && ok(shape.yMm) && ok(shape.sizeMm) && ok(shape.rotateDeg);
+      break;
+  }
+  if (shape.type !== 'text') fine &&= ok(shape.strokeMm);
+  const data = shape.data;
+  return data ? fine && ok(data.crankDeg) && ok(data.advanceDeg) && ok(data.checkMm) && ok(data.level) : fine;
+}
+
+/** Throws naming the shape's first non-finite field. */
 function checkShape(shape: Shape, where: string): void {
   switch (shape.type) {
     case 'line':
@@ -31,17 +65,24 @@ function checkShape(shape: Shape, where: string): void {
   if (data) check(data.crankDeg, where, 'data.crankDeg'), check(data.advanceDeg, where, 'data.advanceDeg'), check(data.checkMm, where, 'data.checkMm'), check(data.level, where, 'data.level');
 }
 
+function checkShapes(shapes: readonly Shape[], where: (i: number, shape: Shape) => string): void {
+  for (let i = 0; i < shapes.length; i += 1) {
+    const shape = shapes[i]!;
+    if (!shapeIsFinite(shape)) checkShape(shape, where(i, shape));
+  }
+}
+
 /** Throws a clear error instead of letting NaN or Infinity reach a renderer. */
 export function assertFiniteDrawing(drawing: Drawing): Drawing {
   check(drawing.sizeMm.widthMm, 'drawing', 'sizeMm.widthMm');
   check(drawing.sizeMm.heightMm, 'drawing', 'sizeMm.heightMm');
   drawing.centreMm?.forEach((v, i) => check(v, 'drawing', `centreMm[${i}]`));
-  drawing.shapes.forEach((shape, i) => checkShape(shape, `shapes[${i}] (${shape.type})`));
+  checkShapes(drawing.shapes, (i, shape) => `shapes[${i}] (${shape.type})`);
   drawing.pages.forEach((page, p) => {
     const v = page.viewportMm;
     check(v.xMm, `pages[${p}]`, 'viewportMm.xMm'), check(v.yMm, `pages[${p}]`, 'viewportMm.yMm'), check(v.widthMm, `pages[${p}]`, 'viewportMm.widthMm'), check(v.heightMm, `pages[${p}]`, 'viewportMm.heightMm');
     page.originMm.forEach((o, i) => check(o, `pages[${p}]`, `originMm[${i}]`));
-    page.pageShapes.forEach((shape, i) => checkShape(shape, `pages[${p}].pageShapes[${i}] (${shape.type})`));
+    checkShapes(page.pageShapes, (i, shape) => `pages[${p}].pageShapes[${i}] (${shape.type})`);
   });
   return drawing;
 }
