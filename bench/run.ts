@@ -73,7 +73,7 @@ async function serverRows(baseUrl: string): Promise<Row[]> {
 async function main(): Promise<void> {
   if (process.env.NODE_ENV !== 'production') console.warn('warning: NODE_ENV is not "production"; run it as `npm run bench`');
   const rows: Row[] = [];
-  const loadBefore = os.loadavg()[0]!;
+  const loadBefore = os.loadavg();
 
   const svg100 = drawingFor(WHEEL_100);
   const svg400 = drawingFor(WHEEL_400);
@@ -123,13 +123,19 @@ async function main(): Promise<void> {
   rows.push({ name: 'peak memory of the run (max RSS)', value: peakRssMb, unit: 'MiB' });
 
   printTable(rows);
-  // Timings on a shared machine move with its load; the 1-minute load average says how busy it was.
-  const load = { before: loadBefore, after: os.loadavg()[0]!, cpus: os.cpus().length };
-  console.log(`\nload average (1 min) ${load.before.toFixed(2)} → ${load.after.toFixed(2)} on ${load.cpus} CPUs`);
+  // Timings on a shared machine move with its load and its processor: both go with the figures.
+  const loadAfter = os.loadavg();
+  const cpus = os.cpus();
+  const cpuModel = cpus[0]?.model.trim() || 'unknown';
+  const load = { before: loadBefore[0]!, after: loadAfter[0]!, cpus: cpus.length, averagesBefore: loadBefore, averagesAfter: loadAfter };
+  const averages = (a: number[]) => a.map((v) => v.toFixed(2)).join(' / ');
+  console.log(`\nload average (1 / 5 / 15 min) ${averages(loadBefore)} → ${averages(loadAfter)} on ${load.cpus} CPUs`);
+  console.log(`CPU ${cpuModel}`);
   const results = {
     measuredAt: new Date().toISOString(),
     node: process.version,
     nodeEnv: process.env.NODE_ENV ?? null,
+    cpuModel,
     load,
     rows: rows.map((row) => ({ ...row, result: verdict(row) || undefined })),
   };
