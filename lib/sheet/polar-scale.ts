@@ -1,3 +1,4 @@
+import { cosDeg, sinDeg } from '../angle';
 import type { Fill, GraduationLevel, Shape } from './drawing';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
@@ -102,14 +103,25 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
 
 type At = (alongDeg: number, depthMm: number) => [number, number];
 
-/** The graduations: the hot loop of every wheel (up to 720 ticks), kept small so it compiles on its own. */
+/**
+ * The graduations: the hot loop of every wheel (up to 720 ticks), kept small so it compiles on its own.
+ * Each tick's sine and cosine once for both ends, and each level's inner radius once per scale
+ * (polarPointMm's arithmetic, so the same numbers).
+ */
 function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, angle: (alongDeg: number) => number, into: Shape[]): void {
+  const [cx, cy] = o.centreMm;
   const edge = radius(0);
+  const inner10 = radius(TICK_DEPTH_MM[10]);
+  const inner5 = radius(TICK_DEPTH_MM[5]);
+  const inner1 = radius(TICK_DEPTH_MM[1]);
+  const inner05 = radius(TICK_DEPTH_MM[0.5]);
   for (const tick of o.marks.ticks) {
     const theta = angle(tick.alongDeg);
-    const [x1, y1] = polarPointMm(o.centreMm, edge, theta);
-    const [x2, y2] = polarPointMm(o.centreMm, radius(TICK_DEPTH_MM[tick.level]), theta);
-    into.push(line(x1, y1, x2, y2, tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, { crankDeg: tick.crankDeg, level: tick.level }));
+    const sin = sinDeg(theta);
+    const cos = cosDeg(theta);
+    const level = tick.level;
+    const inner = level === 10 ? inner10 : level === 5 ? inner5 : level === 1 ? inner1 : inner05;
+    into.push(line(cx + edge * sin, cy - edge * cos, cx + inner * sin, cy - inner * cos, level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, { crankDeg: tick.crankDeg, level }));
   }
 }
 type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
