@@ -113,7 +113,9 @@ test('two edits from the same version: the later save is refused with who and wh
 
   await first.getByLabel(/^Static advance/).fill('19');
   await first.getByRole('button', { name: 'Save changes' }).click();
-  await expect(first.getByRole('heading', { level: 1, name: 'Coastline 200 scooter' })).toBeVisible();
+  // Back on the detail page (the edit page's heading also contains the name, hence exact).
+  await expect(first).toHaveURL(/\/templates\/\d+$/);
+  await expect(first.getByRole('heading', { level: 1, name: 'Coastline 200 scooter', exact: true })).toBeVisible();
 
   await second.getByLabel(/^Static advance/).fill('16');
   await second.getByRole('button', { name: 'Save changes' }).click();
