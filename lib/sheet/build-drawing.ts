@@ -1,4 +1,5 @@
 import { assertFiniteDrawing } from './assert-finite';
+import { checkBlockShapes } from './check-block';
 import { nestBlock, toBlock, type Block } from './block';
 import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
@@ -66,16 +67,22 @@ function stacked(blocks: Block[], page: PageSpec): Arrangement {
   return { multiPage: stackedPageCount(blocks, page) > 1, place: () => stackOnPages(blocks, page) };
 }
 
-/** The info panel laid out at a width, each width once (a banded page arranges the same panels again). */
-type InfoAt = (correctedWidthMm: number) => Block;
+/**
+ * The info panel laid out at a width, each width once (a banded page arranges the same panels again),
+ * and the narrowest any panel can be: every panel holds the scale check unmoved across
+ * (info-panel.ts), so none is narrower than the check block alone, pre-scaled the same way.
+ */
+type InfoAt = ((correctedWidthMm: number) => Block) & { narrowestMm: () => number };
 
 function infoByWidth(content: InfoContent, req: SheetRequest): InfoAt {
   const made = new Map<number, Block>();
-  return (widthMm) => {
+  let narrowestMm: number | undefined;
+  const infoAt = (widthMm: number) => {
     let block = made.get(widthMm);
     if (!block) made.set(widthMm, (block = infoBlock(content, req, widthMm)));
     return block;
   };
+  return Object.assign(infoAt, { narrowestMm: () => (narrowestMm ??= correctedBlock(checkBlockShapes().shapes, req, 0).widthMm) });
 }
 
 function arrange(page: PageSpec, layout: ScaleLayout, infoAt: InfoAt): Arrangement {
@@ -84,7 +91,8 @@ function arrange(page: PageSpec, layout: ScaleLayout, infoAt: InfoAt): Arrangeme
   if (layout.infoFirst) return stacked([fullInfo, ...layout.blocks], page);
   const scale = layout.blocks[0]!;
   const besideWidth = printable.widthMm - scale.widthMm - BLOCK_GAP_MM;
-  if (besideWidth > 0 && scale.heightMm <= printable.heightMm) {
+  // A panel that cannot fit beside (narrower than the scale check) is not laid out to find that out.
+  if (besideWidth > 0 && scale.heightMm <= printable.heightMm && infoAt.narrowestMm() <= besideWidth + 1e-6) {
     const side = infoAt(besideWidth);
     if (side.widthMm <= besideWidth + 1e-6 && side.heightMm <= printable.heightMm) {
       const gap = (printable.widthMm - scale.widthMm - side.widthMm) / 2;
