@@ -1,3 +1,4 @@
+import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
@@ -34,7 +35,8 @@ export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageRole(slug, 'viewer', `/w/${slug}/templates/${id}`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
-  const template = /^\d+$/.test(id) ? await findTemplate(access.workspace.id, Number(id)) : null;
+  const templateId = parsePathId(id);
+  const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
   const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
   const canEdit = access.role !== 'viewer';

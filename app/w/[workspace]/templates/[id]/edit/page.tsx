@@ -1,3 +1,4 @@
+import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { pageRole } from '@/app/lib/page-access';
@@ -13,7 +14,8 @@ export default async function EditTemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageRole(slug, 'technician', `/w/${slug}/templates/${id}/edit`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
-  const template = /^\d+$/.test(id) ? await findTemplate(access.workspace.id, Number(id)) : null;
+  const templateId = parsePathId(id);
+  const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
   return (
     <section className="max-w-3xl space-y-4">

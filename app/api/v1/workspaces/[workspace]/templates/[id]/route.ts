@@ -1,3 +1,4 @@
+import { parsePathId } from '@/lib/path-id';
 import { parseJsonBody } from '@/app/lib/api';
 import { requireRole } from '@/app/lib/authz';
 import { deleteObject } from '@/app/lib/storage';
@@ -6,7 +7,7 @@ import { listPhotos, publicPhoto } from '@/db/templates/photos';
 import { updateTemplate } from '@/db/templates/update-template';
 import { templatePatchSchema } from '@/lib/templates/template-schema';
 import { guarded } from '@/app/lib/route-handler';
-import { parseId, templateNotFound, type TemplateParams } from '../_shared/template-params';
+import { templateNotFound, type TemplateParams } from '../_shared/template-params';
 import { updateResponse } from '../_shared/responses';
 import { templateFor } from '../_shared/template-for';
 
@@ -28,7 +29,7 @@ export async function PATCH(request: Request, { params }: TemplateParams): Promi
   return guarded(async () => {
     const { workspace, id } = await params;
     const access = await requireRole(workspace, 'technician');
-    const templateId = parseId(id);
+    const templateId = parsePathId(id);
     if (!templateId) return templateNotFound();
     const body = await parseJsonBody(request, templatePatchSchema);
     if (!body.ok) return body.response;
@@ -42,7 +43,7 @@ export async function DELETE(_request: Request, { params }: TemplateParams): Pro
   return guarded(async () => {
     const { workspace, id } = await params;
     const access = await requireRole(workspace, 'owner');
-    const templateId = parseId(id);
+    const templateId = parsePathId(id);
     const keys = templateId ? await deleteTemplate(access.workspace.id, templateId) : null;
     if (!keys) return templateNotFound();
     await Promise.all(keys.map(deleteObject));

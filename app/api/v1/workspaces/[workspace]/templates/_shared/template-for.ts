@@ -1,9 +1,10 @@
 import 'server-only';
+import { parsePathId } from '@/lib/path-id';
 import { AccessError, NOT_FOUND_MESSAGE, requireRole, type Access } from '@/app/lib/authz';
 import { findTemplate } from '@/db/templates/find-template';
 import type { Template } from '@/lib/templates/template';
 import type { Role } from '@/lib/roles';
-import { parseId } from './template-params';
+import {} from './template-params';
 
 /**
  * The template named by the path, for a caller with at least `minimum` role in its workspace.
@@ -15,7 +16,7 @@ export async function templateFor(
 ): Promise<{ access: Access; template: Template }> {
   const { workspace, id } = await params;
   const access = await requireRole(workspace, minimum);
-  const templateId = parseId(id);
+  const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) throw new AccessError(404, NOT_FOUND_MESSAGE);
   return { access, template };

@@ -1,14 +1,15 @@
+import { parsePathId } from '@/lib/path-id';
 import { deleteObject, getObject } from '@/app/lib/storage';
 import { deletePhotoRow, findPhoto } from '@/db/templates/photos';
 import { guarded } from '@/app/lib/route-handler';
-import { parseId, templateNotFound } from '../../../_shared/template-params';
+import { templateNotFound } from '../../../_shared/template-params';
 import { templateFor } from '../../../_shared/template-for';
 
 type Params = { params: Promise<{ workspace: string; id: string; photoId: string }> };
 
 async function locate(params: Params['params'], minimum: 'viewer' | 'technician') {
   const { template } = await templateFor(params, minimum);
-  const photoNumber = parseId((await params).photoId);
+  const photoNumber = parsePathId((await params).photoId);
   return photoNumber ? findPhoto(template.id, photoNumber) : null;
 }
 

@@ -1,10 +1,11 @@
+import { parsePathId } from '@/lib/path-id';
 import { z } from 'zod';
 import { parseJsonBody } from '@/app/lib/api';
 import { revisionSnapshot } from '@/db/templates/revisions';
 import { updateTemplate } from '@/db/templates/update-template';
 import { versionSchema } from '@/lib/templates/template-schema';
 import { guarded } from '@/app/lib/route-handler';
-import { parseId, templateNotFound } from '../../../../_shared/template-params';
+import { templateNotFound } from '../../../../_shared/template-params';
 import { updateResponse } from '../../../../_shared/responses';
 import { templateFor } from '../../../../_shared/template-for';
 
@@ -19,7 +20,7 @@ const restoreSchema = z.object({ version: versionSchema }).strict();
 export async function POST(request: Request, { params }: Params): Promise<Response> {
   return guarded(async () => {
     const { access, template } = await templateFor(params, 'technician');
-    const revision = parseId((await params).version);
+    const revision = parsePathId((await params).version);
     const snapshot = revision ? await revisionSnapshot(template.id, revision) : null;
     if (!snapshot || !revision) return templateNotFound();
     const body = await parseJsonBody(request, restoreSchema);
