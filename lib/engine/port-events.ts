@@ -1,4 +1,4 @@
-import { crankDegFromDropMm, type CrankGeometry } from './slider-crank';
+import { crankAnglesFromDropMm, deadCentres, type OffsetCrankGeometry } from './offset-slider-crank';
 import { portKindFromName, type PortKind } from './port-kind';
 
 /**
@@ -8,6 +8,9 @@ import { portKindFromName, type PortKind } from './port-kind';
  * The crown reaches a port's top edge when the piston has dropped
  * (edge height below the cylinder top) − (deck height), deck = crown below the
  * cylinder top at TDC, negative when the crown stands proud.
+ * With a wrist-pin offset the crown passes the edge at different angles going down and coming
+ * up (offset-slider-crank.ts), so closing is taken from the up-stroke and duration = closing − opening;
+ * with a centred pin that is the symmetric 360 − 2 × opening.
  */
 
 export type PortInput = { name: string; heightMm: number; kind?: PortKind };
@@ -20,11 +23,11 @@ export type PortTiming = {
   status: PortStatus;
   /** Crank angle after TDC at which the crown uncovers the edge; null when it never opens. */
   opensDegATDC: number | null;
-  /** 360 − opening: the piston covers the edge again the same angle before TDC (symmetric slider-crank). */
+  /** Where the crown covers the edge again on the up-stroke, in crank order (360 − opening with a centred pin). */
   closesDegATDC: number | null;
-  /** 360 − 2 × opening ATDC (common practice); 0 when the port never opens. */
+  /** Closing − opening; 360 − 2 × opening ATDC with a centred pin (common practice); 0 when the port never opens. */
   durationDeg: number;
-  /** Opening expressed before BDC, 180 − opening; null when it never opens. */
+  /** Opening expressed before BDC (180 − opening with a centred pin); null when it never opens. */
   opensDegBBDC: number | null;
   /** Piston drop at which the port starts to open, mm. */
   openingDropMm: number;
@@ -33,10 +36,11 @@ export type PortTiming = {
 
 export type PortEventsResult = { ports: PortTiming[]; blowdownDeg: number | null; blowdownNote: string };
 
-export function portTiming({ strokeMm, rodMm, deckMm, port }: CrankGeometry & { deckMm: number; port: PortInput }): PortTiming {
+export function portTiming({ strokeMm, rodMm, pinOffsetMm = 0, deckMm, port }: OffsetCrankGeometry & { deckMm: number; port: PortInput }): PortTiming {
   const kind = port.kind ?? portKindFromName(port.name);
   const openingDropMm = port.heightMm - deckMm;
   const base = { name: port.name, kind, openingDropMm };
+  const { trueStrokeMm, bdcCrankDeg } = deadCentres({ strokeMm, rodMm, pinOffsetMm });
   if (openingDropMm <= 0)
     return {
       ...base,
@@ -47,7 +51,7 @@ export function portTiming({ strokeMm, rodMm, deckMm, port }: CrankGeometry & { 
       opensDegBBDC: 180,
       note: 'Open at TDC: the port edge is level with or above the piston crown at TDC, so the crown never covers it',
     };
-  if (openingDropMm >= strokeMm)
+  if (openingDropMm >= trueStrokeMm)
     return {
       ...base,
       status: 'never-opens',
@@ -55,22 +59,24 @@ export function portTiming({ strokeMm, rodMm, deckMm, port }: CrankGeometry & { 
       closesDegATDC: null,
       durationDeg: 0,
       opensDegBBDC: null,
-      note: `Never opens: the port edge lies ${formatMm(openingDropMm)} below the crown at TDC, at or beyond the ${formatMm(strokeMm)} stroke`,
+      note: `Never opens: the port edge lies ${formatMm(openingDropMm)} below the crown at TDC, at or beyond the ${formatMm(trueStrokeMm)} stroke`,
     };
-  const opensDegATDC = crankDegFromDropMm({ strokeMm, rodMm, dropMm: openingDropMm });
+  const { crankDegATDC: opensDegATDC, crankDegBTDC } = crankAnglesFromDropMm({ strokeMm, rodMm, pinOffsetMm, dropMm: openingDropMm });
+  const closesDegATDC = 360 - crankDegBTDC;
   return {
     ...base,
     status: 'opens',
     opensDegATDC,
-    closesDegATDC: 360 - opensDegATDC,
-    durationDeg: 360 - 2 * opensDegATDC,
-    opensDegBBDC: 180 - opensDegATDC,
+    closesDegATDC,
+    // Written as the centred-pin formula when there is no offset, so those results stay exactly as they were.
+    durationDeg: pinOffsetMm === 0 ? 360 - 2 * opensDegATDC : closesDegATDC - opensDegATDC,
+    opensDegBBDC: bdcCrankDeg - opensDegATDC,
     note: `Opens ${formatMm(openingDropMm)} below TDC`,
   };
 }
 
-export function portEvents({ strokeMm, rodMm, deckMm, ports }: CrankGeometry & { deckMm: number; ports: PortInput[] }): PortEventsResult {
-  const timings = ports.map((port) => portTiming({ strokeMm, rodMm, deckMm, port }));
+export function portEvents({ strokeMm, rodMm, pinOffsetMm = 0, deckMm, ports }: OffsetCrankGeometry & { deckMm: number; ports: PortInput[] }): PortEventsResult {
+  const timings = ports.map((port) => portTiming({ strokeMm, rodMm, pinOffsetMm, deckMm, port }));
   return { ports: timings, ...blowdown(timings) };
 }
 

@@ -23,4 +23,13 @@ describe('mm BTDC ↔ degrees BTDC', () => {
       expect(btdcDegFromBtdcMm({ ...small, btdcMm })).toBeCloseTo(btdcDeg, 9);
     }
   });
+
+  it('uses the up-stroke with a wrist-pin offset and round-trips to 1e-9°', () => {
+    // Offset slider-crank (Norton, Design of Machinery; from memory): before TDC is the up-stroke, crank order 360 − x.
+    for (const btdcDeg of [16, 18, 20]) {
+      const btdcMm = btdcMmFromBtdcDeg({ ...small, pinOffsetMm: 1, btdcDeg });
+      expect(btdcMm).not.toBeCloseTo(btdcMmFromBtdcDeg({ ...small, btdcDeg }), 3);
+      expect(btdcDegFromBtdcMm({ ...small, pinOffsetMm: 1, btdcMm })).toBeCloseTo(btdcDeg, 9);
+    }
+  });
 });

@@ -63,6 +63,41 @@ describe('portTiming', () => {
   });
 });
 
+describe('portTiming with a wrist-pin offset (offset slider-crank, R. L. Norton, Design of Machinery; from memory)', () => {
+  // Independent geometry: crank pin at (a sin φ, a cos φ), wrist pin on the line x = e, rod l between them.
+  const pinHeight = (phiRad: number, e: number) => 27 * Math.cos(phiRad) + Math.sqrt(105 ** 2 - (27 * Math.sin(phiRad) - e) ** 2);
+  const crownDropAt = (crankDeg: number, e: number) => {
+    const phiTdc = Math.asin(e / 132); // TDC where crank and rod line up: asin(e / (l + a))
+    return pinHeight(phiTdc, e) - pinHeight(phiTdc + (crankDeg * Math.PI) / 180, e);
+  };
+
+  it('opens on the down-stroke and closes on the up-stroke at different angles: duration = closing − opening', () => {
+    const port = portTiming({ ...small, pinOffsetMm: 1, deckMm: 0, port: { name: 'Exhaust', heightMm: 27 } });
+    const opens = port.opensDegATDC as number;
+    const closes = port.closesDegATDC as number;
+    // The crown really is at the 27 mm edge at both angles (independent intersection above).
+    expect(crownDropAt(opens, 1)).toBeCloseTo(27, 9);
+    expect(crownDropAt(closes, 1)).toBeCloseTo(27, 9);
+    expect(port.durationDeg).toBeCloseTo(closes - opens, 12);
+    // Not symmetric any more: closing is not 360 − opening, so 360 − 2 × opening would be wrong.
+    expect(Math.abs(closes - (360 - opens))).toBeGreaterThan(0.1);
+    expect(Math.abs(port.durationDeg - (360 - 2 * opens))).toBeGreaterThan(0.1);
+    // Opening BBDC is counted from the offset BDC, 180.30051831232024° ATDC (by hand with bc, offset-slider-crank.test.ts).
+    expect(port.opensDegBBDC).toBeCloseTo(180.30051831232024 - opens, 9);
+  });
+
+  it('keeps the centred results exactly with a 0 mm offset', () => {
+    const centred = portTiming({ ...small, deckMm: 0.6, port: { name: 'Transfer', heightMm: 41.2 } });
+    expect(portTiming({ ...small, pinOffsetMm: 0, deckMm: 0.6, port: { name: 'Transfer', heightMm: 41.2 } })).toEqual(centred);
+  });
+
+  it('uses the true stroke for a port that never opens', () => {
+    // True stroke with e = 1 is 54.0026 mm (bc, offset-slider-crank.test.ts): a 54 mm port now just opens, 54.01 mm never does.
+    expect(portTiming({ ...small, pinOffsetMm: 1, deckMm: 0, port: { name: 'E', heightMm: 54 } }).status).toBe('opens');
+    expect(portTiming({ ...small, pinOffsetMm: 1, deckMm: 0, port: { name: 'E', heightMm: 54.01 } }).status).toBe('never-opens');
+  });
+});
+
 describe('portEvents', () => {
   it('times several ports at once and measures blowdown from exhaust to transfer opening', () => {
     const result = portEvents({
