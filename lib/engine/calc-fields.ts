@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { PIN_OFFSET_LIMIT_MM, offsetCrankGeometryProblem } from './offset-slider-crank';
 import { crankGeometryProblem } from './slider-crank';
 
 /**
@@ -11,6 +12,7 @@ export const ROD_RANGE_MM = { min: 1, max: 1000 } as const;
 export const DECK_RANGE_MM = { min: -20, max: 20 } as const;
 export const PORT_HEIGHT_RANGE_MM = { min: 0, max: 400 } as const;
 export const MAX_CALC_PORTS = 12;
+export const PIN_OFFSET_RANGE_MM = { min: -PIN_OFFSET_LIMIT_MM, max: PIN_OFFSET_LIMIT_MM } as const;
 
 function withUnit(value: number, unit: string): string {
   if (!unit) return String(value);
@@ -26,6 +28,9 @@ export function numberField(label: string, field: string, min: number, max: numb
 }
 
 export const strokeField = () => numberField('Stroke', 'strokeMm', STROKE_RANGE_MM.min, STROKE_RANGE_MM.max, 'mm');
+/** Optional wrist-pin offset; positive toward the side the crank pin swings to just after TDC. */
+export const pinOffsetField = () =>
+  numberField('Wrist-pin offset', 'pinOffsetMm', PIN_OFFSET_RANGE_MM.min, PIN_OFFSET_RANGE_MM.max, 'mm').optional();
 export const rodField = () => numberField('Con-rod length', 'rodMm', ROD_RANGE_MM.min, ROD_RANGE_MM.max, 'mm');
 
 type RefineContext = { addIssue: (issue: { code: 'custom'; path: string[]; message: string }) => void };
@@ -49,4 +54,21 @@ export function checkCrankGeometry(value: { strokeMm: number; rodMm: number }, c
 
 export function strokeInRange(strokeMm: number): boolean {
   return strokeMm >= STROKE_RANGE_MM.min && strokeMm <= STROKE_RANGE_MM.max;
+}
+
+/**
+ * checkCrankGeometry, then the offset's own limit: |e| < l − a or the mechanism locks at BDC.
+ * An offset already out of its ±5 mm range is left to the field's own message.
+ */
+export function checkOffsetCrankGeometry(
+  value: { strokeMm: number; rodMm: number; pinOffsetMm?: number | undefined },
+  ctx: RefineContext,
+): boolean {
+  if (!checkCrankGeometry(value, ctx)) return false;
+  const pinOffsetMm = value.pinOffsetMm ?? 0;
+  if (typeof pinOffsetMm !== 'number' || !(Math.abs(pinOffsetMm) <= PIN_OFFSET_LIMIT_MM)) return false;
+  const problem = offsetCrankGeometryProblem({ ...value, pinOffsetMm });
+  if (!problem) return true;
+  ctx.addIssue({ code: 'custom', path: [problem.field], message: problem.message });
+  return false;
 }

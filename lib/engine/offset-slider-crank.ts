@@ -27,14 +27,14 @@ type Problem = { field: 'strokeMm' | 'rodMm' | 'pinOffsetMm'; message: string };
 export function offsetCrankGeometryProblem({ strokeMm, rodMm, pinOffsetMm = 0 }: OffsetCrankGeometry): Problem | null {
   const centred = crankGeometryProblem({ strokeMm, rodMm });
   if (centred) return centred;
-  const range = `allowed −${PIN_OFFSET_LIMIT_MM} to ${PIN_OFFSET_LIMIT_MM} mm`;
+  const range = `allowed -${PIN_OFFSET_LIMIT_MM} to ${PIN_OFFSET_LIMIT_MM} mm`;
   if (!Number.isFinite(pinOffsetMm) || Math.abs(pinOffsetMm) > PIN_OFFSET_LIMIT_MM)
     return { field: 'pinOffsetMm', message: `Wrist-pin offset (pinOffsetMm) must be a length in mm, ${range}` };
   const lockMm = rodMm - crankThrowMm(strokeMm);
   if (Math.abs(pinOffsetMm) >= lockMm)
     return {
       field: 'pinOffsetMm',
-      message: `Wrist-pin offset (pinOffsetMm) must be less than con-rod length minus crank throw (${roundMm(lockMm)} mm) either way, or the crank cannot pass BDC: allowed more than −${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} and less than ${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} mm`,
+      message: `Wrist-pin offset (pinOffsetMm) must be less than con-rod length minus crank throw (${roundMm(lockMm)} mm) either way, or the crank cannot pass BDC: allowed more than -${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} and less than ${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} mm`,
     };
   return null;
 }

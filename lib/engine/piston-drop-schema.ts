@@ -1,19 +1,20 @@
 import { z } from 'zod';
-import { checkCrankGeometry, numberField, rodField, strokeField } from './calc-fields';
+import { checkOffsetCrankGeometry, numberField, pinOffsetField, rodField, strokeField } from './calc-fields';
 
-/** POST /api/v1/calc/piston-drop and the piston drop form: crank angle → piston drop below TDC. */
+/**
+ * POST /api/v1/calc/piston-drop and the piston drop form: crank angle → piston drop below TDC.
+ * crankDeg is 0–360 in crank order from piston TDC: x° ATDC is x, x° BTDC is 360 − x. With a
+ * wrist-pin offset the two sides of TDC differ, so the side matters.
+ */
 export const pistonDropSchema = z
   .object({
     strokeMm: strokeField(),
     rodMm: rodField(),
     crankDeg: numberField('Crank angle', 'crankDeg', 0, 360, '°'),
-    // A wrist-pin offset is not modelled: only a centred pin (0 mm) is accepted.
-    pinOffsetMm: z
-      .literal(0, { error: 'Wrist-pin offset (pinOffsetMm) is not supported: leave it out or send 0 mm (centred pin)' })
-      .optional(),
+    pinOffsetMm: pinOffsetField(),
   })
   .superRefine((value, ctx) => {
-    checkCrankGeometry(value, ctx);
+    checkOffsetCrankGeometry(value, ctx);
   });
 
 export type PistonDropInput = z.input<typeof pistonDropSchema>;

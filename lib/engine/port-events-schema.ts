@@ -3,8 +3,9 @@ import {
   DECK_RANGE_MM,
   MAX_CALC_PORTS,
   PORT_HEIGHT_RANGE_MM,
-  checkCrankGeometry,
+  checkOffsetCrankGeometry,
   numberField,
+  pinOffsetField,
   rodField,
   strokeField,
 } from './calc-fields';
@@ -26,13 +27,14 @@ export const portEventsSchema = z
     strokeMm: strokeField(),
     rodMm: rodField(),
     deckMm: numberField('Deck height', 'deckMm', DECK_RANGE_MM.min, DECK_RANGE_MM.max, 'mm'),
+    pinOffsetMm: pinOffsetField(),
     ports: z
       .array(calcPortSchema, { error: 'Ports (ports) must be a list of { name, heightMm }' })
       .min(1, `Ports (ports): give 1–${MAX_CALC_PORTS} ports`)
       .max(MAX_CALC_PORTS, `Ports (ports): at most ${MAX_CALC_PORTS} (allowed 1–${MAX_CALC_PORTS})`),
   })
   .superRefine((value, ctx) => {
-    checkCrankGeometry(value, ctx);
+    checkOffsetCrankGeometry(value, ctx);
   });
 
 export type PortEventsInput = z.input<typeof portEventsSchema>;

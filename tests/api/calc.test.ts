@@ -29,7 +29,45 @@ describe('POST /api/v1/calc/piston-drop', () => {
   });
 });
 
+describe('POST /api/v1/calc/piston-drop with a wrist-pin offset', () => {
+  it('answers the offset slider-crank drop', async () => {
+    // Offset slider-crank (Norton, Design of Machinery; from memory), checked by the independent intersection:
+    // crank pin at (a sin φ, a cos φ), wrist pin on x = e, φ = φ_TDC + θ, φ_TDC = asin(e / (l + a)).
+    const a = 27;
+    const l = 105;
+    const e = 1;
+    const y = (phi: number) => a * Math.cos(phi) + Math.sqrt(l * l - (a * Math.sin(phi) - e) ** 2);
+    const phiTdc = Math.asin(e / (l + a));
+    for (const crankDeg of [18, 90, 342]) {
+      const { status, body } = await post(pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg, pinOffsetMm: 1 });
+      expect(status).toBe(200);
+      expect(body.dropMm).toBeCloseTo(y(phiTdc) - y(phiTdc + (crankDeg * Math.PI) / 180), 9);
+    }
+    // 18° ATDC and 18° BTDC (342) no longer give the same drop with an offset (about 0.002 mm apart for e = 1).
+    const after = await post(pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: 18, pinOffsetMm: 1 });
+    const before = await post(pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: 342, pinOffsetMm: 1 });
+    expect(Math.abs(after.body.dropMm - before.body.dropMm)).toBeGreaterThan(0.001);
+  });
+});
+
 describe('POST /api/v1/calc/crank-angle', () => {
+  it('answers both sides of TDC with a pin offset, and the three equal without', async () => {
+    const centred = await post(crankAngle, { strokeMm: 54, rodMm: 105, dropMm: 27 });
+    // acos(a / 2l) at half stroke (law of cosines from Heywood eq. 2.5).
+    expect(centred.body.crankDegATDC).toBeCloseTo(82.6129515636983, 10);
+    expect(centred.body.crankDegBTDC).toBe(centred.body.crankDeg);
+    const { status, body } = await post(crankAngle, { strokeMm: 54, rodMm: 105, dropMm: 27, pinOffsetMm: 1 });
+    expect(status).toBe(200);
+    expect(body.crankDeg).toBe(body.crankDegATDC);
+    expect(body.crankDegATDC).toBeGreaterThan(body.crankDegBTDC);
+    // Both angles put the piston at 27 mm (round trip through the piston-drop route).
+    const down = await post(pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: body.crankDegATDC, pinOffsetMm: 1 });
+    const up = await post(pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: 360 - body.crankDegBTDC, pinOffsetMm: 1 });
+    expect(down.body.dropMm).toBeCloseTo(27, 9);
+    expect(up.body.dropMm).toBeCloseTo(27, 9);
+  });
+
+
   it('answers degrees from TDC', async () => {
     // cos θ = a / 2l = 27/210 at half stroke (law of cosines from eq. 2.5): θ = 82.6129515636983°.
     const { status, body } = await post(crankAngle, { strokeMm: 54, rodMm: 105, dropMm: 27 });
@@ -56,6 +94,14 @@ describe('POST /api/v1/calc/port-events', () => {
     expect(body.blowdownDeg).toBeCloseTo(29.02621599053181, 9);
     // A port at the stroke never opens: null angles and a note, never NaN.
     expect(body.ports[2]).toMatchObject({ status: 'never-opens', opensDegATDC: null, closesDegATDC: null, durationDeg: 0 });
+  });
+
+  it('answers asymmetric timing with a pin offset: duration = closing − opening', async () => {
+    const { status, body } = await post(portEventsRoute, { strokeMm: 54, rodMm: 105, deckMm: 0, pinOffsetMm: 1, ports: [{ name: 'Exhaust', heightMm: 27 }] });
+    expect(status).toBe(200);
+    const [exhaust] = body.ports;
+    expect(exhaust.durationDeg).toBeCloseTo(exhaust.closesDegATDC - exhaust.opensDegATDC, 12);
+    expect(Math.abs(exhaust.durationDeg - (360 - 2 * exhaust.opensDegATDC))).toBeGreaterThan(0.1);
   });
 });
 
@@ -92,7 +138,10 @@ describe('bad input answers 400 with the API error shape, one message per field'
     ['rod', pistonDrop, { strokeMm: 54, rodMm: 20, crankDeg: 10 }, 'rodMm', /rodMm.*longer than the crank throw.*over 27 up to 1000 mm/],
     ['crank angle', pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: 400 }, 'crankDeg', /crankDeg.*0–360°/],
     ['crank angle text', pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: '10' }, 'crankDeg', /crankDeg.*must be a number/],
-    ['pin offset', pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: 10, pinOffsetMm: 1.5 }, 'pinOffsetMm', /pinOffsetMm/],
+    ['pin offset', pistonDrop, { strokeMm: 54, rodMm: 105, crankDeg: 10, pinOffsetMm: 5.5 }, 'pinOffsetMm', /Wrist-pin offset \(pinOffsetMm\).*-5 to 5 mm/],
+    ['locked mechanism', pistonDrop, { strokeMm: 54, rodMm: 30, crankDeg: 10, pinOffsetMm: 3.5 }, 'pinOffsetMm', /pinOffsetMm.*con-rod length minus crank throw \(3 mm\).*cannot pass BDC/],
+    ['crank-angle offset', crankAngle, { strokeMm: 54, rodMm: 105, dropMm: 10, pinOffsetMm: -6 }, 'pinOffsetMm', /pinOffsetMm.*-5 to 5 mm/],
+    ['port-events offset', portEventsRoute, { strokeMm: 54, rodMm: 30, deckMm: 0, pinOffsetMm: 4, ports: [{ name: 'E', heightMm: 20 }] }, 'pinOffsetMm', /pinOffsetMm.*con-rod length minus crank throw/],
     ['drop', crankAngle, { strokeMm: 54, rodMm: 105, dropMm: 60 }, 'dropMm', /dropMm.*0–54 mm/],
     ['missing drop', crankAngle, { strokeMm: 54, rodMm: 105 }, 'dropMm', /dropMm.*must be a number/],
     ['deck', portEventsRoute, { strokeMm: 54, rodMm: 105, deckMm: -25, ports: [{ name: 'E', heightMm: 20 }] }, 'deckMm', /deckMm.*-20 to 20 mm/],

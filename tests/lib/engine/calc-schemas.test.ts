@@ -13,6 +13,8 @@ describe('calculator schemas accept good input', () => {
   it('parses each calculator’s example', () => {
     expect(pistonDropSchema.safeParse({ strokeMm: 54, rodMm: 105, crankDeg: 18 }).success).toBe(true);
     expect(pistonDropSchema.safeParse({ strokeMm: 54, rodMm: 105, crankDeg: 18, pinOffsetMm: 0 }).success).toBe(true);
+    expect(pistonDropSchema.safeParse({ strokeMm: 54, rodMm: 105, crankDeg: 18, pinOffsetMm: -1.5 }).success).toBe(true);
+    expect(crankAngleSchema.safeParse({ strokeMm: 54, rodMm: 105, dropMm: 54.002, pinOffsetMm: 1 }).success).toBe(true);
     expect(crankAngleSchema.safeParse({ strokeMm: 54, rodMm: 105, dropMm: 54 }).success).toBe(true);
     expect(portEventsSchema.safeParse({ strokeMm: 54, rodMm: 105, deckMm: -0.4, ports: [{ name: 'Exhaust', heightMm: 27 }] }).success).toBe(true);
     expect(tdcSchema.safeParse({ numbering: 'split', readingADeg: 25, readingASide: 'BTDC', readingBDeg: 0 }).success).toBe(true);
@@ -26,7 +28,13 @@ describe('every field out of range answers its own message with the allowed rang
     ['rod vs throw', pistonDropSchema, { strokeMm: 54, rodMm: 26, crankDeg: 10 }, 'rodMm', /Con-rod length \(rodMm\).*over 27 up to 1000 mm/],
     ['rod range', pistonDropSchema, { strokeMm: 54, rodMm: 2000, crankDeg: 10 }, 'rodMm', /rodMm.*1–1000 mm/],
     ['crank angle', pistonDropSchema, { strokeMm: 54, rodMm: 105, crankDeg: -1 }, 'crankDeg', /Crank angle \(crankDeg\).*0–360°/],
-    ['pin offset', pistonDropSchema, { strokeMm: 54, rodMm: 105, crankDeg: 10, pinOffsetMm: 1 }, 'pinOffsetMm', /pinOffsetMm.*0 mm/],
+    ['pin offset', pistonDropSchema, { strokeMm: 54, rodMm: 105, crankDeg: 10, pinOffsetMm: 5.5 }, 'pinOffsetMm', /Wrist-pin offset \(pinOffsetMm\).*-5 to 5 mm/],
+    // |e| ≥ l − a: the rod cannot reach the offset bore line at BDC (offset slider-crank, Norton, Design of Machinery; from memory).
+    ['locked by offset', pistonDropSchema, { strokeMm: 54, rodMm: 30, crankDeg: 10, pinOffsetMm: -3 }, 'pinOffsetMm', /pinOffsetMm.*con-rod length minus crank throw \(3 mm\)/],
+    ['crank angle offset', crankAngleSchema, { strokeMm: 54, rodMm: 105, dropMm: 10, pinOffsetMm: 'x' }, 'pinOffsetMm', /pinOffsetMm.*must be a number/],
+    // True stroke with e = 1 is 54.0026 mm (by hand with bc in offset-slider-crank.test.ts).
+    ['drop beyond offset stroke', crankAngleSchema, { strokeMm: 54, rodMm: 105, dropMm: 54.01, pinOffsetMm: 1 }, 'dropMm', /dropMm.*pin offset.*0–54\.003 mm/],
+    ['port offset', portEventsSchema, { strokeMm: 54, rodMm: 105, deckMm: 0, pinOffsetMm: -7, ports: [{ name: 'E', heightMm: 27 }] }, 'pinOffsetMm', /pinOffsetMm.*-5 to 5 mm/],
     ['drop beyond stroke', crankAngleSchema, { strokeMm: 54, rodMm: 105, dropMm: 55 }, 'dropMm', /Piston drop \(dropMm\).*0–54 mm/],
     ['negative drop', crankAngleSchema, { strokeMm: 54, rodMm: 105, dropMm: -1 }, 'dropMm', /dropMm.*at least 0 mm/],
     ['deck', portEventsSchema, { strokeMm: 54, rodMm: 105, deckMm: 30, ports: [{ name: 'E', heightMm: 27 }] }, 'deckMm', /Deck height \(deckMm\).*-20 to 20 mm/],

@@ -150,7 +150,7 @@ describe('offsetCrankGeometryProblem', () => {
     expect(offsetCrankGeometryProblem(offset)).toBeNull();
     expect(offsetCrankGeometryProblem({ ...small, pinOffsetMm: 6 })).toMatchObject({
       field: 'pinOffsetMm',
-      message: expect.stringMatching(/allowed −5 to 5 mm/),
+      message: expect.stringMatching(/allowed -5 to 5 mm/),
     });
     expect(offsetCrankGeometryProblem({ ...small, pinOffsetMm: Number.NaN })?.field).toBe('pinOffsetMm');
     // |e| ≥ l − a locks the mechanism: stroke 54, rod 30 leaves l − a = 3 mm (Norton: the rod cannot reach the bore line at BDC).
