@@ -2,9 +2,11 @@
 
 import { createColumnHelper, tableFeatures, useTable } from '@tanstack/react-table';
 import Link from 'next/link';
-import { useEffect, useMemo, useState } from 'react';
+import { usePathname, useRouter, useSearchParams } from 'next/navigation';
+import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { TemplateSortKey } from '@/lib/templates/list-query';
+import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/templates/list-view';
 import type { Template, TemplatePage } from '@/lib/templates/template';
 import { inputClass } from '@/components/generator/fields';
 import { formatFieldValue, formatWhen } from './field-labels';
@@ -21,25 +23,61 @@ const fetchJson = async (url: string): Promise<TemplatePage> => {
   return res.json();
 };
 
-function useDebounced<T>(value: T, ms: number): T {
-  const [debounced, setDebounced] = useState(value);
+const SEARCH_DELAY_MS = 250;
+
+/**
+ * The list's view lives in the URL (`?q=&sort=&dir=&archived=&page=`), so a
+ * reload, the back button and a shared link show the same rows. The search box
+ * has its own state so typing stays instant; it reaches the URL after a pause.
+ */
+function useListView() {
+  const searchParams = useSearchParams();
+  const pathname = usePathname();
+  const { replace } = useRouter();
+  const view = useMemo(() => listViewFromParams(new URLSearchParams(searchParams.toString())), [searchParams]);
+  const show = useCallback(
+    (patch: Partial<TemplateListView>) => replace(listViewHref(pathname, { ...view, ...patch }), { scroll: false }),
+    [view, pathname, replace],
+  );
+  return { view, show };
+}
+
+/** The search box text: follows the URL (back button, links) but never overwrites what is being typed. */
+function useSearchText(urlQ: string, show: (patch: Partial<TemplateListView>) => void) {
+  const [text, setText] = useState(urlQ);
+  const sent = useRef(urlQ);
+  const input = useRef<HTMLInputElement>(null);
+
+  // Text typed into the server-rendered box before hydration is in the DOM but not in state: adopt it.
   useEffect(() => {
-    const timer = setTimeout(() => setDebounced(value), ms);
+    const typed = input.current?.value;
+    if (typed !== undefined && typed !== urlQ) setText(typed);
+  }, []); // eslint-disable-line react-hooks/exhaustive-deps -- once, on mount: urlQ is the server-rendered value
+
+  useEffect(() => {
+    if (urlQ.trim() === sent.current.trim()) return;
+    sent.current = urlQ;
+    setText(urlQ);
+  }, [urlQ]);
+
+  useEffect(() => {
+    if (text.trim() === sent.current.trim()) return;
+    const timer = setTimeout(() => {
+      sent.current = text;
+      show({ q: text, page: 1 });
+    }, SEARCH_DELAY_MS);
     return () => clearTimeout(timer);
-  }, [value, ms]);
-  return debounced;
+  }, [text, show]);
+
+  return { text, setText, input };
 }
 
 /** The template list: SWR fetches each page from the JSON API (search, sort, filter and paging in SQL). */
 export function TemplateList({ slug }: { slug: string }) {
-  const [q, setQ] = useState('');
-  const [sort, setSort] = useState<TemplateSortKey>('name');
-  const [dir, setDir] = useState<'asc' | 'desc'>('asc');
-  const [archived, setArchived] = useState<'false' | 'true' | 'all'>('false');
-  const [page, setPage] = useState(1);
+  const { view, show } = useListView();
+  const { q: search, sort, dir, archived, page } = view;
+  const { text: q, setText: setQ, input: searchInput } = useSearchText(search, show);
   const pageSize = 25;
-  const search = useDebounced(q, 250);
-  useEffect(() => setPage(1), [search, archived, sort, dir]);
 
   const params = new URLSearchParams({ q: search, sort, dir, archived, page: String(page), pageSize: String(pageSize) });
   const { data, error, isLoading } = useSWR(`/api/v1/workspaces/${slug}/templates?${params}`, fetchJson, {
@@ -91,13 +129,8 @@ export function TemplateList({ slug }: { slug: string }) {
   const total = data?.total ?? 0;
   const pages = Math.max(1, Math.ceil(total / pageSize));
 
-  const toggleSort = (key: TemplateSortKey) => {
-    if (sort === key) setDir(dir === 'asc' ? 'desc' : 'asc');
-    else {
-      setSort(key);
-      setDir('asc');
-    }
-  };
+  const toggleSort = (key: TemplateSortKey) =>
+    show(sort === key ? { dir: dir === 'asc' ? 'desc' : 'asc', page: 1 } : { sort: key, dir: 'asc', page: 1 });
 
   return (
     <div className="space-y-3">
@@ -106,13 +139,13 @@ export function TemplateList({ slug }: { slug: string }) {
           <label htmlFor="template-search" className="block text-sm font-medium">
             Search name and engine
           </label>
-          <input id="template-search" type="search" value={q} onChange={(e) => setQ(e.target.value)} className={`${inputClass} w-72`} />
+          <input ref={searchInput} id="template-search" type="search" value={q} onChange={(e) => setQ(e.target.value)} className={`${inputClass} w-72`} />
         </div>
         <div className="space-y-1">
           <label htmlFor="template-archived" className="block text-sm font-medium">
             Show
           </label>
-          <select id="template-archived" value={archived} onChange={(e) => setArchived(e.target.value as typeof archived)} className={inputClass}>
+          <select id="template-archived" value={archived} onChange={(e) => show({ archived: e.target.value as typeof archived, page: 1 })} className={inputClass}>
             <option value="false">In use</option>
             <option value="true">Archived only</option>
             <option value="all">All</option>
@@ -158,13 +191,13 @@ export function TemplateList({ slug }: { slug: string }) {
         </table>
       </div>
       <nav aria-label="Template pages" className="flex items-center gap-3 text-sm">
-        <button type="button" disabled={page <= 1} onClick={() => setPage(page - 1)} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
+        <button type="button" disabled={page <= 1} onClick={() => show({ page: page - 1 })} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
           Previous
         </button>
         <span>
           Page {page} of {pages}
         </span>
-        <button type="button" disabled={page >= pages} onClick={() => setPage(page + 1)} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
+        <button type="button" disabled={page >= pages} onClick={() => show({ page: page + 1 })} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
           Next
         </button>
       </nav>

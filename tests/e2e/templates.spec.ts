@@ -154,3 +154,55 @@ test('a photo uploads through the page (a PNG named .jpg is kept as PNG) and an 
   expect((await refused.json()).error).toMatch(/larger than 10 MB/);
   await context.close();
 });
+
+test('the list view lives in the URL: search and sort survive a reload and the back button, a shared link filters', async ({ browser }) => {
+  const context = await browser.newContext();
+  const page = await context.newPage();
+  await signIn(page, TECH);
+  const search = page.getByLabel('Search name and engine');
+  const names = page.locator('tbody tr td:first-child');
+  // Hold the page's scripts back, type into the server-rendered box, then let React hydrate:
+  // what was typed before hydration must be kept and searched for.
+  let release = () => {};
+  const scriptsHeld = new Promise<void>((resolve) => (release = resolve));
+  await page.route('**/_next/static/chunks/**', async (route) => {
+    await scriptsHeld;
+    await route.continue();
+  });
+  await page.goto('/w/harbour-lane/templates', { waitUntil: 'commit' });
+  await search.fill('scooter');
+  release();
+  await page.unrouteAll({ behavior: 'wait' });
+  await expect(page).toHaveURL(/\?q=scooter$/);
+  await expect(names).toHaveText(['Coastline 125 scooter', 'Coastline 200 scooter', 'Quayside 150 scooter, disc valve']);
+
+  // Bore twice: descending by bore (seeded 66, 57.5 and 54 mm).
+  const bore = page.getByRole('columnheader', { name: /^Bore/ });
+  await bore.getByRole('button').click();
+  await expect(bore).toHaveAttribute('aria-sort', 'ascending');
+  await bore.getByRole('button').click();
+  await expect(bore).toHaveAttribute('aria-sort', 'descending');
+  await expect(page).toHaveURL(/\?q=scooter&sort=boreMm&dir=desc$/);
+  const byBoreDown = ['Coastline 200 scooter', 'Quayside 150 scooter, disc valve', 'Coastline 125 scooter'];
+  await expect(names).toHaveText(byBoreDown);
+
+  await page.reload();
+  await expect(search).toHaveValue('scooter');
+  await expect(bore).toHaveAttribute('aria-sort', 'descending');
+  await expect(names).toHaveText(byBoreDown);
+
+  // Into a template and back: the same view.
+  await page.getByRole('link', { name: 'Quayside 150 scooter, disc valve' }).click();
+  await expect(page).toHaveURL(/\/templates\/\d+$/);
+  await page.goBack();
+  await expect(search).toHaveValue('scooter');
+  await expect(names).toHaveText(byBoreDown);
+
+  // A shared link: only the archived template; a bad sort value falls back to the default without an error.
+  await page.goto('/w/harbour-lane/templates?archived=true&sort=colour&page=zero');
+  await expect(page.getByLabel('Show', { exact: true })).toHaveValue('true');
+  await expect(page.getByRole('status').filter({ hasText: /^1 template$/ })).toBeVisible();
+  await expect(names).toHaveText(['Old ferry 50 moped']);
+  await expect(page.getByRole('columnheader', { name: /^Name/ })).toHaveAttribute('aria-sort', 'ascending');
+  await context.close();
+});
