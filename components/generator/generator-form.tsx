@@ -8,6 +8,7 @@ import type { SheetKind, SheetRequest } from '@/lib/sheet/sheet-request';
 import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
 import { convertLengths, toSheetRequestInput, usesField, LENGTH_FIELDS, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
+import { messageInTypedUnit } from './inch-messages';
 import { DownloadPanel } from './download-panel';
 import { PortEventsField } from './port-events-field';
 import { SheetPreview } from './sheet-preview';
@@ -65,7 +66,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
         </form>
 
         <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
-          <SheetPreview request={request} />
+          <SheetPreview request={request} describeIssue={(issue) => messageInTypedUnit(issue, { ...defaultValues, ...values })} />
           <PrintAtActualSize />
           <DownloadPanel validate={validate} />
           <SafetyPanel />

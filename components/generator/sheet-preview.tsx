@@ -6,11 +6,13 @@ import { sheetRequestSchema, toFieldIssues, type FieldIssue, type SheetRequestIn
 
 const DEBOUNCE_MS = 250;
 
+/** A field issue; `code` is the zod issue code when the browser found it (the server's answer has none). */
+type PreviewIssue = FieldIssue & { code?: string };
 type ReadyPreview = { svg: string; warnings: string[]; pageCount: number; widthMm: number; heightMm: number };
 type PreviewState =
   | { status: 'idle' }
   | ({ status: 'ready' } & ReadyPreview)
-  | { status: 'invalid'; issues: FieldIssue[] }
+  | { status: 'invalid'; issues: PreviewIssue[] }
   | { status: 'failed'; message: string };
 
 /** The drawing's size from the root's width/height attributes ("123.4mm"). */
@@ -32,7 +34,14 @@ function describePages(pageCount: number, paper: string, orientation: string): s
  * checked with the shared schema in the browser, then drawn by the server action.
  * Late answers to earlier requests are dropped.
  */
-export function SheetPreview({ request }: { request: SheetRequestInput }) {
+export function SheetPreview({
+  request,
+  describeIssue = (issue) => issue.message,
+}: {
+  request: SheetRequestInput;
+  /** The text shown for an issue (the form restates length ranges in the unit typed in). */
+  describeIssue?: (issue: Required<PreviewIssue>) => string;
+}) {
   const [state, setState] = useState<PreviewState>({ status: 'idle' });
   const [busy, setBusy] = useState(false);
   // While the fields are being corrected the last good drawing stays on screen, dimmed.
@@ -46,7 +55,8 @@ export function SheetPreview({ request }: { request: SheetRequestInput }) {
       const input = JSON.parse(requestKey) as SheetRequestInput;
       const checked = sheetRequestSchema.safeParse({ ...input, format: 'svg' });
       if (!checked.success) {
-        setState({ status: 'invalid', issues: toFieldIssues(checked.error) });
+        const codes = checked.error.issues.map((issue) => issue.code);
+        setState({ status: 'invalid', issues: toFieldIssues(checked.error).map((issue, i) => ({ ...issue, code: codes[i] })) });
         return;
       }
       setBusy(true);
@@ -95,7 +105,7 @@ export function SheetPreview({ request }: { request: SheetRequestInput }) {
             <p className="font-medium">The preview waits for these fields:</p>
             <ul className="mt-1 list-disc pl-5 text-xs">
               {state.issues.map((issue) => (
-                <li key={`${issue.path}-${issue.message}`}>{issue.message}</li>
+                <li key={`${issue.path}-${issue.message}`}>{issue.code ? describeIssue({ ...issue, code: issue.code }) : issue.message}</li>
               ))}
             </ul>
           </div>

@@ -100,6 +100,31 @@ test('a 700 mm diameter is refused beside the field with the schema’s range', 
   await expect(page.getByRole('region', { name: 'Download' }).getByRole('alert')).toContainText('Some fields need attention');
 });
 
+test('with the inch toggle a too-large diameter is refused with the range in inches', async ({ page }) => {
+  await page.goto('/');
+  const diameter = page.getByLabel('Diameter', { exact: true });
+  await expect(graduations(page).first()).toBeAttached({ timeout: 15_000 });
+  await page.getByRole('radio', { name: 'in', exact: true }).check({ force: true });
+  await diameter.fill('30');
+  const errorId = (await diameter.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
+  const error = page.locator(`[id="${errorId}"]`);
+  // Schema range 20–600 mm; 1 in = 25.4 mm (international inch, 1959): 600 / 25.4 = 23.6220…, 20 / 25.4 = 0.78740…,
+  // rounded inwards to thousandths so both ends shown are accepted.
+  const inInches = 'Diameter must be at most 23.622 in (allowed 0.788–23.622 in)';
+  await expect(error).toHaveText(inInches);
+  // The preview's list of waiting fields says the same.
+  await expect(page.getByRole('listitem').filter({ hasText: inInches })).toBeVisible();
+  await expect(page.getByRole('listitem').filter({ hasText: '600 mm' })).toHaveCount(0);
+  // The upper end shown is accepted (23.622 in = 599.9988 mm).
+  await diameter.fill('23.622');
+  await expect(error).toBeEmpty();
+  // Back to mm, the schema's own message.
+  await diameter.fill('30');
+  await page.getByRole('radio', { name: 'mm', exact: true }).check({ force: true });
+  await expect(diameter).toHaveValue('762');
+  await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
+});
+
 test('Download PDF gives a PDF of the chosen page size (Letter landscape = 792 × 612 pt)', async ({ page }) => {
   await page.goto('/');
   await page.getByLabel('Diameter', { exact: true }).fill('110');
