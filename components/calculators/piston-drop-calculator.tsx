@@ -6,7 +6,7 @@ import { FormProvider, useForm } from 'react-hook-form';
 import { ChoiceGroup, NumberField } from '@/components/generator/fields';
 import { crankAngleSchema, type CrankAngleInput, type CrankAngleRequest } from '@/lib/engine/crank-angle-schema';
 import { pistonDropSchema, type PistonDropInput, type PistonDropRequest } from '@/lib/engine/piston-drop-schema';
-import { crankDegFromDropMm, pistonDropMm } from '@/lib/engine/slider-crank';
+import { crankAnglesFromDropMm, offsetPistonDropMm } from '@/lib/engine/offset-slider-crank';
 import { advanceMarkHref } from '@/lib/engine/wheel-links';
 import { CrankDiagram } from './crank-diagram';
 import { LengthField } from './length-field';
@@ -17,9 +17,9 @@ import { useLiveResult } from './use-live-result';
 import { WheelLink } from './wheel-link';
 
 type Direction = 'angle-to-drop' | 'drop-to-angle';
-type Geometry = { strokeMm: number; rodMm: number };
+type Geometry = { strokeMm: number; rodMm: number; pinOffsetMm: number };
 
-const EXAMPLE: Geometry = { strokeMm: 54, rodMm: 105 };
+const EXAMPLE: Geometry = { strokeMm: 54, rodMm: 105, pinOffsetMm: 0 };
 
 /** Piston drop ⇄ crank angle: one direction at a time, the engine's stroke and rod carried across. */
 export function PistonDropCalculator() {
@@ -66,11 +66,22 @@ type PartProps = { geometry: Geometry; onGeometry: (geometry: Geometry) => void;
 
 function GeometryFields({ unit }: { unit: LengthUnit }) {
   return (
-    <div className="grid gap-4 sm:grid-cols-2">
-      <LengthField name="strokeMm" label="Stroke" unit={unit} help="Piston travel TDC to BDC (twice the crank throw)." />
+    <div className="grid gap-4 sm:grid-cols-3">
+      <LengthField name="strokeMm" label="Stroke" unit={unit} help="Twice the crank throw (piston travel TDC to BDC with a centred pin)." />
       <LengthField name="rodMm" label="Con-rod length" unit={unit} help="Centre to centre, big end to small end." />
+      <LengthField
+        name="pinOffsetMm"
+        label="Wrist-pin offset"
+        unit={unit}
+        help="0 for a centred pin. Measure from the piston's pin bore centre to the skirt's centre line. Positive when the pin sits toward the side the crank pin swings to just after TDC, negative toward the other side. −5 to 5 mm."
+      />
     </div>
   );
+}
+
+/** "12.3° ATDC" up to BDC, "x° BTDC" past it: the side matters once the pin is offset. */
+function sideText(crankDeg: number): string {
+  return crankDeg <= 180 ? `${formatDeg(crankDeg, 1)} ATDC` : `${formatDeg(360 - crankDeg, 1)} BTDC`;
 }
 
 function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
@@ -79,9 +90,11 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
     defaultValues: { ...geometry, crankDeg: 18 },
     mode: 'onChange',
   });
-  const result = useLiveResult(form.control, pistonDropSchema, (valid) => ({ ...valid, dropMm: pistonDropMm(valid) }));
+  const result = useLiveResult(form.control, pistonDropSchema, (valid) => ({ ...valid, pinOffsetMm: valid.pinOffsetMm ?? 0, dropMm: offsetPistonDropMm(valid) }));
   useRememberGeometry(result, onGeometry);
-  const btdcDeg = result ? Math.min(result.crankDeg, 360 - result.crankDeg) : null;
+  const offset = result !== null && result.pinOffsetMm !== 0;
+  // Without an offset the drop is the same either side of TDC; with one only a before-TDC angle is a timing figure.
+  const btdcDeg = result && (!offset || result.crankDeg > 180) ? Math.min(result.crankDeg, 360 - result.crankDeg) : null;
 
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,20rem)]">
@@ -92,7 +105,7 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
             name="crankDeg"
             label="Crank angle from TDC"
             unit="°"
-            help="0–360°. The piston stands at the same height the same angle before and after TDC, so 18° BTDC and 18° ATDC give one drop."
+            help="0–360° in crank order: x° after TDC is x, x° before TDC is 360 − x (18° BTDC = 342). With a centred pin 18° BTDC and 18° ATDC give one drop; with an offset pin they differ."
           />
         </form>
       </FormProvider>
@@ -103,7 +116,13 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
               <ResultFigure
                 label={`Below TDC at ${formatDeg(result.crankDeg, 1)}`}
                 value={formatLength(result.dropMm, unit)}
-                detail={btdcDeg !== null && btdcDeg <= 180 ? `= ${formatLength(result.dropMm, unit)} BTDC for ${formatDeg(btdcDeg, 1)} BTDC timing` : undefined}
+                detail={
+                  btdcDeg !== null && btdcDeg <= 180
+                    ? `= ${formatLength(result.dropMm, unit)} BTDC for ${formatDeg(btdcDeg, 1)} BTDC timing`
+                    : offset
+                      ? `${sideText(result.crankDeg)}, on the down-stroke`
+                      : undefined
+                }
                 testId="drop-value"
               />
               {btdcDeg !== null ? <WheelLink href={advanceMarkHref(btdcDeg)}>{`Mark ${formatDeg(btdcDeg, 1)} BTDC on a wheel`}</WheelLink> : null}
@@ -112,7 +131,7 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
             <WaitingForInput />
           )}
         </ResultPanel>
-        {result ? <CrankDiagram strokeMm={result.strokeMm} rodMm={result.rodMm} crankDeg={result.crankDeg} unit={unit} /> : null}
+        {result ? <CrankDiagram strokeMm={result.strokeMm} rodMm={result.rodMm} crankDeg={result.crankDeg} pinOffsetMm={result.pinOffsetMm} unit={unit} /> : null}
       </div>
     </div>
   );
@@ -124,7 +143,7 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
     defaultValues: { ...geometry, dropMm: 1.8 },
     mode: 'onChange',
   });
-  const result = useLiveResult(form.control, crankAngleSchema, (valid) => ({ ...valid, crankDeg: crankDegFromDropMm(valid) }));
+  const result = useLiveResult(form.control, crankAngleSchema, (valid) => ({ ...valid, pinOffsetMm: valid.pinOffsetMm ?? 0, ...crankAnglesFromDropMm(valid) }));
   useRememberGeometry(result, onGeometry);
 
   return (
@@ -136,7 +155,7 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
             name="dropMm"
             label="Piston drop below TDC"
             unit={unit}
-            help="From the dial gauge, or the manual's figure (e.g. “1.8 mm before TDC”). 0 up to the stroke."
+            help="From the dial gauge, or the manual's figure (e.g. “1.8 mm before TDC”). 0 up to the stroke (a little more with an offset pin)."
           />
         </form>
       </FormProvider>
@@ -144,19 +163,34 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
         <ResultPanel title="Crank angle" id="angle-result">
           {result ? (
             <>
-              <ResultFigure
-                label={`From TDC at ${formatLength(result.dropMm, unit)} drop`}
-                value={formatDeg(result.crankDeg)}
-                detail={`${formatDeg(result.crankDeg, 2)} BTDC on the way up, ${formatDeg(result.crankDeg, 2)} ATDC on the way down`}
-                testId="angle-value"
-              />
-              <WheelLink href={advanceMarkHref(result.crankDeg)}>{`Mark ${formatDeg(result.crankDeg, 1)} BTDC on a wheel`}</WheelLink>
+              {result.pinOffsetMm === 0 ? (
+                <ResultFigure
+                  label={`From TDC at ${formatLength(result.dropMm, unit)} drop`}
+                  value={formatDeg(result.crankDeg)}
+                  detail={`${formatDeg(result.crankDeg, 2)} BTDC on the way up, ${formatDeg(result.crankDeg, 2)} ATDC on the way down`}
+                  testId="angle-value"
+                />
+              ) : (
+                <>
+                  <ResultFigure
+                    label={`Before TDC on the way up, at ${formatLength(result.dropMm, unit)} drop`}
+                    value={`${formatDeg(result.crankDegBTDC)} BTDC`}
+                    detail="The offset pin makes the two sides of TDC differ: this is the one for ignition timing."
+                    testId="angle-value"
+                  />
+                  <ResultFigure label="After TDC on the way down" value={`${formatDeg(result.crankDegATDC)} ATDC`} testId="angle-atdc-value" />
+                </>
+              )}
+              <WheelLink href={advanceMarkHref(result.crankDegBTDC)}>{`Mark ${formatDeg(result.crankDegBTDC, 1)} BTDC on a wheel`}</WheelLink>
             </>
           ) : (
             <WaitingForInput />
           )}
         </ResultPanel>
-        {result ? <CrankDiagram strokeMm={result.strokeMm} rodMm={result.rodMm} crankDeg={result.crankDeg} unit={unit} /> : null}
+        {result ? (
+          <CrankDiagram strokeMm={result.strokeMm} rodMm={result.rodMm} crankDeg={result.pinOffsetMm === 0 ? result.crankDeg : 360 - result.crankDegBTDC}
+            pinOffsetMm={result.pinOffsetMm} unit={unit} />
+        ) : null}
       </div>
     </div>
   );
@@ -165,7 +199,8 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
 function useRememberGeometry(result: Geometry | null, onGeometry: (geometry: Geometry) => void) {
   const strokeMm = result?.strokeMm;
   const rodMm = result?.rodMm;
+  const pinOffsetMm = result?.pinOffsetMm;
   useEffect(() => {
-    if (strokeMm !== undefined && rodMm !== undefined) onGeometry({ strokeMm, rodMm });
-  }, [strokeMm, rodMm, onGeometry]);
+    if (strokeMm !== undefined && rodMm !== undefined && pinOffsetMm !== undefined) onGeometry({ strokeMm, rodMm, pinOffsetMm });
+  }, [strokeMm, rodMm, pinOffsetMm, onGeometry]);
 }

@@ -22,6 +22,7 @@ const EXAMPLE: PortEventsInput = {
   strokeMm: 54,
   rodMm: 105,
   deckMm: 0.6,
+  pinOffsetMm: 0,
   ports: [
     { name: 'Exhaust', kind: 'exhaust', heightMm: 26.1 },
     { name: 'Transfer A', kind: 'transfer', heightMm: 38.4 },
@@ -53,7 +54,7 @@ export function PortEventsCalculator() {
           <div className="flex justify-end">
             <UnitSwitch unit={unit} onChange={setUnit} idPrefix="ports" />
           </div>
-          <div className="grid gap-4 sm:grid-cols-3">
+          <div className="grid gap-4 sm:grid-cols-2 lg:grid-cols-4">
             <LengthField<PortEventsInput> name="strokeMm" label="Stroke" unit={unit} />
             <LengthField<PortEventsInput> name="rodMm" label="Con-rod length" unit={unit} help="Centre to centre." />
             <LengthField<PortEventsInput>
@@ -61,6 +62,12 @@ export function PortEventsCalculator() {
               label="Deck height"
               unit={unit}
               help="Crown below the cylinder top at TDC; negative when the crown stands proud."
+            />
+            <LengthField<PortEventsInput>
+              name="pinOffsetMm"
+              label="Wrist-pin offset"
+              unit={unit}
+              help="0 for a centred pin; positive toward the side the crank pin swings to just after TDC. With an offset, closing is not 360° − opening."
             />
           </div>
           <fieldset className="space-y-3">
