@@ -25,8 +25,7 @@ export function crankFromAlongDeg(alongDeg: number, carrier: Carrier): number {
 
 /** Polar transform: angle clockwise as seen (y down) from TDC at the top of a wheel or ring, [0, 360). */
 export function wheelAngleDeg(crankDeg: number, sense: ScaleSense): number {
-  const along = alongRotationDeg(crankDeg, sense.carrier);
-  return normalizeDeg(sense.rotation === 'cw' ? along : -along);
+  return wheelAngleFromAlongDeg(alongRotationDeg(crankDeg, sense.carrier), sense.rotation);
 }
 
 /** The polar transform applied to an along-rotation angle (cw as seen from TDC at the top). */
