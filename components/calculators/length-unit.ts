@@ -1,7 +1,6 @@
-import { MM_PER_INCH } from '@/lib/units';
+import { MM_PER_INCH, type LengthUnit } from '@/lib/units';
 
-/** The unit lengths are typed and shown in; every computation stays in mm. */
-export type LengthUnit = 'mm' | 'in';
+export type { LengthUnit };
 
 export function toUnit(mm: number, unit: LengthUnit): number {
   return unit === 'in' ? mm / MM_PER_INCH : mm;

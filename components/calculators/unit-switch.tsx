@@ -2,14 +2,26 @@
 
 import type { LengthUnit } from './length-unit';
 
-/** mm / inch switch for a calculator's lengths (two radio buttons, arrow keys move between them). */
-export function UnitSwitch({ unit, onChange, idPrefix }: { unit: LengthUnit; onChange: (unit: LengthUnit) => void; idPrefix: string }) {
+type UnitSwitchProps = {
+  unit: LengthUnit;
+  onChange: (unit: LengthUnit) => void;
+  idPrefix: string;
+  /** Visible caption before the buttons; null for none. */
+  caption?: string | null;
+  inchLabel?: string;
+  className?: string;
+};
+
+/** mm / inch switch shared by the calculators and the sheet maker (two radio buttons, arrow keys move between them). */
+export function UnitSwitch({ unit, onChange, idPrefix, caption = 'Units', inchLabel = 'inch', className = 'gap-2 text-sm' }: UnitSwitchProps) {
   return (
-    <fieldset className="flex items-center gap-2 text-sm">
+    <fieldset className={`flex items-center ${className}`}>
       <legend className="sr-only">Length unit</legend>
-      <span aria-hidden className="text-xs font-semibold uppercase tracking-wider text-steel-500">
-        Units
-      </span>
+      {caption ? (
+        <span aria-hidden className="text-xs font-semibold uppercase tracking-wider text-steel-500">
+          {caption}
+        </span>
+      ) : null}
       {(['mm', 'in'] as const).map((option) => (
         <label
           key={option}
@@ -25,7 +37,7 @@ export function UnitSwitch({ unit, onChange, idPrefix }: { unit: LengthUnit; onC
             onChange={() => onChange(option)}
             className="sr-only"
           />
-          {option === 'mm' ? 'mm' : 'inch'}
+          {option === 'mm' ? 'mm' : inchLabel}
         </label>
       ))}
     </fieldset>

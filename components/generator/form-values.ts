@@ -1,7 +1,7 @@
 import { parseNumberList } from '@/lib/generator-prefill';
 import type { PaperName } from '@/lib/sheet/paper';
 import type { PortEvent, SheetKind, SheetRequestInput } from '@/lib/sheet/sheet-request';
-import { MM_PER_INCH } from '@/lib/units';
+import { MM_PER_INCH, type LengthUnit } from '@/lib/units';
 
 /**
  * What the generator form holds, field for field named after the sheet request
@@ -11,7 +11,7 @@ import { MM_PER_INCH } from '@/lib/units';
  * into the request the shared schema validates.
  */
 
-export type LengthUnit = 'mm' | 'in';
+export type { LengthUnit };
 
 export type GeneratorFormValues = {
   lengthUnit: LengthUnit;

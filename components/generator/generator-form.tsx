@@ -1,5 +1,6 @@
 'use client';
 
+import { UnitSwitch } from '@/components/calculators/unit-switch';
 import { useEffect, useRef } from 'react';
 import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
 import { PAPER_NAMES } from '@/lib/sheet/paper';
@@ -111,20 +112,7 @@ function UnitToggle() {
     setValue('lengthUnit', to);
     void trigger(LENGTH_FIELDS.filter((field) => getValues(field) !== undefined));
   };
-  return (
-    <fieldset className="flex items-center gap-1 text-xs">
-      <legend className="sr-only">Length unit</legend>
-      {(['mm', 'in'] as const).map((option) => (
-        <label
-          key={option}
-          className="cursor-pointer rounded border border-steel-300 px-2 py-0.5 font-mono has-[:checked]:border-gauge-600 has-[:checked]:bg-gauge-600 has-[:checked]:text-white has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-gauge-500/40 dark:border-steel-600"
-        >
-          <input type="radio" name="lengthUnit" value={option} checked={unit === option} onChange={() => choose(option)} className="sr-only" />
-          {option}
-        </label>
-      ))}
-    </fieldset>
-  );
+  return <UnitSwitch unit={unit} onChange={choose} idPrefix="sheet" caption={null} inchLabel="in" className="gap-1 text-xs" />;
 }
 
 function MeasurementsSection({ kind, unit }: { kind: SheetKind; unit: LengthUnit }) {
