@@ -1,5 +1,6 @@
 'use client';
 
+import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
@@ -28,7 +29,7 @@ export function ArcChordCalculator() {
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,24rem)]">
       <FormProvider {...form}>
-        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Diameter and angles" className="space-y-4">
+        <HydratedForm noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Diameter and angles" className="space-y-4">
           <div className="flex justify-end">
             <UnitSwitch unit={unit} onChange={setUnit} idPrefix="arc" />
           </div>
@@ -39,7 +40,7 @@ export function ArcChordCalculator() {
             mono
             help="Degrees, separated by commas or spaces, each 0–360."
           />
-        </form>
+        </HydratedForm>
       </FormProvider>
       <ResultPanel title="Distances from the TDC mark" id="arc-result">
         {result ? (

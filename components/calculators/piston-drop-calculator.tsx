@@ -1,5 +1,6 @@
 'use client';
 
+import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
@@ -99,7 +100,7 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,20rem)]">
       <FormProvider {...form}>
-        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Crank angle to piston drop" className="space-y-4">
+        <HydratedForm noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Crank angle to piston drop" className="space-y-4">
           <GeometryFields unit={unit} />
           <NumberField<PistonDropInput>
             name="crankDeg"
@@ -107,7 +108,7 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
             unit="°"
             help="0–360° in crank order: x° after TDC is x, x° before TDC is 360 − x (18° BTDC = 342). With a centred pin 18° BTDC and 18° ATDC give one drop; with an offset pin they differ."
           />
-        </form>
+        </HydratedForm>
       </FormProvider>
       <div className="space-y-4">
         <ResultPanel title="Piston drop" id="drop-result">
@@ -149,7 +150,7 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,20rem)]">
       <FormProvider {...form}>
-        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Piston drop to crank angle" className="space-y-4">
+        <HydratedForm noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Piston drop to crank angle" className="space-y-4">
           <GeometryFields unit={unit} />
           <LengthField<CrankAngleInput>
             name="dropMm"
@@ -157,7 +158,7 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
             unit={unit}
             help="From the dial gauge, or the manual's figure (e.g. “1.8 mm before TDC”). 0 up to the stroke (a little more with an offset pin)."
           />
-        </form>
+        </HydratedForm>
       </FormProvider>
       <div className="space-y-4">
         <ResultPanel title="Crank angle" id="angle-result">

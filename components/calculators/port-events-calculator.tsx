@@ -1,5 +1,6 @@
 'use client';
 
+import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
@@ -50,7 +51,7 @@ export function PortEventsCalculator() {
   return (
     <div className="grid gap-6 xl:grid-cols-[minmax(0,1fr)_minmax(0,26rem)]">
       <FormProvider {...form}>
-        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Port heights" className="space-y-4">
+        <HydratedForm noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Port heights" className="space-y-4">
           <div className="flex justify-end">
             <UnitSwitch unit={unit} onChange={setUnit} idPrefix="ports" />
           </div>
@@ -105,7 +106,7 @@ export function PortEventsCalculator() {
             Every port here is taken as opened and closed by the piston crown. The inlet of a piston-port engine is really
             uncovered by the skirt near TDC, which this page does not model: time that one on the engine with a wheel.
           </p>
-        </form>
+        </HydratedForm>
       </FormProvider>
       <div className="space-y-4">
         <ResultPanel title="Port timing" id="port-result">

@@ -1,5 +1,6 @@
 'use client';
 
+import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import { ChoiceGroup, NumberField } from '@/components/generator/fields';
@@ -35,7 +36,7 @@ export function TdcCalculator() {
   return (
     <div className="grid gap-6 lg:grid-cols-[1fr_minmax(0,22rem)]">
       <FormProvider {...form}>
-        <form noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Positive stop readings" className="space-y-4">
+        <HydratedForm noValidate onSubmit={form.handleSubmit(() => undefined)} aria-label="Positive stop readings" className="space-y-4">
           <ChoiceGroup<TdcInput>
             name="numbering"
             legend="How the wheel is numbered"
@@ -71,7 +72,7 @@ export function TdcCalculator() {
               and read the sweep. TDC is half the sweep from either stop. Choose “Full”, enter 0 for A and the sweep for B.
             </p>
           </div>
-        </form>
+        </HydratedForm>
       </FormProvider>
       <div className="space-y-4">
         <ResultPanel title="True TDC" id="tdc-result">

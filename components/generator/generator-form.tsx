@@ -1,5 +1,6 @@
 'use client';
 
+import { HydratedForm } from '@/components/hydrated-form';
 import { UnitSwitch } from '@/components/calculators/unit-switch';
 import { useEffect, useRef } from 'react';
 import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
@@ -54,7 +55,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
   return (
     <FormProvider {...form}>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.05fr)]">
-        <form noValidate onSubmit={(e) => e.preventDefault()} aria-label="Sheet settings" className="space-y-4">
+        <HydratedForm noValidate onSubmit={(e) => e.preventDefault()} aria-label="Sheet settings" className="space-y-4">
           {ignored.length > 0 ? <IgnoredParams ignored={ignored} /> : null}
           <FormSection title="Sheet">
             <ChoiceGroup<GeneratorFormValues> name="kind" legend="What to print" options={KIND_OPTIONS} />
@@ -64,7 +65,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
           {usesField(values.kind, 'advanceMarksDeg') ? <AdvanceSection /> : null}
           {values.kind === 'scribe' ? <ScribeSection /> : null}
           <PaperSection kind={values.kind} />
-        </form>
+        </HydratedForm>
 
         <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
           <SheetPreview request={request} describeIssue={(issue) => messageInTypedUnit(issue, { ...defaultValues, ...values })} />

@@ -1,5 +1,6 @@
 'use client';
 
+import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
@@ -28,7 +29,7 @@ export function PrinterProfileForm() {
 
   return (
     <FormProvider {...form}>
-      <form noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Printer profile" className="space-y-4">
+      <HydratedForm noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Printer profile" className="space-y-4">
         <TextField<MeasurementForm> name="name" label="Profile name" placeholder="e.g. Workshop laser, plain paper" maxLength={60} />
         <div className="grid gap-4 sm:grid-cols-2">
           <NumberField<MeasurementForm>
@@ -54,7 +55,7 @@ export function PrinterProfileForm() {
         <p aria-live="polite" className="text-sm text-steel-700 dark:text-steel-200">
           {saved ?? ''}
         </p>
-      </form>
+      </HydratedForm>
     </FormProvider>
   );
 }

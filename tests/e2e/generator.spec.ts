@@ -58,6 +58,24 @@ test('the preview follows the diameter and the kind as you type', async ({ page 
   });
 });
 
+test('the form stays disabled until it is hydrated, so a diameter typed early is not garbled', async ({ page }) => {
+  // Hold the page's scripts back: the server-rendered fields must refuse typing until React takes over.
+  let release = () => {};
+  const scriptsHeld = new Promise<void>((resolve) => (release = resolve));
+  await page.route('**/_next/static/chunks/**', async (route) => {
+    await scriptsHeld;
+    await route.continue();
+  });
+  await page.goto('/', { waitUntil: 'commit' });
+  const diameter = page.getByLabel('Diameter', { exact: true });
+  await expect(diameter).toBeDisabled();
+  release();
+  await page.unrouteAll({ behavior: 'wait' });
+  await diameter.fill('101.6'); // waits for the field to be enabled
+  await expect(diameter).toHaveValue('101.6');
+  await expect(preview(page).locator('title')).toHaveText(/101\.6 mm/, { timeout: 15_000 });
+});
+
 test('4 in typed with the inch toggle draws the same sheet as 101.6 mm', async ({ page }) => {
   await page.goto('/');
   const diameter = page.getByLabel('Diameter', { exact: true });
