@@ -1,5 +1,6 @@
 import 'server-only';
 import type { Knex } from 'knex';
+import { HOLDING_ROLE } from '@/lib/access-policy';
 import type { Role } from '@/lib/roles';
 import { db } from './knex';
 import { TABLES } from './tables';
@@ -64,8 +65,8 @@ export async function membersOf(workspaceId: number, knex: Knex = db()): Promise
     .orderBy(`${TABLES.users}.name`);
 }
 
-export async function countOwners(workspaceId: number, knex: Knex = db()): Promise<number> {
-  const row = await knex(TABLES.memberships).where({ workspace_id: workspaceId, role: 'owner' }).count({ n: '*' }).first();
+export async function countHolders(workspaceId: number, knex: Knex = db()): Promise<number> {
+  const row = await knex(TABLES.memberships).where({ workspace_id: workspaceId, role: HOLDING_ROLE }).count({ n: '*' }).first();
   return Number(row?.n ?? 0);
 }
 
@@ -89,7 +90,7 @@ export async function createWorkspace(
     const [row] = await trx(TABLES.workspaces)
       .insert({ slug: input.slug, name: input.name, kind: input.kind })
       .returning(WORKSPACE_FIELDS);
-    await trx(TABLES.memberships).insert({ user_id: input.ownerId, workspace_id: row.id, role: 'owner' });
+    await trx(TABLES.memberships).insert({ user_id: input.ownerId, workspace_id: row.id, role: HOLDING_ROLE });
     return row as WorkspaceRow;
   });
 }

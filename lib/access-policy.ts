@@ -3,12 +3,13 @@ import { ROLES, type Role } from './roles';
 /**
  * Who may do what in a workspace: every named action and the roles granted it, in one table.
  * Route handlers, pages, components and the authorization-matrix test ask `can(role, action)`;
- * nothing else compares role names.
+ * nothing else compares role names (DEVELOPERS.md, "Roles").
  */
 const POLICY = {
   'workspace.read': ['viewer', 'technician', 'owner'],
   'workspace.leave': ['viewer', 'technician', 'owner'],
   'workspace.settings': ['owner'],
+  'workspace.audit': ['owner'],
   'members.read': ['viewer', 'technician', 'owner'],
   'members.manage': ['owner'],
   'invitations.manage': ['owner'],
@@ -41,3 +42,19 @@ export function weakestRoleFor(action: Action): Role {
   if (!role) throw new Error(`No role may ${action}`);
   return role;
 }
+
+/**
+ * The role that holds a workspace: given to whoever creates one, and a workspace always keeps
+ * at least one member with it (the last one can neither leave nor be demoted).
+ */
+export const HOLDING_ROLE: Role = 'owner';
+
+/** The role an invitation form offers first: enough to work on templates and builds, not to manage members. */
+export const DEFAULT_INVITE_ROLE: Role = 'technician';
+
+/** What each role may do, as the member list and invite form describe them. */
+export const ROLE_OPTIONS: ReadonlyArray<{ value: Role; label: string }> = [
+  { value: 'viewer', label: 'Viewer — read and print' },
+  { value: 'technician', label: 'Technician — templates, build sheets, printing' },
+  { value: 'owner', label: 'Owner — members, settings, everything' },
+];

@@ -2,6 +2,3 @@
 export const ROLES = ['viewer', 'technician', 'owner'] as const;
 export type Role = (typeof ROLES)[number];
 
-export function roleAtLeast(role: Role, minimum: Role): boolean {
-  return ROLES.indexOf(role) >= ROLES.indexOf(minimum);
-}

@@ -1,6 +1,7 @@
 import 'server-only';
 import { findRole, findUserById, findWorkspaceBySlug, type WorkspaceKind } from '@/db/accounts';
-import { roleAtLeast, type Role } from '@/lib/roles';
+import { can, weakestRoleFor, type Action } from '@/lib/access-policy';
+import type { Role } from '@/lib/roles';
 import { jsonError } from './api';
 import { sessionUserId } from './session';
 
@@ -39,16 +40,17 @@ export async function requireUser(): Promise<Access['user']> {
 }
 
 /**
- * The caller's access to a workspace with at least `minimum` role. A workspace the caller
- * does not belong to answers exactly like one that does not exist.
+ * The caller's access to a workspace, if the policy lets their role do `action` there
+ * (lib/access-policy.ts). A workspace the caller does not belong to answers exactly like one
+ * that does not exist.
  */
-export async function requireRole(workspaceSlug: string, minimum: Role): Promise<Access> {
+export async function requireAction(workspaceSlug: string, action: Action): Promise<Access> {
   const user = await requireUser();
   const workspace = await findWorkspaceBySlug(workspaceSlug);
   const role = workspace ? await findRole(user.id, workspace.id) : undefined;
   if (!workspace || !role) throw new AccessError(404, NOT_FOUND_MESSAGE);
-  if (!roleAtLeast(role, minimum)) {
-    throw new AccessError(403, `This needs the ${minimum} role or higher in ${workspace.name}; you are ${role}`);
+  if (!can(role, action)) {
+    throw new AccessError(403, `This needs the ${weakestRoleFor(action)} role or higher in ${workspace.name}; you are ${role}`);
   }
   return { user, workspace, role };
 }

@@ -1,12 +1,12 @@
 import 'server-only';
 import { notFound, redirect } from 'next/navigation';
-import type { Role } from '@/lib/roles';
-import { AccessError, requireRole, requireUser, type Access } from './authz';
+import type { Action } from '@/lib/access-policy';
+import { AccessError, requireAction, requireUser, type Access } from './authz';
 
-/** requireRole for pages: signed out → sign-in (and back), not a member → the 404 page, too low → 403 message. */
-export async function pageRole(workspaceSlug: string, minimum: Role, backTo: string): Promise<Access | { denied: string }> {
+/** requireAction for pages: signed out → sign-in (and back), not a member → the 404 page, not allowed → the 403 message. */
+export async function pageAction(workspaceSlug: string, action: Action, backTo: string): Promise<Access | { denied: string }> {
   try {
-    return await requireRole(workspaceSlug, minimum);
+    return await requireAction(workspaceSlug, action);
   } catch (err) {
     if (!(err instanceof AccessError)) throw err;
     if (err.status === 401) redirect(`/sign-in?callbackUrl=${encodeURIComponent(backTo)}`);

@@ -1,9 +1,10 @@
 import 'server-only';
 import { recordAudit } from '@/db/audit-log';
-import { countOwners, createWorkspace, findRole, findUserById, membersOf, slugFrom } from '@/db/accounts';
+import { countHolders, createWorkspace, findRole, findUserById, membersOf, slugFrom } from '@/db/accounts';
 import { acceptInvitation, createInvitation, lookUpInvitation, revokeInvitation } from '@/db/invitations';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
+import { HOLDING_ROLE } from '@/lib/access-policy';
 import type { Role } from '@/lib/roles';
 import { errorText, randomSlugTail, type ServiceResult } from './account-service';
 import type { Access } from './authz';
@@ -80,7 +81,7 @@ export async function acceptInvitationFor(
 }
 
 async function lastOwnerGuard(workspaceId: number, targetRole: Role | undefined, workspaceName: string, what: string) {
-  if (targetRole === 'owner' && (await countOwners(workspaceId)) <= 1) {
+  if (targetRole === HOLDING_ROLE && (await countHolders(workspaceId)) <= 1) {
     return refuse(409, `${what}: this is the last owner of ${workspaceName}. Make another member owner first.`);
   }
   return null;
@@ -89,7 +90,7 @@ async function lastOwnerGuard(workspaceId: number, targetRole: Role | undefined,
 export async function changeRole(access: Access, targetUserId: number, role: Role): Promise<ServiceResult<{ role: Role }>> {
   const current = await findRole(targetUserId, access.workspace.id);
   if (!current) return refuse(404, 'No such member in this workspace');
-  if (role !== 'owner') {
+  if (role !== HOLDING_ROLE) {
     const blocked = await lastOwnerGuard(access.workspace.id, current, access.workspace.name, 'Cannot change the role');
     if (blocked) return blocked;
   }

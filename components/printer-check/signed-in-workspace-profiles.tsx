@@ -1,6 +1,6 @@
 import { currentUser } from '@/app/lib/authz';
 import { workspacesOf } from '@/db/accounts';
-import { roleAtLeast } from '@/lib/roles';
+import { can } from '@/lib/access-policy';
 import { WorkspaceProfiles } from './workspace-profiles';
 
 /**
@@ -19,7 +19,7 @@ export async function SignedInWorkspaceProfiles() {
       {workspaces.map((w) => (
         <div key={w.id} className="space-y-2">
           <h3 className="font-medium">{w.name}</h3>
-          <WorkspaceProfiles workspaceSlug={w.slug} canEdit={roleAtLeast(w.role, 'technician')} />
+          <WorkspaceProfiles workspaceSlug={w.slug} canEdit={can(w.role, 'printer-profile.edit')} />
         </div>
       ))}
     </section>

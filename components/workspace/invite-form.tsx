@@ -9,13 +9,13 @@ import { FormMessage, InputField, SubmitButton } from '@/components/account/form
 import { applyIssues, submitJson } from '@/components/account/submit-json';
 import { SelectField } from '@/components/generator/fields';
 import { inviteSchema } from '@/lib/account-forms';
-import { ROLE_OPTIONS } from './role-options';
+import { DEFAULT_INVITE_ROLE, ROLE_OPTIONS } from '@/lib/access-policy';
 
 type Values = z.infer<typeof inviteSchema>;
 
 export function InviteForm({ slug }: { slug: string }) {
   const router = useRouter();
-  const form = useForm<Values>({ resolver: zodResolver(inviteSchema), defaultValues: { email: '', role: 'technician' } });
+  const form = useForm<Values>({ resolver: zodResolver(inviteSchema), defaultValues: { email: '', role: DEFAULT_INVITE_ROLE } });
   const [outcome, setOutcome] = useState<{ tone: 'info' | 'error'; message: string } | undefined>();
 
   const onValid = async (values: Values) => {

@@ -6,13 +6,13 @@ import { FormMessage } from '@/components/account/form-controls';
 import { submitJson } from '@/components/account/submit-json';
 import { inputClass } from '@/components/generator/fields';
 import type { Role } from '@/lib/roles';
-import { ROLE_OPTIONS } from './role-options';
+import { ROLE_OPTIONS } from '@/lib/access-policy';
 
 type Member = { userId: number; name: string; email: string; role: Role };
-type Props = { slug: string; members: Member[]; myUserId: number; isOwner: boolean };
+type Props = { slug: string; members: Member[]; myUserId: number; canManage: boolean };
 
 /** The member list; owners change roles and remove members, everyone may leave. */
-export function MembersPanel({ slug, members, myUserId, isOwner }: Props) {
+export function MembersPanel({ slug, members, myUserId, canManage }: Props) {
   const router = useRouter();
   const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | undefined>();
 
@@ -45,7 +45,7 @@ export function MembersPanel({ slug, members, myUserId, isOwner }: Props) {
               <td className="py-2">{m.name}{m.userId === myUserId ? ' (you)' : ''}</td>
               <td>{m.email}</td>
               <td>
-                {isOwner ? (
+                {canManage ? (
                   <select
                     aria-label={`Role of ${m.name}`}
                     defaultValue={m.role}
@@ -80,7 +80,7 @@ export function MembersPanel({ slug, members, myUserId, isOwner }: Props) {
                   >
                     Leave
                   </button>
-                ) : isOwner ? (
+                ) : canManage ? (
                   <button
                     type="button"
                     className="text-sm text-red-700 underline dark:text-red-400"

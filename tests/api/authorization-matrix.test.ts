@@ -29,7 +29,7 @@ function exportedMethods(source: string): Method[] {
   );
 }
 
-const CHECKS_ACCESS = /@\/app\/lib\/authz|requireRole|requireUser|currentUser/;
+const CHECKS_ACCESS = /@\/app\/lib\/authz|requireAction|requireUser|currentUser/;
 
 function urlFor(file: string, params: Record<string, string>, search = ''): string {
   const route = file
@@ -67,6 +67,15 @@ describe('the authorization matrix covers every guarded route', () => {
       }
     }
     expect(missing, 'add these to ACTION_MATRIX in tests/support/route-matrix.ts').toEqual([]);
+  });
+
+  it('reads each workspace route\'s expectations from the policy action its handler asks for', () => {
+    const unread: string[] = [];
+    for (const c of ROUTE_MATRIX.filter((row) => row.file.includes('[workspace]'))) {
+      const source = fs.readFileSync(path.join(ROOT, c.file), 'utf8');
+      if (!c.action || !source.includes(`'${c.action}'`)) unread.push(`${c.method} ${c.file} (${c.action ?? 'no action'})`);
+    }
+    expect(unread, 'give these rows ...guardedBy(action, status) with the action the handler passes to requireAction').toEqual([]);
   });
 
   it('names only route files that exist, each method once', () => {

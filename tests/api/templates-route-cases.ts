@@ -5,20 +5,13 @@ import { insertTemplates } from '@/db/templates/insert-templates';
 import { TABLES } from '@/db/tables';
 import { EMPTY_TEMPLATE } from '@/lib/templates/template-schema';
 import type { AccessWorld } from '@/tests/support/access-world';
-import type { Actor, RouteCase } from '@/tests/support/route-matrix';
+import { guardedBy, type Actor } from '@/tests/support/policy-expectations';
+import type { RouteCase } from '@/tests/support/route-matrix';
 
 /** The template library's rows of the authorization matrix (tests/support/route-matrix.ts). */
 
 const T = 'app/api/v1/workspaces/[workspace]/templates';
 
-// route-matrix.ts imports this file, so its helpers are not imported back (no import cycle).
-const expect401Then = (viewer: number, technician: number, owner: number): Record<Actor, number> => ({
-  signedOut: 401,
-  viewer,
-  technician,
-  owner,
-  outsider: 404,
-});
 
 async function seedTemplate(world: AccessWorld): Promise<number> {
   const [id] = await insertTemplates(world.knex, [{ ...EMPTY_TEMPLATE, name: 'Matrix single', rimDiameterMm: 110 }], {
@@ -62,13 +55,13 @@ async function withPhoto(world: AccessWorld, actor: Actor) {
 }
 
 export const TEMPLATE_ROUTE_CASES: RouteCase[] = [
-  { file: `${T}/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
-  { file: `${T}/route.ts`, method: 'POST', call: () => ({ body: { name: 'Matrix new' } }), expected: expect401Then(403, 201, 201) },
-  { file: `${T}/[id]/route.ts`, method: 'GET', call: withTemplate(), expected: expect401Then(200, 200, 200) },
-  { file: `${T}/[id]/route.ts`, method: 'PATCH', call: withTemplate({ body: { version: 1, notes: 'edited' } }), expected: expect401Then(403, 200, 200) },
-  { file: `${T}/[id]/route.ts`, method: 'DELETE', call: withTemplate(), expected: expect401Then(403, 403, 204) },
-  { file: `${T}/[id]/archive/route.ts`, method: 'POST', call: withTemplate({ body: { version: 1 } }), expected: expect401Then(403, 200, 200) },
-  { file: `${T}/[id]/revisions/route.ts`, method: 'GET', call: withTemplate(), expected: expect401Then(200, 200, 200) },
+  { file: `${T}/route.ts`, method: 'GET', ...guardedBy('template.read', 200) },
+  { file: `${T}/route.ts`, method: 'POST', call: () => ({ body: { name: 'Matrix new' } }), ...guardedBy('template.edit', 201) },
+  { file: `${T}/[id]/route.ts`, method: 'GET', call: withTemplate(), ...guardedBy('template.read', 200) },
+  { file: `${T}/[id]/route.ts`, method: 'PATCH', call: withTemplate({ body: { version: 1, notes: 'edited' } }), ...guardedBy('template.edit', 200) },
+  { file: `${T}/[id]/route.ts`, method: 'DELETE', call: withTemplate(), ...guardedBy('template.delete', 204) },
+  { file: `${T}/[id]/archive/route.ts`, method: 'POST', call: withTemplate({ body: { version: 1 } }), ...guardedBy('template.edit', 200) },
+  { file: `${T}/[id]/revisions/route.ts`, method: 'GET', call: withTemplate(), ...guardedBy('template.read', 200) },
   {
     file: `${T}/[id]/revisions/[version]/restore/route.ts`,
     method: 'POST',
@@ -76,15 +69,15 @@ export const TEMPLATE_ROUTE_CASES: RouteCase[] = [
       const call = await withTemplate({ body: { version: 1 } })(world, actor);
       return { ...call, params: { ...call.params, version: '1' } };
     },
-    expected: expect401Then(403, 200, 200),
+    ...guardedBy('template.edit', 200),
   },
-  { file: `${T}/[id]/photos/route.ts`, method: 'GET', call: withTemplate(), expected: expect401Then(200, 200, 200) },
+  { file: `${T}/[id]/photos/route.ts`, method: 'GET', call: withTemplate(), ...guardedBy('template.read', 200) },
   // A JSON body passes the role check and is then refused as not a form upload (415).
-  { file: `${T}/[id]/photos/route.ts`, method: 'POST', call: withTemplate({ body: {} }), expected: expect401Then(403, 415, 415) },
-  { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'GET', call: withPhoto, expected: expect401Then(200, 200, 200) },
-  { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'DELETE', call: withPhoto, expected: expect401Then(403, 204, 204) },
-  { file: `${T}/[id]/sheet/route.ts`, method: 'GET', call: withTemplate({ search: '?kind=strip&format=svg' }), expected: expect401Then(200, 200, 200) },
+  { file: `${T}/[id]/photos/route.ts`, method: 'POST', call: withTemplate({ body: {} }), ...guardedBy('template.edit', 415) },
+  { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'GET', call: withPhoto, ...guardedBy('template.read', 200) },
+  { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'DELETE', call: withPhoto, ...guardedBy('template.edit', 204) },
+  { file: `${T}/[id]/sheet/route.ts`, method: 'GET', call: withTemplate({ search: '?kind=strip&format=svg' }), ...guardedBy('sheet.print', 200) },
   // JSON is not CSV: past the role check the import answers 415.
-  { file: `${T}/import/route.ts`, method: 'POST', call: () => ({ body: {} }), expected: expect401Then(403, 415, 415) },
-  { file: `${T}/export/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
+  { file: `${T}/import/route.ts`, method: 'POST', call: () => ({ body: {} }), ...guardedBy('template.import', 415) },
+  { file: `${T}/export/route.ts`, method: 'GET', ...guardedBy('template.read', 200) },
 ];

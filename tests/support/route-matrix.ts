@@ -8,11 +8,12 @@
 import { issueToken } from '@/db/one-time-tokens';
 import { createInvitation } from '@/db/invitations';
 import { TABLES } from '@/db/tables';
+import { HOLDING_ROLE, type Action } from '@/lib/access-policy';
 import type { AccessWorld } from './access-world';
+import { guardedBy, type Actor } from './policy-expectations';
 import { TEMPLATE_ROUTE_CASES } from '../api/templates-route-cases';
 
-export const ACTORS = ['signedOut', 'viewer', 'technician', 'owner', 'outsider'] as const;
-export type Actor = (typeof ACTORS)[number];
+export { ACTORS, type Actor } from './policy-expectations';
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
 
 export type RouteCall = {
@@ -29,6 +30,8 @@ export type RouteCase = {
   method: Method;
   /** Set up rows in the fresh world if needed, and say what to send. */
   call?: (world: AccessWorld, actor: Actor) => RouteCall | Promise<RouteCall>;
+  /** The policy action a workspace route asks for; its expectations come from the policy (`guardedBy`). */
+  action?: Action;
   expected: Record<Actor, number>;
 };
 
@@ -43,14 +46,7 @@ export type ActionCase = {
   statusOf?: (result: unknown) => number;
 };
 
-/** Shorthands for the usual expectations. */
-export const expect401Then = (viewer: number, technician: number, owner: number, outsider = 404): Record<Actor, number> => ({
-  signedOut: 401,
-  viewer,
-  technician,
-  owner,
-  outsider,
-});
+/** Routes outside any workspace answer every caller alike. */
 export const sameForAll = (status: number): Record<Actor, number> => ({
   signedOut: status,
   viewer: status,
@@ -120,14 +116,14 @@ export const ROUTE_MATRIX: RouteCase[] = [
     call: () => ({ body: { name: 'Fresh Shop' } }),
     expected: { signedOut: 401, viewer: 201, technician: 201, owner: 201, outsider: 201 },
   },
-  { file: `${V1}/workspaces/[workspace]/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
+  { file: `${V1}/workspaces/[workspace]/route.ts`, method: 'GET', ...guardedBy('workspace.read', 200) },
   {
     file: `${V1}/workspaces/[workspace]/route.ts`,
     method: 'PATCH',
     call: () => ({ body: { name: 'Renamed Shop' } }),
-    expected: expect401Then(403, 403, 200),
+    ...guardedBy('workspace.settings', 200),
   },
-  { file: `${V1}/workspaces/[workspace]/members/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
+  { file: `${V1}/workspaces/[workspace]/members/route.ts`, method: 'GET', ...guardedBy('members.read', 200) },
   {
     file: `${V1}/workspaces/[workspace]/members/[userId]/route.ts`,
     method: 'PATCH',
@@ -135,22 +131,22 @@ export const ROUTE_MATRIX: RouteCase[] = [
       params: { workspace: ownWorkspaceFor(world, actor), userId: String(world.users.technician.id) },
       body: { role: 'viewer' },
     }),
-    expected: expect401Then(403, 403, 200),
+    ...guardedBy('members.manage', 200),
   },
   {
     file: `${V1}/workspaces/[workspace]/members/[userId]/route.ts`,
     method: 'DELETE',
     call: (world, actor) => ({ params: { workspace: ownWorkspaceFor(world, actor), userId: String(world.users.viewer.id) } }),
-    expected: expect401Then(403, 403, 204),
+    ...guardedBy('members.manage', 204),
   },
-  // The owner is the shop's only owner, so leaving is refused with 409.
-  { file: `${V1}/workspaces/[workspace]/leave/route.ts`, method: 'POST', expected: expect401Then(204, 204, 409) },
-  { file: `${V1}/workspaces/[workspace]/invitations/route.ts`, method: 'GET', expected: expect401Then(403, 403, 200) },
+  // The shop has one member holding it, so that member's leaving is refused with 409.
+  { file: `${V1}/workspaces/[workspace]/leave/route.ts`, method: 'POST', ...guardedBy('workspace.leave', 204, { [HOLDING_ROLE]: 409 }) },
+  { file: `${V1}/workspaces/[workspace]/invitations/route.ts`, method: 'GET', ...guardedBy('invitations.manage', 200) },
   {
     file: `${V1}/workspaces/[workspace]/invitations/route.ts`,
     method: 'POST',
     call: () => ({ body: { email: 'invitee@world.test', role: 'technician' } }),
-    expected: expect401Then(403, 403, 201),
+    ...guardedBy('invitations.manage', 201),
   },
   {
     file: `${V1}/workspaces/[workspace]/invitations/[invitationId]/route.ts`,
@@ -162,16 +158,16 @@ export const ROUTE_MATRIX: RouteCase[] = [
       );
       return { params: { workspace: ownWorkspaceFor(world, actor), invitationId: String(id) } };
     },
-    expected: expect401Then(403, 403, 204),
+    ...guardedBy('invitations.manage', 204),
   },
 
   // Printer profiles.
-  { file: `${V1}/workspaces/[workspace]/printer-profiles/route.ts`, method: 'GET', expected: expect401Then(200, 200, 200) },
+  { file: `${V1}/workspaces/[workspace]/printer-profiles/route.ts`, method: 'GET', ...guardedBy('printer-profile.read', 200) },
   {
     file: `${V1}/workspaces/[workspace]/printer-profiles/route.ts`,
     method: 'POST',
     call: () => ({ body: { name: 'Back office laser', printerScaleX: 0.995, printerScaleY: 1.002 } }),
-    expected: expect401Then(403, 201, 201),
+    ...guardedBy('printer-profile.edit', 201),
   },
   {
     file: `${V1}/workspaces/[workspace]/printer-profiles/[profileId]/route.ts`,
@@ -182,7 +178,7 @@ export const ROUTE_MATRIX: RouteCase[] = [
         .returning('id');
       return { params: { workspace: ownWorkspaceFor(world, actor), profileId: String(row.id) } };
     },
-    expected: expect401Then(403, 204, 204),
+    ...guardedBy('printer-profile.edit', 204),
   },
 
   // Template library (issue 6).

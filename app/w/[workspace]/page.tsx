@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { pageRole } from '@/app/lib/page-access';
+import { pageAction } from '@/app/lib/page-access';
+import { can } from '@/lib/access-policy';
 import { WorkspaceProfiles } from '@/components/printer-check/workspace-profiles';
 import { ShopNameForm } from '@/components/workspace/create-shop-form';
 import { InviteForm } from '@/components/workspace/invite-form';
@@ -17,14 +18,19 @@ type Props = { params: Promise<{ workspace: string }> };
 
 export default async function WorkspaceHomePage({ params }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageRole(slug, 'viewer', `/w/${slug}`);
+  const access = await pageAction(slug, 'workspace.read', `/w/${slug}`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const { workspace, role, user } = access;
-  const isOwner = role === 'owner';
+  const may = {
+    manageMembers: can(role, 'members.manage'),
+    invite: can(role, 'invitations.manage'),
+    settings: can(role, 'workspace.settings'),
+    audit: can(role, 'workspace.audit'),
+  };
   const [members, invitations, audit] = await Promise.all([
     membersOf(workspace.id),
-    isOwner ? pendingInvitations(workspace.id) : Promise.resolve([]),
-    isOwner ? auditOf(workspace.id, 20) : Promise.resolve([]),
+    may.invite ? pendingInvitations(workspace.id) : Promise.resolve([]),
+    may.audit ? auditOf(workspace.id, 20) : Promise.resolve([]),
   ]);
   return (
     <section className="space-y-8">
@@ -45,42 +51,47 @@ export default async function WorkspaceHomePage({ params }: Props) {
 
       <div className="space-y-2">
         <h2 className="text-lg font-semibold">Members</h2>
-        <MembersPanel slug={workspace.slug} members={members} myUserId={user.id} isOwner={isOwner} />
+        <MembersPanel slug={workspace.slug} members={members} myUserId={user.id} canManage={may.manageMembers} />
       </div>
 
       <div className="space-y-2">
         <h2 className="text-lg font-semibold">Printer profiles</h2>
-        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={role !== 'viewer'} />
+        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} />
       </div>
 
-      {isOwner ? (
+      {may.settings || may.invite || may.audit ? (
         <div className="space-y-6 border-t border-steel-200 pt-6 dark:border-steel-700">
-          <h2 className="text-lg font-semibold">Settings (owners)</h2>
-          {workspace.kind === 'shop' ? (
+          <h2 className="text-lg font-semibold">Settings</h2>
+          {may.invite && workspace.kind === 'shop' ? (
             <div className="space-y-2">
               <h3 className="font-medium">Invite someone</h3>
               <InviteForm slug={workspace.slug} />
               <h3 className="pt-2 font-medium">Waiting invitations</h3>
               <PendingInvitations slug={workspace.slug} invitations={invitations} />
             </div>
-          ) : (
+          ) : null}
+          {may.invite && workspace.kind !== 'shop' ? (
             <p className="text-sm text-steel-600 dark:text-steel-300">A personal workspace is yours alone; create a shop workspace to invite others.</p>
-          )}
-          <div className="space-y-2">
-            <h3 className="font-medium">Name</h3>
-            <ShopNameForm renameSlug={workspace.slug} currentName={workspace.name} />
-          </div>
-          <div className="space-y-2">
-            <h3 className="font-medium">Recent activity</h3>
-            {audit.length === 0 ? <p className="text-sm text-steel-500">Nothing recorded yet.</p> : null}
-            <ul className="space-y-1 text-xs text-steel-600 dark:text-steel-300">
-              {audit.map((entry) => (
-                <li key={entry.id}>
-                  {entry.createdAt} · {entry.actorName ?? 'someone'} · {entry.action} {entry.detail === '{}' ? '' : entry.detail}
-                </li>
-              ))}
-            </ul>
-          </div>
+          ) : null}
+          {may.settings ? (
+            <div className="space-y-2">
+              <h3 className="font-medium">Name</h3>
+              <ShopNameForm renameSlug={workspace.slug} currentName={workspace.name} />
+            </div>
+          ) : null}
+          {may.audit ? (
+            <div className="space-y-2">
+              <h3 className="font-medium">Recent activity</h3>
+              {audit.length === 0 ? <p className="text-sm text-steel-500">Nothing recorded yet.</p> : null}
+              <ul className="space-y-1 text-xs text-steel-600 dark:text-steel-300">
+                {audit.map((entry) => (
+                  <li key={entry.id}>
+                    {entry.createdAt} · {entry.actorName ?? 'someone'} · {entry.action} {entry.detail === '{}' ? '' : entry.detail}
+                  </li>
+                ))}
+              </ul>
+            </div>
+          ) : null}
         </div>
       ) : null}
     </section>

@@ -2,7 +2,8 @@ import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
-import { pageRole } from '@/app/lib/page-access';
+import { pageAction } from '@/app/lib/page-access';
+import { can } from '@/lib/access-policy';
 import { FIELD_LABELS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
 import { PhotoUpload } from '@/components/templates/photo-upload';
 import { PrintLinks } from '@/components/templates/print-links';
@@ -33,13 +34,13 @@ const FIGURES: TemplateFieldName[] = [
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
-  const access = await pageRole(slug, 'viewer', `/w/${slug}/templates/${id}`);
+  const access = await pageAction(slug, 'template.read', `/w/${slug}/templates/${id}`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
   const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
-  const canEdit = access.role !== 'viewer';
+  const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
 
   return (
@@ -70,7 +71,7 @@ export default async function TemplatePage({ params }: Props) {
               label={template.archived ? 'Return to the list' : 'Archive'}
               busyLabel="Saving…"
             />
-            {access.role === 'owner' ? (
+            {can(access.role, 'template.delete') ? (
               <ActionButton
                 url={api}
                 method="DELETE"

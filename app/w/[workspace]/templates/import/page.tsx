@@ -1,6 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { pageRole } from '@/app/lib/page-access';
+import { pageAction } from '@/app/lib/page-access';
 import { ImportForm } from '@/components/templates/import-form';
 import { CSV_COLUMNS, CSV_COLUMN_SPECS } from '@/lib/templates/csv-columns';
 
@@ -14,7 +14,7 @@ Sample 50 moped,50 cc piston-port,40,39.2,85,ccw,112,104,130,22,17,16;17;18,exha
 
 export default async function ImportTemplatesPage({ params }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageRole(slug, 'technician', `/w/${slug}/templates/import`);
+  const access = await pageAction(slug, 'template.import', `/w/${slug}/templates/import`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
   return (
     <section className="max-w-4xl space-y-6">

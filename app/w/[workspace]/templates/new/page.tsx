@@ -1,5 +1,5 @@
 import type { Metadata } from 'next';
-import { pageRole } from '@/app/lib/page-access';
+import { pageAction } from '@/app/lib/page-access';
 import { TemplateForm } from '@/components/templates/template-form';
 
 export const dynamic = 'force-dynamic';
@@ -9,7 +9,7 @@ type Props = { params: Promise<{ workspace: string }> };
 
 export default async function NewTemplatePage({ params }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageRole(slug, 'technician', `/w/${slug}/templates/new`);
+  const access = await pageAction(slug, 'template.edit', `/w/${slug}/templates/new`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
   return (
     <section className="max-w-3xl space-y-4">

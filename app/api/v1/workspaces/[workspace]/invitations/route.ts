@@ -1,6 +1,6 @@
 import { parseJsonBody } from '@/app/lib/api';
 import { appOrigin } from '@/app/lib/app-origin';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
 import { serviceResponse } from '@/app/lib/service-response';
 import { invite } from '@/app/lib/workspace-service';
@@ -9,18 +9,18 @@ import { inviteSchema } from '@/lib/account-forms';
 
 type Context = { params: Promise<{ workspace: string }> };
 
-/** GET: pending invitations (owners). */
+/** GET: pending invitations (invitations.manage). */
 export async function GET(_request: Request, { params }: Context) {
   return guarded(async () => {
-    const access = await requireRole((await params).workspace, 'owner');
+    const access = await requireAction((await params).workspace, 'invitations.manage');
     return Response.json(await pendingInvitations(access.workspace.id));
   });
 }
 
-/** POST { email, role }: owners invite someone by e-mail; the link is single-use and expires in 7 days. */
+/** POST { email, role }: invitations.manage: invite someone by e-mail; the link is single-use and expires in 7 days. */
 export async function POST(request: Request, { params }: Context) {
   return guarded(async () => {
-    const access = await requireRole((await params).workspace, 'owner');
+    const access = await requireAction((await params).workspace, 'invitations.manage');
     const parsed = await parseJsonBody(request, inviteSchema);
     if (!parsed.ok) return parsed.response;
     return serviceResponse(await invite(access, parsed.data, appOrigin(request)), 201);

@@ -1,14 +1,14 @@
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
 import { serviceResponse } from '@/app/lib/service-response';
 import { removeMember } from '@/app/lib/workspace-service';
 
 type Context = { params: Promise<{ workspace: string }> };
 
-/** POST: any member leaves the workspace, unless they are its last owner. */
+/** POST: any member leaves the workspace, unless they are the last holder of the workspace. */
 export async function POST(_request: Request, { params }: Context) {
   return guarded(async () => {
-    const access = await requireRole((await params).workspace, 'viewer');
+    const access = await requireAction((await params).workspace, 'workspace.leave');
     return serviceResponse(await removeMember(access, access.user.id, true), 204);
   });
 }

@@ -1,23 +1,23 @@
 import { parseJsonBody } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
 import { addProfile, profilesOf } from '@/db/printer-profiles';
 import { workspacePrinterProfileSchema } from '@/lib/workspace-printer-profile';
 
 type Context = { params: Promise<{ workspace: string }> };
 
-/** GET: the workspace's printer profiles (viewer and up: viewers print too). */
+/** GET: the workspace's printer profiles (printer-profile.read: whoever prints needs them). */
 export async function GET(_request: Request, { params }: Context) {
   return guarded(async () => {
-    const access = await requireRole((await params).workspace, 'viewer');
+    const access = await requireAction((await params).workspace, 'printer-profile.read');
     return Response.json(await profilesOf(access.workspace.id));
   });
 }
 
-/** POST { name, printerScaleX, printerScaleY }: technicians and owners save a profile. */
+/** POST { name, printerScaleX, printerScaleY }: members who may edit printer profiles save a profile. */
 export async function POST(request: Request, { params }: Context) {
   return guarded(async () => {
-    const access = await requireRole((await params).workspace, 'technician');
+    const access = await requireAction((await params).workspace, 'printer-profile.edit');
     const parsed = await parseJsonBody(request, workspacePrinterProfileSchema);
     if (!parsed.ok) return parsed.response;
     return Response.json(await addProfile(access.workspace.id, access.user.id, parsed.data), { status: 201 });

@@ -1,5 +1,5 @@
 import { jsonError, parseJsonBody } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { createTemplate } from '@/db/templates/create-template';
 import { listTemplates } from '@/db/templates/list-templates';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
@@ -8,22 +8,22 @@ import { templateSchema } from '@/lib/templates/template-schema';
 import { guarded } from '@/app/lib/route-handler';
 import { type WorkspaceParams } from './_shared/template-params';
 
-/** GET …/templates?q=&sort=&dir=&archived=false|true|all&page=&pageSize= — one page, viewer or above. */
+/** GET …/templates?q=&sort=&dir=&archived=false|true|all&page=&pageSize= — one page (template.read). */
 export async function GET(request: Request, { params }: WorkspaceParams): Promise<Response> {
   return guarded(async () => {
     const { workspace } = await params;
-    const access = await requireRole(workspace, 'viewer');
+    const access = await requireAction(workspace, 'template.read');
     const query = listQueryFromParams(new URL(request.url).searchParams);
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
     return Response.json(await listTemplates(access.workspace.id, query.data));
   });
 }
 
-/** POST …/templates — create (technician or above); answers 201 with the template at version 1. */
+/** POST …/templates — create (template.edit); answers 201 with the template at version 1. */
 export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
   return guarded(async () => {
     const { workspace } = await params;
-    const access = await requireRole(workspace, 'technician');
+    const access = await requireAction(workspace, 'template.edit');
     const body = await parseJsonBody(request, templateSchema);
     if (!body.ok) return body.response;
     const template = await createTemplate(access.workspace.id, access.user.id, body.data);

@@ -1,7 +1,7 @@
 import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { pageRole } from '@/app/lib/page-access';
+import { pageAction } from '@/app/lib/page-access';
 import { TemplateForm } from '@/components/templates/template-form';
 import { findTemplate } from '@/db/templates/find-template';
 
@@ -12,7 +12,7 @@ type Props = { params: Promise<{ workspace: string; id: string }> };
 
 export default async function EditTemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
-  const access = await pageRole(slug, 'technician', `/w/${slug}/templates/${id}/edit`);
+  const access = await pageAction(slug, 'template.edit', `/w/${slug}/templates/${id}/edit`);
   if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;

@@ -1,16 +1,16 @@
 import { jsonError } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
 import { idParam } from '@/app/lib/service-response';
 import { revokeInvitation } from '@/db/invitations';
 
 type Context = { params: Promise<{ workspace: string; invitationId: string }> };
 
-/** DELETE: owners withdraw a pending invitation; its link stops working. */
+/** DELETE: invitations.manage: withdraw a pending invitation; its link stops working. */
 export async function DELETE(_request: Request, { params }: Context) {
   return guarded(async () => {
     const { workspace, invitationId } = await params;
-    const access = await requireRole(workspace, 'owner');
+    const access = await requireAction(workspace, 'invitations.manage');
     const id = idParam(invitationId);
     if (id === null || !(await revokeInvitation(access.workspace.id, id))) {
       return jsonError(404, 'No such pending invitation in this workspace');

@@ -1,5 +1,5 @@
 import { jsonError, parseJsonBody } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
 import { idParam, serviceResponse } from '@/app/lib/service-response';
 import { changeRole, removeMember } from '@/app/lib/workspace-service';
@@ -9,11 +9,11 @@ type Context = { params: Promise<{ workspace: string; userId: string }> };
 
 const NO_MEMBER = 'No such member in this workspace';
 
-/** PATCH { role }: owners change a member's role; the last owner cannot be demoted. */
+/** PATCH { role }: members.manage changes a member's role; the last owner cannot be demoted. */
 export async function PATCH(request: Request, { params }: Context) {
   return guarded(async () => {
     const { workspace, userId } = await params;
-    const access = await requireRole(workspace, 'owner');
+    const access = await requireAction(workspace, 'members.manage');
     const target = idParam(userId);
     if (target === null) return jsonError(404, NO_MEMBER);
     const parsed = await parseJsonBody(request, roleChangeSchema);
@@ -22,11 +22,11 @@ export async function PATCH(request: Request, { params }: Context) {
   });
 }
 
-/** DELETE: owners remove a member; the last owner cannot be removed. */
+/** DELETE: members.manage removes a member; the last owner cannot be removed. */
 export async function DELETE(_request: Request, { params }: Context) {
   return guarded(async () => {
     const { workspace, userId } = await params;
-    const access = await requireRole(workspace, 'owner');
+    const access = await requireAction(workspace, 'members.manage');
     const target = idParam(userId);
     if (target === null) return jsonError(404, NO_MEMBER);
     return serviceResponse(await removeMember(access, target), 204);

@@ -1,16 +1,16 @@
 import { jsonError } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
 import { idParam } from '@/app/lib/service-response';
 import { deleteProfile } from '@/db/printer-profiles';
 
 type Context = { params: Promise<{ workspace: string; profileId: string }> };
 
-/** DELETE: technicians and owners remove a profile of their workspace. */
+/** DELETE: members who may edit printer profiles remove a profile of their workspace. */
 export async function DELETE(_request: Request, { params }: Context) {
   return guarded(async () => {
     const { workspace, profileId } = await params;
-    const access = await requireRole(workspace, 'technician');
+    const access = await requireAction(workspace, 'printer-profile.edit');
     const id = idParam(profileId);
     if (id === null || !(await deleteProfile(access.workspace.id, id))) {
       return jsonError(404, 'No such printer profile in this workspace');

@@ -1,6 +1,6 @@
 import { parsePathId } from '@/lib/path-id';
 import { parseJsonBody } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { deleteObject } from '@/app/lib/storage';
 import { deleteTemplate } from '@/db/templates/delete-template';
 import { listPhotos, publicPhoto } from '@/db/templates/photos';
@@ -11,10 +11,10 @@ import { templateNotFound, type TemplateParams } from '../_shared/template-param
 import { updateResponse } from '../_shared/responses';
 import { templateFor } from '../_shared/template-for';
 
-/** GET …/templates/[id] — the template and its photos, viewer or above. */
+/** GET …/templates/[id] — the template and its photos (template.read). */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
-    const { template } = await templateFor(params, 'viewer');
+    const { template } = await templateFor(params, 'template.read');
     const photos = (await listPhotos(template.id)).map(publicPhoto);
     return Response.json({ template, photos });
   });
@@ -28,7 +28,7 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
 export async function PATCH(request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
     const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'technician');
+    const access = await requireAction(workspace, 'template.edit');
     const templateId = parsePathId(id);
     if (!templateId) return templateNotFound();
     const body = await parseJsonBody(request, templatePatchSchema);
@@ -38,11 +38,11 @@ export async function PATCH(request: Request, { params }: TemplateParams): Promi
   });
 }
 
-/** DELETE …/templates/[id] — owner only: removes the template, its history and its photo files. */
+/** DELETE …/templates/[id] — template.delete: removes the template, its history and its photo files. */
 export async function DELETE(_request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
     const { workspace, id } = await params;
-    const access = await requireRole(workspace, 'owner');
+    const access = await requireAction(workspace, 'template.delete');
     const templateId = parsePathId(id);
     const keys = templateId ? await deleteTemplate(access.workspace.id, templateId) : null;
     if (!keys) return templateNotFound();

@@ -1,4 +1,4 @@
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { allTemplateFields } from '@/db/templates/list-templates';
 import { templatesToCsv } from '@/lib/templates/template-csv';
 import { guarded } from '@/app/lib/route-handler';
@@ -8,7 +8,7 @@ import { type WorkspaceParams } from '../_shared/template-params';
 export async function GET(_request: Request, { params }: WorkspaceParams): Promise<Response> {
   return guarded(async () => {
     const { workspace } = await params;
-    const access = await requireRole(workspace, 'viewer');
+    const access = await requireAction(workspace, 'template.read');
     const csv = templatesToCsv(await allTemplateFields(access.workspace.id));
     return new Response(csv, {
       headers: {

@@ -1,5 +1,5 @@
 import { jsonError } from '@/app/lib/api';
-import { requireRole } from '@/app/lib/authz';
+import { requireAction } from '@/app/lib/authz';
 import { importTemplates } from '@/db/templates/import-templates';
 import { parseTemplatesCsv } from '@/lib/templates/template-csv';
 import { guarded } from '@/app/lib/route-handler';
@@ -34,7 +34,7 @@ function tooLarge(): Response {
 export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
   return guarded(async () => {
     const { workspace } = await params;
-    const access = await requireRole(workspace, 'technician');
+    const access = await requireAction(workspace, 'template.import');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_IMPORT_BYTES + 64 * 1024) return tooLarge();
     const text = await csvText(request);
     if (text instanceof Response) return text;

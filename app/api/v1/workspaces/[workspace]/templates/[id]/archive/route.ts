@@ -15,7 +15,7 @@ const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.
  */
 export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
-    const { access, template: current } = await templateFor(params, 'technician');
+    const { access, template: current } = await templateFor(params, 'template.edit');
     // An empty body means "archive at whatever version it is now".
     const text = await request.text();
     const body = await parseJsonBody(new Request(request.url, { method: 'POST', body: text.trim() || '{}' }), archiveSchema);

@@ -17,10 +17,10 @@ function tooLarge(): Response {
   return jsonError(413, `The photo is larger than ${MAX_MB} MB`, [{ path: 'photo', message: `A photo may be at most ${MAX_MB} MB` }]);
 }
 
-/** GET …/templates/[id]/photos — the template's photos (metadata), viewer or above. */
+/** GET …/templates/[id]/photos — the template's photos (metadata), template.read. */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
-    const { template } = await templateFor(params, 'viewer');
+    const { template } = await templateFor(params, 'template.read');
     return Response.json({ photos: (await listPhotos(template.id)).map(publicPhoto) });
   });
 }
@@ -32,7 +32,7 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  */
 export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
-    const { access, template } = await templateFor(params, 'technician');
+    const { access, template } = await templateFor(params, 'template.edit');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES) return tooLarge();
     if (!request.headers.get('content-type')?.startsWith('multipart/form-data'))
       return jsonError(415, 'Send the photo as multipart/form-data', [{ path: 'photo', message: 'Use a form upload with a "photo" file field' }]);

@@ -29,7 +29,7 @@ const NEEDS: Record<(typeof TEMPLATE_SHEET_KINDS)[number], string> = {
  */
 export async function GET(request: Request, { params }: TemplateParams): Promise<Response> {
   return guarded(async () => {
-    const { template } = await templateFor(params, 'viewer');
+    const { template } = await templateFor(params, 'sheet.print');
     const query = querySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
 

@@ -1,3 +1,4 @@
+import type { Action } from '@/lib/access-policy';
 import { parsePathId } from '@/lib/path-id';
 import { deleteObject, getObject } from '@/app/lib/storage';
 import { deletePhotoRow, findPhoto } from '@/db/templates/photos';
@@ -7,16 +8,16 @@ import { templateFor } from '../../../_shared/template-for';
 
 type Params = { params: Promise<{ workspace: string; id: string; photoId: string }> };
 
-async function locate(params: Params['params'], minimum: 'viewer' | 'technician') {
-  const { template } = await templateFor(params, minimum);
+async function locate(params: Params['params'], action: Action) {
+  const { template } = await templateFor(params, action);
   const photoNumber = parsePathId((await params).photoId);
   return photoNumber ? findPhoto(template.id, photoNumber) : null;
 }
 
-/** GET …/photos/[photoId] (`?size=thumb` for the WebP thumbnail) — the stored image, viewer or above. */
+/** GET …/photos/[photoId] (`?size=thumb` for the WebP thumbnail) — the stored image (template.read). */
 export async function GET(request: Request, { params }: Params): Promise<Response> {
   return guarded(async () => {
-    const photo = await locate(params, 'viewer');
+    const photo = await locate(params, 'template.read');
     if (!photo) return templateNotFound();
     const thumb = new URL(request.url).searchParams.get('size') === 'thumb';
     const data = await getObject(thumb ? photo.thumbKey : photo.storageKey);
@@ -32,10 +33,10 @@ export async function GET(request: Request, { params }: Params): Promise<Respons
   });
 }
 
-/** DELETE …/photos/[photoId] — technician or above; removes the row and both files. */
+/** DELETE …/photos/[photoId] — template.edit; removes the row and both files. */
 export async function DELETE(_request: Request, { params }: Params): Promise<Response> {
   return guarded(async () => {
-    const photo = await locate(params, 'technician');
+    const photo = await locate(params, 'template.edit');
     if (!photo) return templateNotFound();
     await deletePhotoRow(photo.id);
     await Promise.all([deleteObject(photo.storageKey), deleteObject(photo.thumbKey)]);

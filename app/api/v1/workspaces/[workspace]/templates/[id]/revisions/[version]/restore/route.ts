@@ -19,7 +19,7 @@ const restoreSchema = z.object({ version: versionSchema }).strict();
  */
 export async function POST(request: Request, { params }: Params): Promise<Response> {
   return guarded(async () => {
-    const { access, template } = await templateFor(params, 'technician');
+    const { access, template } = await templateFor(params, 'template.edit');
     const revision = parsePathId((await params).version);
     const snapshot = revision ? await revisionSnapshot(template.id, revision) : null;
     if (!snapshot || !revision) return templateNotFound();
