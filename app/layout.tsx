@@ -1,4 +1,5 @@
 import type { Metadata } from 'next';
+import { signedInMember } from '@/app/lib/signed-in-member';
 import { AccountMenu } from '@/components/account/account-menu';
 import { SiteHeader } from '@/components/shell/site-header';
 import { figuresFont, uiFont } from './fonts';
@@ -10,12 +11,13 @@ export const metadata: Metadata = {
     'Print true-scale degree wheels, flange rings and rim timing strips for small two-stroke engines, and keep a shop’s engine templates and build records.',
 };
 
-export default function RootLayout({ children }: { children: React.ReactNode }) {
+export default async function RootLayout({ children }: { children: React.ReactNode }) {
+  const member = await signedInMember();
   return (
     <html lang="en" className={`${uiFont.variable} ${figuresFont.variable}`}>
       <body className="min-h-screen font-sans antialiased">
         <SiteHeader>
-          <AccountMenu />
+          <AccountMenu member={member} />
         </SiteHeader>
         <main className="mx-auto max-w-7xl px-4 py-6">{children}</main>
         <footer className="mx-auto max-w-7xl px-4 py-8 text-xs text-steel-500">

@@ -1,6 +1,7 @@
 import 'server-only';
 import type { Knex } from 'knex';
-import { expiresAt, hashToken, isExpired, newToken, type TokenRefusal } from '@/app/lib/one-time-token';
+import { expiresAt, isExpired, type TokenRefusal } from '@/lib/one-time-token';
+import { hashToken, newToken } from './token-hash';
 import type { Role } from '@/lib/roles';
 import { normalizeEmail } from './accounts';
 import { db } from './knex';

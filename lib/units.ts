@@ -10,10 +10,6 @@ export function mmToPt(mm: number): number {
   return mm * PT_PER_MM;
 }
 
-export function inchToMm(inch: number): number {
-  return inch * MM_PER_INCH;
-}
-
 export function mmToInch(mm: number): number {
   return mm / MM_PER_INCH;
 }

@@ -9,7 +9,7 @@ import { TABLES } from '@/db/tables';
 import type { SignUpInput } from '@/lib/account-forms';
 import { resetMail, verificationMail } from './emails';
 import { sendMail } from './mailer';
-import { TOKEN_REFUSAL_MESSAGES } from './one-time-token';
+import { TOKEN_REFUSAL_MESSAGES } from '@/lib/one-time-token';
 import { hashPassword } from './passwords';
 
 export type ServiceResult<T> = { ok: true; value: T } | { ok: false; status: number; message: string };

@@ -10,7 +10,7 @@ import { errorText, randomSlugTail, type ServiceResult } from './account-service
 import type { Access } from './authz';
 import { invitationMail } from './emails';
 import { sendMail } from './mailer';
-import { TOKEN_REFUSAL_MESSAGES } from './one-time-token';
+import { TOKEN_REFUSAL_MESSAGES } from '@/lib/one-time-token';
 
 const refuse = (status: number, message: string) => ({ ok: false, status, message }) as const;
 

@@ -3,6 +3,7 @@ import Link from 'next/link';
 import { CheckSheetDownload } from '@/components/printer-check/check-sheet-download';
 import { PrinterProfileForm } from '@/components/printer-check/printer-profile-form';
 import { ProfileList } from '@/components/printer-check/profile-list';
+import { signedInMember } from '@/app/lib/signed-in-member';
 import { SignedInWorkspaceProfiles } from '@/components/printer-check/signed-in-workspace-profiles';
 
 export const metadata: Metadata = { title: 'Printer check' };
@@ -20,7 +21,8 @@ function Step({ number, title, children }: { number: number; title: string; chil
 }
 
 /** Measure what the printer does to 100 mm and keep the correction in this browser. */
-export default function PrinterCheckPage() {
+export default async function PrinterCheckPage() {
+  const member = await signedInMember();
   return (
     <div className="mx-auto max-w-3xl space-y-5">
       <header className="space-y-2">
@@ -54,7 +56,7 @@ export default function PrinterCheckPage() {
         </p>
         <ProfileList />
       </Step>
-      <SignedInWorkspaceProfiles />
+      <SignedInWorkspaceProfiles workspaces={member?.workspaces ?? null} />
     </div>
   );
 }

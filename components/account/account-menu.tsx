@@ -1,14 +1,16 @@
 import Link from 'next/link';
-import { currentUser } from '@/app/lib/authz';
-import { workspacesOf } from '@/db/accounts';
 import { SignOutButton } from './sign-out-button';
 import { WorkspaceSwitcher } from './workspace-switcher';
 import { TemplatesNavLink } from '@/components/templates/templates-nav-link';
 
 /** The header's right side: sign-in link for visitors; workspace switcher, account and sign-out for members. */
-export async function AccountMenu() {
-  const user = await currentUser();
-  if (!user) {
+type Props = {
+  /** Null for a visitor; the page's layout loads it (app/lib/signed-in-member.ts). */
+  member: { user: { name: string }; workspaces: { slug: string; name: string; kind: 'personal' | 'shop' }[] } | null;
+};
+
+export function AccountMenu({ member }: Props) {
+  if (!member) {
     return (
       <div className="flex items-center gap-2 text-sm">
         <Link href="/sign-in" className="rounded px-2 py-1 hover:bg-steel-100 dark:hover:bg-steel-800">
@@ -20,7 +22,7 @@ export async function AccountMenu() {
       </div>
     );
   }
-  const workspaces = await workspacesOf(user.id);
+  const { user, workspaces } = member;
   return (
     <div className="flex items-center gap-2">
       <TemplatesNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />

@@ -1,12 +1,13 @@
 'use client';
 
-import { usePathname } from 'next/navigation';
+import { usePathname, useRouter } from 'next/navigation';
 
 type Option = { slug: string; name: string; kind: 'personal' | 'shop' };
 
 /** Jumps to another workspace's home; shows the one in the URL as chosen. */
 export function WorkspaceSwitcher({ workspaces }: { workspaces: Option[] }) {
   const pathname = usePathname();
+  const router = useRouter();
   const current = /^\/w\/([^/]+)/.exec(pathname ?? '')?.[1] ?? '';
   return (
     <label className="flex items-center gap-2 text-sm">
@@ -15,7 +16,7 @@ export function WorkspaceSwitcher({ workspaces }: { workspaces: Option[] }) {
         aria-label="Workspace"
         value={workspaces.some((w) => w.slug === current) ? current : ''}
         onChange={(e) => {
-          if (e.target.value) window.location.assign(`/w/${e.target.value}`);
+          if (e.target.value) router.push(`/w/${e.target.value}`);
         }}
         className="max-w-[14rem] rounded-md border border-steel-300 bg-white px-2 py-1 text-sm dark:border-steel-600 dark:bg-steel-900"
       >

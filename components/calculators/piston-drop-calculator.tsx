@@ -4,7 +4,7 @@ import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
-import { ChoiceGroup, NumberField } from '@/components/generator/fields';
+import { NumberField } from '@/components/generator/fields';
 import { crankAngleSchema, type CrankAngleInput, type CrankAngleRequest } from '@/lib/engine/crank-angle-schema';
 import { pistonDropSchema, type PistonDropInput, type PistonDropRequest } from '@/lib/engine/piston-drop-schema';
 import { crankAnglesFromDropMm, offsetPistonDropMm } from '@/lib/engine/offset-slider-crank';
@@ -31,6 +31,12 @@ export function PistonDropCalculator() {
   const remember = (next: Geometry) => {
     geometry.current = next;
   };
+  // What the newly chosen direction starts from: read from the ref when the choice is made, not during render.
+  const [carried, setCarried] = useState<Geometry>(EXAMPLE);
+  const choose = (next: Direction) => {
+    setCarried(geometry.current);
+    setDirection(next);
+  };
 
   return (
     <div className="space-y-4">
@@ -47,7 +53,7 @@ export function PistonDropCalculator() {
               key={value}
               className="cursor-pointer rounded-md border border-steel-300 px-3 py-1.5 has-[:checked]:border-gauge-600 has-[:checked]:bg-gauge-500/10 has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-gauge-500/40 dark:border-steel-600"
             >
-              <input type="radio" name="direction" value={value} checked={direction === value} onChange={() => setDirection(value)} className="mr-2 accent-gauge-600" />
+              <input type="radio" name="direction" value={value} checked={direction === value} onChange={() => choose(value)} className="mr-2 accent-gauge-600" />
               {label}
             </label>
           ))}
@@ -55,9 +61,9 @@ export function PistonDropCalculator() {
         <UnitSwitch unit={unit} onChange={setUnit} idPrefix="drop" />
       </div>
       {direction === 'angle-to-drop' ? (
-        <AngleToDrop geometry={geometry.current} onGeometry={remember} unit={unit} />
+        <AngleToDrop geometry={carried} onGeometry={remember} unit={unit} />
       ) : (
-        <DropToAngle geometry={geometry.current} onGeometry={remember} unit={unit} />
+        <DropToAngle geometry={carried} onGeometry={remember} unit={unit} />
       )}
     </div>
   );

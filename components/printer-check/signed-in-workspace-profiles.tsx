@@ -1,16 +1,13 @@
-import { currentUser } from '@/app/lib/authz';
-import { workspacesOf } from '@/db/accounts';
 import { can } from '@/lib/access-policy';
+import type { Role } from '@/lib/roles';
 import { WorkspaceProfiles } from './workspace-profiles';
 
 /**
  * For the printer check page: nothing for visitors (their profiles stay in the browser);
  * for a signed-in user, the saved profiles of each of their workspaces.
  */
-export async function SignedInWorkspaceProfiles() {
-  const user = await currentUser();
-  if (!user) return null;
-  const workspaces = await workspacesOf(user.id);
+export function SignedInWorkspaceProfiles({ workspaces }: { workspaces: { id: number; slug: string; name: string; role: Role }[] | null }) {
+  if (!workspaces) return null;
   return (
     <section aria-labelledby="workspace-profiles-heading" className="space-y-4">
       <h2 id="workspace-profiles-heading" className="text-lg font-semibold">

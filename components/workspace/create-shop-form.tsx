@@ -1,6 +1,7 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
+import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import type { z } from 'zod';
@@ -14,6 +15,7 @@ type Values = z.infer<typeof createShopSchema>;
 export function ShopNameForm({ renameSlug, currentName }: { renameSlug?: string; currentName?: string }) {
   const form = useForm<Values>({ resolver: zodResolver(createShopSchema), defaultValues: { name: currentName ?? '' } });
   const [error, setError] = useState<string | undefined>();
+  const router = useRouter();
 
   const onValid = async (values: Values) => {
     setError(undefined);
@@ -21,7 +23,9 @@ export function ShopNameForm({ renameSlug, currentName }: { renameSlug?: string;
       ? await submitJson(`/api/v1/workspaces/${renameSlug}`, 'PATCH', values)
       : await submitJson('/api/v1/workspaces', 'POST', values);
     if (!result.ok) return setError(applyIssues(result, form.setError));
-    window.location.assign(`/w/${renameSlug ?? String(result.body.slug)}`);
+    // The header's workspace menu shows the new name, so the layout is rendered again too.
+    router.push(`/w/${renameSlug ?? String(result.body.slug)}`);
+    router.refresh();
   };
 
   return (

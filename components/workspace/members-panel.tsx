@@ -73,8 +73,10 @@ export function MembersPanel({ slug, members, myUserId, canManage }: Props) {
                     type="button"
                     className="text-sm text-red-700 underline dark:text-red-400"
                     onClick={() =>
-                      act('POST', `/api/v1/workspaces/${slug}/leave`, undefined, 'You have left the workspace.', () =>
-                        window.location.assign('/account'),
+                      act('POST', `/api/v1/workspaces/${slug}/leave`, undefined, 'You have left the workspace.', () => {
+                        router.push('/account');
+                        router.refresh();
+                      },
                       )
                     }
                   >

@@ -45,24 +45,46 @@ function shapeIsFinite(shape: Shape): boolean {
 function checkShape(shape: Shape, where: string): void {
   switch (shape.type) {
     case 'line':
-      check(shape.x1Mm, where, 'x1Mm'), check(shape.y1Mm, where, 'y1Mm'), check(shape.x2Mm, where, 'x2Mm'), check(shape.y2Mm, where, 'y2Mm'), check(shape.dashMm, where, 'dashMm');
+      check(shape.x1Mm, where, 'x1Mm');
+      check(shape.y1Mm, where, 'y1Mm');
+      check(shape.x2Mm, where, 'x2Mm');
+      check(shape.y2Mm, where, 'y2Mm');
+      check(shape.dashMm, where, 'dashMm');
       break;
     case 'path':
-      shape.pointsMm.forEach(([x, y], i) => (check(x, where, `pointsMm[${i}][0]`), check(y, where, `pointsMm[${i}][1]`)));
+      shape.pointsMm.forEach(([x, y], i) => {
+        check(x, where, `pointsMm[${i}][0]`);
+        check(y, where, `pointsMm[${i}][1]`);
+      });
       break;
     case 'ellipse':
-      check(shape.cxMm, where, 'cxMm'), check(shape.cyMm, where, 'cyMm'), check(shape.rxMm, where, 'rxMm'), check(shape.ryMm, where, 'ryMm'), check(shape.dashMm, where, 'dashMm');
+      check(shape.cxMm, where, 'cxMm');
+      check(shape.cyMm, where, 'cyMm');
+      check(shape.rxMm, where, 'rxMm');
+      check(shape.ryMm, where, 'ryMm');
+      check(shape.dashMm, where, 'dashMm');
       break;
     case 'rect':
-      check(shape.xMm, where, 'xMm'), check(shape.yMm, where, 'yMm'), check(shape.widthMm, where, 'widthMm'), check(shape.heightMm, where, 'heightMm');
+      check(shape.xMm, where, 'xMm');
+      check(shape.yMm, where, 'yMm');
+      check(shape.widthMm, where, 'widthMm');
+      check(shape.heightMm, where, 'heightMm');
       break;
     case 'text':
-      check(shape.xMm, where, 'xMm'), check(shape.yMm, where, 'yMm'), check(shape.sizeMm, where, 'sizeMm'), check(shape.rotateDeg, where, 'rotateDeg');
+      check(shape.xMm, where, 'xMm');
+      check(shape.yMm, where, 'yMm');
+      check(shape.sizeMm, where, 'sizeMm');
+      check(shape.rotateDeg, where, 'rotateDeg');
       break;
   }
   if (shape.type !== 'text') check(shape.strokeMm, where, 'strokeMm');
   const data = shape.data;
-  if (data) check(data.crankDeg, where, 'data.crankDeg'), check(data.advanceDeg, where, 'data.advanceDeg'), check(data.checkMm, where, 'data.checkMm'), check(data.level, where, 'data.level');
+  if (data) {
+    check(data.crankDeg, where, 'data.crankDeg');
+    check(data.advanceDeg, where, 'data.advanceDeg');
+    check(data.checkMm, where, 'data.checkMm');
+    check(data.level, where, 'data.level');
+  }
 }
 
 function checkShapes(shapes: readonly Shape[], where: (i: number, shape: Shape) => string): void {
@@ -80,7 +102,10 @@ export function assertFiniteDrawing(drawing: Drawing): Drawing {
   checkShapes(drawing.shapes, (i, shape) => `shapes[${i}] (${shape.type})`);
   drawing.pages.forEach((page, p) => {
     const v = page.viewportMm;
-    check(v.xMm, `pages[${p}]`, 'viewportMm.xMm'), check(v.yMm, `pages[${p}]`, 'viewportMm.yMm'), check(v.widthMm, `pages[${p}]`, 'viewportMm.widthMm'), check(v.heightMm, `pages[${p}]`, 'viewportMm.heightMm');
+    check(v.xMm, `pages[${p}]`, 'viewportMm.xMm');
+    check(v.yMm, `pages[${p}]`, 'viewportMm.yMm');
+    check(v.widthMm, `pages[${p}]`, 'viewportMm.widthMm');
+    check(v.heightMm, `pages[${p}]`, 'viewportMm.heightMm');
     page.originMm.forEach((o, i) => check(o, `pages[${p}]`, `originMm[${i}]`));
     checkShapes(page.pageShapes, (i, shape) => `pages[${p}].pageShapes[${i}] (${shape.type})`);
   });

@@ -10,10 +10,6 @@ import type { Shape } from './drawing';
 export type BlockPart = { shapes: readonly Shape[]; map: AxisMap };
 export type Block = { widthMm: number; heightMm: number; parts: BlockPart[]; centreMm?: [number, number] };
 
-export function blockOf(shapes: readonly Shape[], widthMm: number, heightMm: number): Block {
-  return { widthMm, heightMm, parts: [{ shapes, map: IDENTITY_MAP }] };
-}
-
 /** Maps shapes by `map`, then shifts them so their inked box starts at (padMm, padMm). */
 export function toBlock(shapes: readonly Shape[], padMm = 0, centreMm?: [number, number], map: AxisMap = IDENTITY_MAP): Block {
   const box = shapesBox(shapes, map);

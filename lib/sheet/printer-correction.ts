@@ -17,11 +17,6 @@ export function correctForPrinter(shapes: readonly Shape[], scale: PrinterScale)
   return mapShapes(shapes, { scaleX: x, scaleY: y, dxMm: 0, dyMm: 0 });
 }
 
-export function correctPointMm([xMm, yMm]: readonly [number, number], scale: PrinterScale): [number, number] {
-  const { x, y } = correctionFactors(scale);
-  return [xMm * x, yMm * y];
-}
-
 /** "x 0.980 · y 1.000 (drawn at 102.04 % × 100.00 %)" for the title block. */
 export function describeCorrection(scale: PrinterScale): string {
   const { x, y } = correctionFactors(scale);

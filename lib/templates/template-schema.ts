@@ -145,7 +145,6 @@ export const templateSchema = withCrossFieldRules(
     archived: templateFieldShape.archived.default(false),
   }),
 );
-export type TemplateInput = z.input<typeof templateSchema>;
 
 export const versionSchema = z
   .number({ error: 'Version (version) must be the version number you loaded, a whole number from 1' })
@@ -158,8 +157,6 @@ export const templatePatchSchema = z
   .partial()
   .required({ version: true })
   .strict();
-export type TemplatePatch = z.output<typeof templatePatchSchema>;
 
 /** The form edits a whole template and carries the version it was loaded at (absent when creating). */
 export const templateFormSchema = withCrossFieldRules(z.object({ ...templateFieldShape, version: versionSchema.optional() }));
-export type TemplateFormValues = z.input<typeof templateFormSchema>;

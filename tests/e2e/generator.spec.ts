@@ -5,11 +5,6 @@ import { PDFParse } from 'pdf-parse';
 const preview = (page: Page) => page.getByTestId('sheet-preview').locator('svg').first();
 const graduations = (page: Page) => page.getByTestId('sheet-preview').locator('svg line[data-level]');
 
-async function svgWidthMm(page: Page): Promise<number> {
-  const width = await preview(page).getAttribute('width');
-  expect(width).toMatch(/^[\d.]+mm$/);
-  return Number.parseFloat(width ?? 'NaN');
-}
 
 /** Page sizes in PDF points via pdf-parse, an independent PDF reader (ISO 32000: 1 pt = 1/72 in). */
 async function pdfPageSizesPt(file: Buffer): Promise<Array<{ width: number; height: number }>> {

@@ -12,7 +12,7 @@ export default function PistonDropPage() {
         Slider-crank geometry: with stroke and con-rod length, a crank angle from TDC gives how far the piston has dropped
         below TDC, and a drop gives the angle. Use it to turn timing quoted in mm before TDC into degrees before TDC and
         back. A wrist pin offset from the cylinder axis (enter 0 for a centred pin) moves TDC a little past the
-        crank's vertical and makes the piston pass a given height at different angles going down (ATDC) and
+        crank’s vertical and makes the piston pass a given height at different angles going down (ATDC) and
         coming up (BTDC); both are shown.
       </p>
       <PistonDropCalculator />

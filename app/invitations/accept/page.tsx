@@ -1,7 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { currentUser } from '@/app/lib/authz';
-import { TOKEN_REFUSAL_MESSAGES } from '@/app/lib/one-time-token';
+import { TOKEN_REFUSAL_MESSAGES } from '@/lib/one-time-token';
 import { TokenAction } from '@/components/account/token-action';
 import { lookUpInvitation } from '@/db/invitations';
 

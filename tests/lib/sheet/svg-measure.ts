@@ -29,7 +29,6 @@ export function lines(svg: Svg, filter: (el: XmlElement) => boolean = () => true
 }
 
 export const isTick = (el: XmlElement) => el.hasAttribute('data-level');
-export const hasRole = (role: string) => (el: XmlElement) => el.getAttribute('data-role') === role;
 
 export function centreOf(svg: Svg): [number, number] {
   const [x, y] = (svg.root.getAttribute('data-centre-mm') ?? '').split(' ').map(Number);

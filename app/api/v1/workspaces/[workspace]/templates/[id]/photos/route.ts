@@ -3,7 +3,7 @@ import { jsonError } from '@/app/lib/api';
 import { deleteObject, putObject } from '@/app/lib/storage';
 import { insertPhoto, listPhotos, publicPhoto } from '@/db/templates/photos';
 import { MAX_PHOTO_BYTES } from '@/lib/templates/photo-type';
-import { reencodePhoto } from '@/lib/templates/reencode-photo';
+import { reencodePhoto } from '@/app/lib/reencode-photo';
 import { guarded } from '@/app/lib/route-handler';
 import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
@@ -50,7 +50,8 @@ export async function POST(request: Request, { params }: TemplateParams): Promis
     if (caption.length > 200) return jsonError(400, 'Some fields are not valid', [{ path: 'caption', message: 'Caption (caption) must be at most 200 characters' }]);
 
     const photo = await reencodePhoto(Buffer.from(await file.arrayBuffer()));
-    if (!photo.ok) return jsonError(photo.status, photo.message, [{ path: 'photo', message: photo.message }]);
+    // Whatever is not a readable JPEG, PNG or WebP is an unsupported media type.
+    if (!photo.ok) return jsonError(415, photo.message, [{ path: 'photo', message: photo.message }]);
 
     const base = `templates/${template.id}/${randomUUID()}`;
     const storageKey = `${base}.${EXTENSIONS[photo.contentType]}`;

@@ -1,5 +1,6 @@
+import 'server-only';
 import sharp from 'sharp';
-import { sniffPhotoType, type PhotoType } from './photo-type';
+import { sniffPhotoType, type PhotoType } from '@/lib/templates/photo-type';
 
 export const THUMBNAIL_EDGE_PX = 320;
 /** Longest edge kept for the stored photo; larger phone pictures are scaled down. */
@@ -13,7 +14,8 @@ export type ReencodedPhoto = {
   thumbnail: Buffer; // WebP
 };
 
-export type PhotoRefusal = { ok: false; status: 415; message: string };
+/** Why a file is not taken as a photo, in words for the person who sent it. */
+export type PhotoRefusal = { ok: false; message: string };
 
 const FORMAT_TYPES: Record<string, PhotoType> = { jpeg: 'image/jpeg', png: 'image/png', webp: 'image/webp' };
 
@@ -34,15 +36,15 @@ function encode(image: SharpImage, type: PhotoType): SharpImage {
  */
 export async function reencodePhoto(input: Buffer): Promise<({ ok: true } & ReencodedPhoto) | PhotoRefusal> {
   const sniffed = sniffPhotoType(input);
-  if (!sniffed) return { ok: false, status: 415, message: 'The file is not a JPEG, PNG or WebP image (checked by its content, not its name)' };
+  if (!sniffed) return { ok: false, message: 'The file is not a JPEG, PNG or WebP image (checked by its content, not its name)' };
   let format: string | undefined;
   try {
     format = (await sharp(input).metadata()).format;
   } catch {
-    return { ok: false, status: 415, message: 'The image could not be read: the file is damaged or not a JPEG, PNG or WebP image' };
+    return { ok: false, message: 'The image could not be read: the file is damaged or not a JPEG, PNG or WebP image' };
   }
   if (!format || FORMAT_TYPES[format] !== sniffed)
-    return { ok: false, status: 415, message: 'The image content does not match a JPEG, PNG or WebP image' };
+    return { ok: false, message: 'The image content does not match a JPEG, PNG or WebP image' };
   try {
     const upright = sharp(input).rotate().resize(PHOTO_EDGE_PX, PHOTO_EDGE_PX, { fit: 'inside', withoutEnlargement: true });
     const { data, info } = await encode(upright, sniffed).toBuffer({ resolveWithObject: true });
@@ -52,6 +54,6 @@ export async function reencodePhoto(input: Buffer): Promise<({ ok: true } & Reen
       .toBuffer();
     return { ok: true, contentType: sniffed, data, widthPx: info.width, heightPx: info.height, thumbnail };
   } catch {
-    return { ok: false, status: 415, message: 'The image could not be decoded: the file is damaged' };
+    return { ok: false, message: 'The image could not be decoded: the file is damaged' };
   }
 }
