@@ -61,8 +61,3 @@ export function lengthRangeMessage(
 ): string {
   return rangeMessage(problem, { ...rangeInUnit(field, unit), label: field.label, unit, hint: field.hint });
 }
-
-/** A length in mm as a message writes it in the shown unit: "120 mm", "4.7244 in". */
-export function lengthInUnit(mm: number, unit: LengthUnit): string {
-  return `${lengthText(mm, unit)} ${unit}`;
-}
