@@ -1,4 +1,5 @@
 import { DIAMETER_RANGE_MM, STRIP_WIDTH_RANGE_MM } from '@/lib/sheet/sheet-request';
+import { sheetRequestFields } from '@/lib/sheet/sheet-request-fields';
 import { mmToInch } from '@/lib/units';
 import { LENGTH_FIELDS, type GeneratorFormValues } from './form-values';
 
@@ -38,12 +39,6 @@ function isLengthField(field: string): field is LengthField {
   return (LENGTH_FIELDS as readonly string[]).includes(field);
 }
 
-/** The field's label as the schema writes it: every message starts "Label (fieldMm)". */
-function labelIn(message: string, field: string): string | undefined {
-  const at = message.indexOf(` (${field})`);
-  return at > 0 ? message.slice(0, at) : undefined;
-}
-
 export type LengthIssue = { path: string; code: string; message: string };
 
 /**
@@ -55,8 +50,7 @@ export type LengthIssue = { path: string; code: string; message: string };
 export function messageInTypedUnit(issue: LengthIssue, values: GeneratorFormValues): string {
   const field = issue.path;
   if (values.lengthUnit !== 'in' || !isLengthField(field)) return issue.message;
-  const label = labelIn(issue.message, field);
-  if (!label) return issue.message;
+  const { label } = sheetRequestFields[field];
   const { min, max } = inchRange(RANGE_MM[field]);
   const allowed = `${min}–${max} in`;
   switch (issue.code) {

@@ -202,14 +202,14 @@ test('a 400 answer from the sheet API is listed field by field', async ({ page }
     route.fulfill({
       status: 400,
       contentType: 'application/json',
-      body: JSON.stringify({ error: 'Some fields are not valid', issues: [{ path: 'diameterMm', message: 'Diameter (diameterMm) must be at most 600 mm (allowed 20–600 mm)' }] }),
+      body: JSON.stringify({ error: 'Some fields are not valid', issues: [{ path: 'diameterMm', message: 'Diameter must be at most 600 mm (allowed 20–600 mm)' }] }),
     }),
   );
   await page.goto('/');
   await page.getByRole('button', { name: 'Download SVG' }).click();
   const alert = page.getByRole('region', { name: 'Download' }).getByRole('alert');
   await expect(alert).toContainText('Some fields are not valid');
-  await expect(alert).toContainText('diameterMm: Diameter (diameterMm) must be at most 600 mm');
+  await expect(alert).toContainText('diameterMm: Diameter must be at most 600 mm');
 });
 
 test('the page shows the print-size line and the safety cautions', async ({ page }) => {

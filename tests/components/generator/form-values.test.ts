@@ -26,7 +26,7 @@ describe('toSheetRequestInput', () => {
     expect(request.advanceMarksDeg?.slice(0, 2)).toEqual([16, 18]);
     const result = sheetRequestSchema.safeParse(request);
     expect(result.success).toBe(false);
-    expect(result.error?.issues[0]?.message).toMatch(/Advance mark \(advanceMarksDeg\) must be a number, 0–60° BTDC/);
+    expect(result.error?.issues[0]?.message).toMatch(/Advance mark must be a number, 0–60° BTDC/);
   });
 
   it('treats a blank window or band as none, and a half-filled one as an error', () => {
@@ -37,7 +37,7 @@ describe('toSheetRequestInput', () => {
 
   it('an empty diameter (NaN from valueAsNumber) gets the schema message naming field and range', () => {
     const result = sheetRequestSchema.safeParse(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, diameterMm: Number.NaN }));
-    expect(result.error?.issues[0]?.message).toBe('Diameter (diameterMm) must be a number, 20–600 mm');
+    expect(result.error?.issues[0]?.message).toBe('Diameter must be a number, 20–600 mm');
   });
 });
 
