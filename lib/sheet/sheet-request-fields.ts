@@ -20,6 +20,12 @@ export const MAX_ADVANCE_MARKS = 72;
 export const MAX_PORT_EVENTS = 12;
 export const MAX_SCRIBE_ROWS = 400;
 
+/** What the printer makes of one millimetre, per axis; the sheet request carries them, a printer profile keeps them. */
+export const printerScaleFields = defineFields({
+  printerScaleX: numberField({ label: 'Printer scale X', ...PRINTER_SCALE_RANGE }),
+  printerScaleY: numberField({ label: 'Printer scale Y', ...PRINTER_SCALE_RANGE }),
+});
+
 const CRANK_RANGE_DEG = { min: 0, max: 360, unit: '°' } as const;
 const BTDC_RANGE_DEG = { ...ADVANCE_RANGE_DEG, unit: '° BTDC' } as const;
 
@@ -80,8 +86,8 @@ export const sheetRequestFields = defineFields({
   minPitchMm: numberField({ label: 'Minimum legible pitch', min: 0.2, max: 5, unit: 'mm' }).default(0.6),
   paper: choiceField({ label: 'Paper', choices: PAPER_NAMES as [PaperName, ...PaperName[]] }).default('A4'),
   orientation: choiceField({ label: 'Orientation', choices: ['portrait', 'landscape'] }).default('portrait'),
-  printerScaleX: numberField({ label: 'Printer scale X', ...PRINTER_SCALE_RANGE }).default(1),
-  printerScaleY: numberField({ label: 'Printer scale Y', ...PRINTER_SCALE_RANGE }).default(1),
+  printerScaleX: printerScaleFields.printerScaleX.default(1),
+  printerScaleY: printerScaleFields.printerScaleY.default(1),
   printerProfileName: textField({ label: 'Printer profile name', maxLength: 60 }).optional(),
   title: textField({ label: 'Title', maxLength: 80 }).default(''),
   note: textField({ label: 'Note', maxLength: 200 }).optional(),

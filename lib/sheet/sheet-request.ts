@@ -16,7 +16,6 @@ export {
   MAX_ADVANCE_MARKS,
   MAX_PORT_EVENTS,
   MAX_SCRIBE_ROWS,
-  PRINTER_SCALE_RANGE,
   STRIP_WIDTH_RANGE_MM,
   portEventSchema,
   type PortEvent,

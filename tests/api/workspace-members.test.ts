@@ -118,7 +118,7 @@ describe('printer profiles per workspace', () => {
       body: { name: 'Bad', printerScaleX: 1.5, printerScaleY: 1 },
     });
     expect(res.status).toBe(400);
-    expect(res.json.issues).toEqual([{ path: 'printerScaleX', message: 'Printer scale X (printerScaleX) must be at most 1.1 (allowed 0.9–1.1)' }]);
+    expect(res.json.issues).toEqual([{ path: 'printerScaleX', message: 'Printer scale X must be at most 1.1 (allowed 0.9–1.1)' }]);
   });
 
   it('of another workspace are 404 through one’s own workspace, and stay where they are', async () => {

@@ -57,7 +57,7 @@ test('a bar of 80 mm is refused: the printer is probably scaling to fit the page
   await page.getByLabel('Vertical bar measures').fill('100');
   await page.getByRole('button', { name: 'Save profile' }).click();
   const errorId = (await horizontal.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
-  await expect(page.locator(`[id="${errorId}"]`)).toHaveText(/under 90 mm \(allowed 90–110 mm\).*probably scaling to fit the page/);
+  await expect(page.locator(`[id="${errorId}"]`)).toHaveText(/Horizontal bar must be at least 90 mm \(allowed 90–110 mm\).*probably scaling to fit the page/);
   await expect(horizontal).toHaveAttribute('aria-invalid', 'true');
   await expect(page.getByText('No printer profiles saved in this browser yet.')).toBeVisible();
 });
