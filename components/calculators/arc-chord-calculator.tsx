@@ -9,7 +9,8 @@ import { arcChordRows } from '@/lib/engine/arc-chord-rows';
 import { arcChordSchema, type ArcChordInput, type ArcChordRequest } from '@/lib/engine/arc-chord-schema';
 import { scribeChartHref } from '@/lib/engine/wheel-links';
 import { LengthField } from './length-field';
-import { formatDeg, toUnit, type LengthUnit } from './length-unit';
+import { mmToUnit, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from './length-unit';
 import { ResultPanel, WaitingForInput } from './result-panel';
 import { UnitSwitch } from './unit-switch';
 import { useLiveResult } from './use-live-result';
@@ -61,10 +62,10 @@ export function ArcChordCalculator() {
                       {formatDeg(row.angleDeg, 1)}
                     </th>
                     <td className="py-1 pr-3" data-testid={`arc-${index}`}>
-                      {toUnit(row.arcMm, unit).toFixed(places)}
+                      {mmToUnit(row.arcMm, unit).toFixed(places)}
                     </td>
                     <td className="py-1 pr-3" data-testid={`chord-${index}`}>
-                      {toUnit(row.chordMm, unit).toFixed(places)}
+                      {mmToUnit(row.chordMm, unit).toFixed(places)}
                     </td>
                   </tr>
                 ))}

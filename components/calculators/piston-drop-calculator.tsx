@@ -11,7 +11,8 @@ import { crankAnglesFromDropMm, offsetPistonDropMm } from '@/lib/engine/offset-s
 import { advanceMarkHref } from '@/lib/engine/wheel-links';
 import { CrankDiagram } from './crank-diagram';
 import { LengthField } from './length-field';
-import { formatDeg, formatLength, type LengthUnit } from './length-unit';
+import { formatLength, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from './length-unit';
 import { ResultFigure, ResultPanel, WaitingForInput } from './result-panel';
 import { UnitSwitch } from './unit-switch';
 import { useLiveResult } from './use-live-result';

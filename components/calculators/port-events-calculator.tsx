@@ -11,7 +11,8 @@ import { portEventsSchema, type PortEventsInput, type PortEventsRequest } from '
 import { PORT_KINDS } from '@/lib/engine/port-kind';
 import { portEventsWheelHref } from '@/lib/engine/wheel-links';
 import { LengthField } from './length-field';
-import { formatDeg, formatLength, type LengthUnit } from './length-unit';
+import { formatLength, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from './length-unit';
 import { PortRing } from './port-ring';
 import { ResultPanel, WaitingForInput } from './result-panel';
 import { UnitSwitch } from './unit-switch';

@@ -96,7 +96,7 @@ test('a 700 mm diameter is refused beside the field with the schema’s range', 
   const errorId = (await diameter.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
   expect(errorId).toBeTruthy();
   const error = page.locator(`[id="${errorId}"]`);
-  await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
+  await expect(error).toHaveText(/Diameter must be at most 600 mm \(allowed 20–600 mm\)/);
   await expect(error).toHaveAttribute('aria-live', 'polite');
   await expect(diameter).toHaveAttribute('aria-invalid', 'true');
   // The preview keeps the last good drawing, dimmed, and lists what it waits for.
@@ -105,7 +105,7 @@ test('a 700 mm diameter is refused beside the field with the schema’s range', 
 
   // An empty field gets the schema's message too, never NaN.
   await diameter.fill('');
-  await expect(error).toHaveText(/Diameter \(diameterMm\) must be a number, 20–600 mm/);
+  await expect(error).toHaveText(/Diameter must be a number, 20–600 mm/);
   await expect(page.getByText('NaN')).toHaveCount(0);
 
   // Downloading with the bad field keeps the user on the form with a message.
@@ -135,7 +135,7 @@ test('with the inch toggle a too-large diameter is refused with the range in inc
   await diameter.fill('30');
   await page.getByRole('radio', { name: 'mm', exact: true }).check({ force: true });
   await expect(diameter).toHaveValue('762');
-  await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
+  await expect(error).toHaveText(/Diameter must be at most 600 mm \(allowed 20–600 mm\)/);
 });
 
 test('Download PDF gives a PDF of the chosen page size (Letter landscape = 792 × 612 pt)', async ({ page }) => {

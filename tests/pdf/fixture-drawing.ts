@@ -1,6 +1,6 @@
 import type { Drawing, LineShape, PageLayout, Shape } from '@/lib/sheet/drawing';
 import { pageSizeMm, type Orientation, type PaperName } from '@/lib/sheet/paper';
-import { MM_PER_INCH } from '@/lib/units';
+import { MM_PER_INCH } from '@/lib/fields/length';
 
 /**
  * Hand-made drawings for the PDF renderer tests, independent of the layout code:
