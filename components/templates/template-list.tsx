@@ -6,6 +6,7 @@ import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { TemplateSortKey } from '@/lib/templates/list-query';
+import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/templates/list-view';
 import type { Template, TemplatePage } from '@/lib/templates/template';
 import { inputClass } from '@/components/generator/fields';
@@ -16,6 +17,12 @@ const helper = createColumnHelper<typeof features, Template>();
 const EMPTY: Template[] = [];
 
 type SortableColumn = { key: TemplateSortKey; header: string };
+
+/** The fields the field table shows as list columns, headed by their short header or label. */
+const LIST_COLUMNS: SortableColumn[] = TEMPLATE_FIELD_LIST.filter((field) => field.list.column).map((field) => ({
+  key: field.key as TemplateSortKey,
+  header: field.list.header ?? field.label,
+}));
 
 const fetchJson = async (url: string): Promise<TemplatePage> => {
   const res = await fetch(url);
@@ -85,18 +92,7 @@ export function TemplateList({ slug }: { slug: string }) {
   });
 
   const columns = useMemo(() => {
-    const sortable: SortableColumn[] = [
-      { key: 'name', header: 'Name' },
-      { key: 'description', header: 'Engine' },
-      { key: 'boreMm', header: 'Bore' },
-      { key: 'strokeMm', header: 'Stroke' },
-      { key: 'rimDiameterMm', header: 'Rim Ø' },
-      { key: 'faceDiameterMm', header: 'Face Ø' },
-      { key: 'flangeDiameterMm', header: 'Flange Ø' },
-      { key: 'staticAdvanceDeg', header: 'Advance' },
-      { key: 'rotation', header: 'Rotation' },
-      { key: 'updatedAt', header: 'Updated' },
-    ];
+    const sortable: SortableColumn[] = [...LIST_COLUMNS, { key: 'updatedAt', header: 'Updated' }];
     return helper.columns(
       sortable.map((c) =>
         helper.accessor(c.key as keyof Template & string, {

@@ -1,5 +1,5 @@
 import Papa from 'papaparse';
-import { CSV_COLUMNS, CSV_COLUMN_SPECS, columnForField, type CsvColumn, type CsvColumnSpec } from './csv-columns';
+import { CSV_COLUMNS, CSV_COLUMN_SPECS, columnForField, type CsvColumnSpec } from './csv-columns';
 import {
   readBooleanCell,
   readListCell,
@@ -12,6 +12,7 @@ import {
   writeTextCell,
   type CellResult,
 } from './csv-cells';
+import type { PortEvent } from '@/lib/sheet/sheet-request';
 import { templateSchema, type TemplateFields } from './template-schema';
 
 export const MAX_IMPORT_ROWS = 20_000;
@@ -31,8 +32,9 @@ function readCell(spec: CsvColumnSpec, cell: string): CellResult<unknown> {
       return readPortsCell(cell, spec.column);
     case 'boolean':
       return readBooleanCell(cell, spec.column);
-    case 'rotation':
-      return { ok: true, value: cell.trim() === '' ? 'cw' : cell.trim().toLowerCase() };
+    case 'choice':
+      // An empty cell takes the field's default; a bad value is left to the schema's message.
+      return { ok: true, value: cell.trim() === '' ? undefined : cell.trim().toLowerCase() };
     case 'text':
       return { ok: true, value: readTextCell(cell) };
   }
@@ -106,30 +108,27 @@ export function parseTemplatesCsv(text: string): CsvImportResult {
   return problems.length > 0 ? { ok: false, problems } : { ok: true, templates };
 }
 
-function templateToRecord(t: TemplateFields): Record<CsvColumn, string> {
-  return {
-    name: writeTextCell(t.name),
-    description: writeTextCell(t.description),
-    bore_mm: writeNumberCell(t.boreMm),
-    stroke_mm: writeNumberCell(t.strokeMm),
-    rod_mm: writeNumberCell(t.rodMm),
-    rotation: t.rotation,
-    rim_diameter_mm: writeNumberCell(t.rimDiameterMm),
-    face_diameter_mm: writeNumberCell(t.faceDiameterMm),
-    flange_diameter_mm: writeNumberCell(t.flangeDiameterMm),
-    hub_hole_mm: writeNumberCell(t.hubHoleMm),
-    static_advance_deg_btdc: writeNumberCell(t.staticAdvanceDeg),
-    advance_marks_deg_btdc: writeListCell(t.advanceMarksDeg),
-    port_targets: writePortsCell(t.portTargets),
-    notes: writeTextCell(t.notes),
-    archived: t.archived ? 'true' : 'false',
-  };
+function writeCell(spec: CsvColumnSpec, value: unknown): string {
+  switch (spec.kind) {
+    case 'number':
+      return writeNumberCell(value as number | null);
+    case 'list':
+      return writeListCell(value as number[]);
+    case 'ports':
+      return writePortsCell(value as PortEvent[]);
+    case 'boolean':
+      return value ? 'true' : 'false';
+    case 'choice':
+      return String(value);
+    case 'text':
+      return writeTextCell(value as string);
+  }
 }
 
 /** Writes templates in the documented column set, header first, CRLF line ends (RFC 4180). */
 export function templatesToCsv(templates: TemplateFields[]): string {
   return Papa.unparse(
-    { fields: [...CSV_COLUMNS], data: templates.map((t) => CSV_COLUMNS.map((c) => templateToRecord(t)[c])) },
+    { fields: [...CSV_COLUMNS], data: templates.map((t) => CSV_COLUMN_SPECS.map((spec) => writeCell(spec, t[spec.field]))) },
     { newline: '\r\n', quotes: false },
   );
 }

@@ -66,10 +66,10 @@ describe('CSV import', () => {
     const csv = ['name,bore_mm,rotation,advance_marks_deg_btdc', ',40,cw,16', 'Too big,400,cw,16', 'Bad turn,40,left,16;x'].join('\n');
     const body = await (await api.importCsv(ws, csv)).json();
     expect(body.problems).toEqual([
-      { row: 2, column: 'name', message: expect.stringMatching(/Name \(name\) must not be empty/) },
+      { row: 2, column: 'name', message: expect.stringMatching(/^Name must not be empty/) },
       { row: 3, column: 'bore_mm', message: expect.stringMatching(/at most 150 mm/) },
       { row: 4, column: 'advance_marks_deg_btdc', message: expect.stringMatching(/separated by ";"/) },
-      { row: 4, column: 'rotation', message: 'Rotation (rotation) must be one of: cw, ccw' },
+      { row: 4, column: 'rotation', message: 'Rotation must be one of: cw, ccw' },
     ]);
     const unknown = await (await api.importCsv(ws, 'name,colour\nA,red')).json();
     expect(unknown.problems[0]).toMatchObject({ row: 1, column: 'colour' });

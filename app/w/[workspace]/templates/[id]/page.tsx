@@ -4,7 +4,7 @@ import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { pageAction } from '@/app/lib/page-access';
 import { can } from '@/lib/access-policy';
-import { FIELD_LABELS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
+import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
 import { PhotoUpload } from '@/components/templates/photo-upload';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
@@ -12,25 +12,12 @@ import { TemplateHistory } from '@/components/templates/template-history';
 import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos } from '@/db/templates/photos';
 import { listRevisions } from '@/db/templates/revisions';
-import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
 
-const FIGURES: TemplateFieldName[] = [
-  'boreMm',
-  'strokeMm',
-  'rodMm',
-  'rotation',
-  'rimDiameterMm',
-  'faceDiameterMm',
-  'flangeDiameterMm',
-  'hubHoleMm',
-  'staticAdvanceDeg',
-  'advanceMarksDeg',
-];
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
@@ -100,7 +87,7 @@ export default async function TemplatePage({ params }: Props) {
           Figures
         </h2>
         <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
-          {FIGURES.map((field) => (
+          {FIGURE_FIELDS.map((field) => (
             <div key={field} className="contents">
               <dt className="text-steel-600 dark:text-steel-300">{FIELD_LABELS[field]}</dt>
               <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field])}</dd>
