@@ -3,25 +3,14 @@ import type { Template } from '@/lib/templates/template';
 import { TEMPLATE_FIELD_LIST, type TemplateFieldName } from '@/lib/templates/template-fields';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 
-/** A row of the templates table, joined with the names of its creator and last editor. */
+/**
+ * A row of the templates table, joined with the names of its creator and last
+ * editor: the bookkeeping columns below, plus one column per field of the field
+ * table (lib/templates/template-fields.ts), read and written through `column`.
+ */
 export type TemplateRow = {
   id: number;
   workspace_id: number;
-  name: string;
-  description: string;
-  bore_mm: number | null;
-  stroke_mm: number | null;
-  rod_mm: number | null;
-  rotation: 'cw' | 'ccw';
-  rim_diameter_mm: number | null;
-  face_diameter_mm: number | null;
-  flange_diameter_mm: number | null;
-  hub_hole_mm: number | null;
-  static_advance_deg: number | null;
-  advance_marks_json: string;
-  port_targets_json: string;
-  notes: string;
-  archived: number | boolean;
   version: number;
   created_by: number | null;
   updated_by: number | null;
@@ -29,7 +18,7 @@ export type TemplateRow = {
   updated_at: string;
   created_by_name?: string | null;
   updated_by_name?: string | null;
-};
+} & Record<string, unknown>;
 
 /** API field → SQL column, from the field table; the whitelist for sorting and for writes. */
 export const FIELD_COLUMNS = Object.fromEntries(TEMPLATE_FIELD_LIST.map((field) => [field.key, field.column!])) as Record<TemplateFieldName, string>;
@@ -42,10 +31,9 @@ export const SORT_COLUMNS = Object.fromEntries(TEMPLATE_SORT_KEYS.map((key) => [
 
 /** Lists are stored as JSON text, flags as 0/1; everything else as it is. */
 export function rowToFields(row: TemplateRow): TemplateFields {
-  const columns = row as unknown as Record<string, unknown>;
   const fields: Record<string, unknown> = {};
   for (const field of TEMPLATE_FIELD_LIST) {
-    const value = columns[field.column!];
+    const value = row[field.column!];
     fields[field.key] = field.kind === 'list' ? JSON.parse(String(value)) : field.kind === 'flag' ? Boolean(value) : value;
   }
   return fields as TemplateFields;
