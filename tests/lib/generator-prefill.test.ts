@@ -55,7 +55,7 @@ describe('prefillFromSearchParams', () => {
   it('ignores bad JSON in portEvents without throwing', () => {
     const { values, ignored } = prefillFromSearchParams(new URLSearchParams({ portEvents: '[{"name":' }));
     expect(values.portEvents).toBeUndefined();
-    expect(ignored).toEqual([{ param: 'portEvents', message: 'Port events (portEvents) are not valid JSON' }]);
+    expect(ignored).toEqual([{ param: 'portEvents', message: 'Port events are not valid JSON' }]);
   });
 
   it('keeps the valid port events and drops the broken ones', () => {
