@@ -76,7 +76,7 @@ describe('password reset links', () => {
     expect(forged.json.error).toBe(TOKEN_REFUSAL_MESSAGES.unknown);
     const malformed = await callRoute(confirmReset, { body: { token: 'x', password: 'a fresh long password' } });
     expect(malformed.status).toBe(400);
-    expect(malformed.json.issues).toEqual([{ path: 'token', message: expect.stringContaining('Link code (token)') }]);
+    expect(malformed.json.issues).toEqual([{ path: 'token', message: expect.stringContaining('Link code is not valid') }]);
   });
 
   it('store only a SHA-256 of the token, never the token', async () => {

@@ -82,7 +82,7 @@ describe('owners manage members', () => {
       body: { role: 'admin' },
     });
     expect(res.status).toBe(400);
-    expect(res.json.issues).toEqual([{ path: 'role', message: 'Role (role) must be one of: viewer, technician, owner' }]);
+    expect(res.json.issues).toEqual([{ path: 'role', message: 'Role must be one of: viewer, technician, owner' }]);
   });
 
   it('members of one workspace cannot reach another workspace’s members through their own', async () => {

@@ -47,7 +47,7 @@ export async function POST(request: Request, { params }: TemplateParams): Promis
     if (!(file instanceof Blob)) return jsonError(400, 'No photo in the upload', [{ path: 'photo', message: 'Add a "photo" file field' }]);
     if (file.size > MAX_PHOTO_BYTES) return tooLarge();
     const caption = String(form.get('caption') ?? '').trim();
-    if (caption.length > 200) return jsonError(400, 'Some fields are not valid', [{ path: 'caption', message: 'Caption (caption) must be at most 200 characters' }]);
+    if (caption.length > 200) return jsonError(400, 'Some fields are not valid', [{ path: 'caption', message: 'Caption must be at most 200 characters' }]);
 
     const photo = await reencodePhoto(Buffer.from(await file.arrayBuffer()));
     // Whatever is not a readable JPEG, PNG or WebP is an unsupported media type.
