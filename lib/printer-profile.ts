@@ -3,7 +3,7 @@ import { PRINTER_SCALE_RANGE } from './sheet/sheet-request';
 
 /**
  * Printer profiles: the scale-check sheet carries 100 mm bars in both axes
- * (PRODUCT.md §3). The user measures what the printer made of them; the profile
+ * (DEVELOPERS.md, "Sheets"). The user measures what the printer made of them; the profile
  * holds what the printer makes of one millimetre (measured ÷ 100) per axis, and
  * later sheets are pre-scaled by its inverse.
  */

@@ -12,7 +12,7 @@ export type SheetPreviewResult =
  * The generator form's live preview: the same schema as POST /api/v1/sheets, the
  * untiled drawing as SVG, the layout's warnings and how many pages the PDF will take.
  * Public on purpose, so no session or role check: the generator works without an
- * account (PRODUCT.md §1, issue 3) and this touches no stored data.
+ * account (DEVELOPERS.md, "Public pages") and this touches no stored data.
  */
 export async function previewSheet(input: unknown): Promise<SheetPreviewResult> {
   const parsed = sheetRequestSchema.safeParse(input);

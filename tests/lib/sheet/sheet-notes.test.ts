@@ -1,5 +1,5 @@
 // Source under test: lib/sheet/sheet-notes.ts and lib/sheet/info-panel.ts (title block, print line,
-// cautions of PRODUCT.md §6, the "which way" note and diagram), read back from the SVG with @xmldom/xmldom.
+// cautions of DEVELOPERS.md, "Cautions", the "which way" note and diagram), read back from the SVG with @xmldom/xmldom.
 import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
@@ -34,7 +34,7 @@ describe('every sheet says what it is and how to print it', () => {
     expect(words).toContain('printer scale x 0.990');
     expect(words).toContain('Note: checked twice');
     expect(words).toContain('Print at 100 % / actual size — turn off fit-to-page');
-    // PRODUCT.md §6, in short.
+    // DEVELOPERS.md, "Cautions", in short.
     for (const caution of ['plug lead off', 'positive stop by hand only', 'clear of the flywheel and fan', 'ventilation', 'detonation', 'maker’s manual'])
       expect(words).toContain(caution);
     expect(words).toContain('Which way:');

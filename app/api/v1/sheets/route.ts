@@ -10,7 +10,7 @@ export const dynamic = 'force-dynamic';
  * POST /api/v1/sheets: a sheet request (JSON, lib/sheet/sheet-request.ts) in, the
  * drawing as a PDF (default) or SVG download out.
  * Public on purpose, so no session or role check: the generator serves visitors
- * without an account (PRODUCT.md §1, issue 3), and it reads and writes no stored data.
+ * without an account (DEVELOPERS.md, "Public pages"), and it reads and writes no stored data.
  */
 export async function POST(request: Request): Promise<Response> {
   try {
