@@ -1,5 +1,6 @@
 'use server';
 import 'server-only';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetRequestSchema, toFieldIssues, type FieldIssue } from '@/lib/sheet/sheet-request';
@@ -18,7 +19,7 @@ export async function previewSheet(input: unknown): Promise<SheetPreviewResult> 
   const parsed = sheetRequestSchema.safeParse(input);
   if (!parsed.success) return { ok: false, issues: toFieldIssues(parsed.error) };
   try {
-    const drawing = buildDrawing(parsed.data);
+    const drawing = buildDrawing(parsed.data, { dateFormat: await requestDateFormat() });
     return { ok: true, svg: renderSvg(drawing), warnings: drawing.warnings, pageCount: drawing.pages.length };
   } catch (error) {
     console.error('previewSheet failed:', error instanceof Error ? error.message : String(error));

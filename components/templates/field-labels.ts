@@ -42,7 +42,3 @@ export function formatFieldValue(field: string, value: unknown): string {
     return (value as Port[]).length ? (value as Port[]).map((p) => `${p.name} ${p.opensCrankDeg}°→${p.closesCrankDeg}°`).join('; ') : '—';
   return `${String(value)}${UNITS[field as TemplateFieldName] ?? ''}`;
 }
-
-export function formatWhen(iso: string): string {
-  return iso.replace('T', ' ').replace(/\.\d+Z$/, ' UTC').replace(/Z$/, ' UTC');
-}

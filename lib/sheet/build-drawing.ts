@@ -1,3 +1,4 @@
+import { DEFAULT_DATE_FORMAT, formatDate, type DateFormat } from '../format/date-format';
 import { assertFiniteDrawing } from './assert-finite';
 import { checkBlockShapes } from './check-block';
 import { nestBlock, toBlock, type Block } from './block';
@@ -8,12 +9,13 @@ import { addPageBands, pageBandHeightMm } from './page-band';
 import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
 import { sheetRequestSchema, type SheetRequest } from './sheet-request';
-import { isoDate, sheetTitle, titleBlockLines } from './sheet-notes';
+import { sheetTitle, titleBlockLines } from './sheet-notes';
 import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
 import { stripLayout } from './strip-layout';
 
-export type BuildOptions = { date?: Date; marginMm?: number };
+/** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"). */
+export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
 export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
@@ -136,7 +138,7 @@ export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): D
     title,
     request,
     lines: titleBlockLines(request, {
-      date: isoDate(options.date ?? new Date()),
+      date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
       ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
       ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
     }),

@@ -41,10 +41,6 @@ export function sheetTitle(req: SheetRequest): string {
   return req.title.trim() || defaultTitle(req);
 }
 
-export function isoDate(date: Date): string {
-  return Number.isFinite(date.getTime()) ? date.toISOString().slice(0, 10) : '';
-}
-
 function dimensionsLine(req: SheetRequest, stripLengthMm?: number): string {
   switch (req.kind) {
     case 'wheel':

@@ -10,6 +10,20 @@ function sheetText(input: Parameters<typeof req>[0]) {
   return { svg, words: svg.all('text').map((t) => t.textContent).join(' ') };
 }
 
+describe('the sheet date', () => {
+  it('is written in the reader\'s locale and the stated time zone', () => {
+    // 2026-12-01T23:30Z is already 2 December in Berlin (UTC+1 in winter, IANA tz database); CLDR de "d. MMM y".
+    const late = new Date('2026-12-01T23:30:00Z');
+    const at = (locale: string, timeZone: string) =>
+      parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 118 }), { date: late, dateFormat: { locale, timeZone } })))
+        .all('text')
+        .map((t) => t.textContent)
+        .join(' ');
+    expect(at('en-US', 'UTC')).toContain('Date Dec 1, 2026'); // CLDR en-US "MMM d, y"
+    expect(at('de-DE', 'Europe/Berlin')).toContain('Date 2. Dez. 2026');
+  });
+});
+
 describe('every sheet says what it is and how to print it', () => {
   it.each(['wheel', 'ring', 'strip', 'scribe', 'check'] as const)('%s: title block, print line, cautions and which-way note', (kind) => {
     const { words } = sheetText({
@@ -28,7 +42,8 @@ describe('every sheet says what it is and how to print it', () => {
     expect(words).toContain('Carrier: rotating');
     expect(words).toContain('Rotation: clockwise');
     expect(words).toContain('Numbering: split');
-    expect(words).toContain('Date 2026-12-01');
+    // The default date format, en-GB in UTC: day, abbreviated month, year (Unicode CLDR en-GB "d MMM y").
+    expect(words).toContain('Date 1 Dec 2026');
     expect(words).toContain('paper Letter portrait');
     expect(words).toContain('Printer profile: Office laser');
     expect(words).toContain('printer scale x 0.990');

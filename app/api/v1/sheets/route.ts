@@ -1,4 +1,5 @@
 import { jsonError, parseJsonBody } from '@/app/lib/api';
+import { dateFormatOf } from '@/app/lib/date-format';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
 
@@ -16,7 +17,7 @@ export async function POST(request: Request): Promise<Response> {
   try {
     const parsed = await parseJsonBody(request, sheetRequestSchema);
     if (!parsed.ok) return parsed.response;
-    return await sheetDownloadResponse(parsed.data);
+    return await sheetDownloadResponse(parsed.data, dateFormatOf(request));
   } catch (error) {
     // Never a stack trace to the caller; the message stays in the server log.
     console.error('POST /api/v1/sheets failed:', error instanceof Error ? error.message : String(error));
