@@ -25,10 +25,6 @@ describe('graduation levels', () => {
     ticks.forEach((tick, i) => expect(tick.crankDeg).toBe(i * 0.5));
   });
 
-  it('arc pitch is π·d·step/360 (e.g. 100 mm, 1°: 0.8727 mm)', () => {
-    expect(arcLengthMm(100, 1)).toBeCloseTo(0.872665, 6);
-  });
-
   it('drops 0.5° on a 100 mm wheel (0.44 mm < 0.6 mm) and says so', () => {
     const { drawing, count, levels } = tickLevels(100);
     expect(levels).toHaveLength(360);
