@@ -6,7 +6,7 @@ import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackedPageCount, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
 import { addPageBands, pageBandHeightMm } from './page-band';
-import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
+import { DEFAULT_MARGIN_MM, MIN_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
 import { sheetRequestSchema, type SheetRequest } from './sheet-request';
 import { sheetTitle, titleBlockLines } from './sheet-notes';
@@ -132,7 +132,7 @@ function labelWarnings(shapes: readonly Shape[]): string[] {
  */
 export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): Drawing {
   const request = sheetRequestSchema.parse(input);
-  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, 6) };
+  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, MIN_MARGIN_MM) };
   const title = sheetTitle(request);
   const contentFor = (layout?: ScaleLayout): InfoContent => ({
     title,
