@@ -1,4 +1,5 @@
 import 'server-only';
+import { formatDateTime, type DateFormat } from '@/lib/format/date-format';
 import type { OutgoingMail } from './mailer';
 
 /** The words of each e-mail the app sends. Links carry the one-time token, nothing else secret. */
@@ -19,10 +20,16 @@ export function resetMail(to: string, link: string): OutgoingMail {
   };
 }
 
-export function invitationMail(to: string, inviter: string, workspace: string, role: string, link: string): OutgoingMail {
+/** `expiresAt` is written in the inviter's date format (DEVELOPERS.md, "Dates"): the invitee's is not known yet. */
+export function invitationMail(
+  to: string,
+  invitation: { inviter: string; workspace: string; role: string; link: string; expiresAt: string },
+  dateFormat: DateFormat,
+): OutgoingMail {
+  const { inviter, workspace, role, link, expiresAt } = invitation;
   return {
     to,
     subject: `${inviter} invites you to ${workspace} on Rimscale`,
-    text: `${inviter} invites you to join ${workspace} on Rimscale as ${role}.\n\nOpen this link to accept (valid for 7 days, once). If you have no account yet, you can create one with this address on the way:\n\n${link}\n`,
+    text: `${inviter} invites you to join ${workspace} on Rimscale as ${role}.\n\nOpen this link to accept (valid for 7 days, until ${formatDateTime(expiresAt, dateFormat)}, once). If you have no account yet, you can create one with this address on the way:\n\n${link}\n`,
   };
 }

@@ -11,6 +11,7 @@ import type { Access } from './authz';
 import { invitationMail } from './emails';
 import { sendMail } from './mailer';
 import { TOKEN_REFUSAL_MESSAGES } from '@/lib/one-time-token';
+import type { DateFormat } from '@/lib/format/date-format';
 
 const refuse = (status: number, message: string) => ({ ok: false, status, message }) as const;
 
@@ -24,6 +25,7 @@ export async function invite(
   access: Access,
   input: { email: string; role: Role },
   origin: string,
+  dateFormat: DateFormat,
 ): Promise<ServiceResult<{ invitationId: number }>> {
   if (access.workspace.kind === 'personal') {
     return refuse(409, 'A personal workspace has only you in it: create a shop workspace to invite others');
@@ -36,10 +38,14 @@ export async function invite(
   if (members.some((m) => m.email === input.email.trim().toLowerCase())) {
     return refuse(409, `${input.email} is already a member of ${access.workspace.name}`);
   }
-  const { id, token } = await createInvitation({ workspaceId: access.workspace.id, email: input.email, role: input.role, invitedBy: access.user.id });
+  const { id, token, expiresAt } = await createInvitation({ workspaceId: access.workspace.id, email: input.email, role: input.role, invitedBy: access.user.id });
   try {
     await sendMail(
-      invitationMail(input.email, access.user.name, access.workspace.name, input.role, `${origin}/invitations/accept?token=${token}`),
+      invitationMail(
+        input.email,
+        { inviter: access.user.name, workspace: access.workspace.name, role: input.role, link: `${origin}/invitations/accept?token=${token}`, expiresAt },
+        dateFormat,
+      ),
     );
   } catch (err) {
     await revokeInvitation(access.workspace.id, id);

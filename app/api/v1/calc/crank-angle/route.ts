@@ -2,7 +2,7 @@ import { parseJsonBody } from '@/app/lib/api';
 import { crankAngleSchema } from '@/lib/engine/crank-angle-schema';
 import { crankAnglesFromDropMm } from '@/lib/engine/offset-slider-crank';
 
-// Public calculator (PRODUCT.md §4): no session is needed, it reads and stores nothing.
+// Public calculator (DEVELOPERS.md, "Public pages"): no session is needed, it reads and stores nothing.
 // Answers { crankDeg, crankDegATDC, crankDegBTDC }: degrees after TDC going down and before TDC
 // coming up. Without a pin offset all three are equal; crankDeg is always the down-stroke angle.
 export async function POST(request: Request) {

@@ -2,7 +2,7 @@ import { parseJsonBody } from '@/app/lib/api';
 import { offsetPistonDropMm } from '@/lib/engine/offset-slider-crank';
 import { pistonDropSchema } from '@/lib/engine/piston-drop-schema';
 
-// Public calculator (PRODUCT.md §4): no session is needed, it reads and stores nothing.
+// Public calculator (DEVELOPERS.md, "Public pages"): no session is needed, it reads and stores nothing.
 // crankDeg is 0–360 in crank order from piston TDC (x° BTDC = 360 − x); pinOffsetMm is optional
 // (0 = centred pin, positive toward the side the crank pin swings to just after TDC).
 export async function POST(request: Request) {

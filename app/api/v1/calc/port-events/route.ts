@@ -2,7 +2,7 @@ import { parseJsonBody } from '@/app/lib/api';
 import { portEvents } from '@/lib/engine/port-events';
 import { portEventsSchema } from '@/lib/engine/port-events-schema';
 
-// Public calculator (PRODUCT.md §4): no session is needed, it reads and stores nothing.
+// Public calculator (DEVELOPERS.md, "Public pages"): no session is needed, it reads and stores nothing.
 // Every port is taken as opened by the piston crown; a port that never opens has null angles and a note.
 export async function POST(request: Request) {
   const parsed = await parseJsonBody(request, portEventsSchema);

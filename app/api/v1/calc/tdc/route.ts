@@ -2,7 +2,7 @@ import { parseJsonBody } from '@/app/lib/api';
 import { tdcFromStops } from '@/lib/engine/tdc-from-stops';
 import { tdcSchema } from '@/lib/engine/tdc-schema';
 
-// Public calculator (PRODUCT.md §4): no session is needed, it reads and stores nothing.
+// Public calculator (DEVELOPERS.md, "Public pages"): no session is needed, it reads and stores nothing.
 export async function POST(request: Request) {
   const parsed = await parseJsonBody(request, tdcSchema);
   if (!parsed.ok) return parsed.response;

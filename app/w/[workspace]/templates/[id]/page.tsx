@@ -2,9 +2,11 @@ import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
+import { formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
-import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
+import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue } from '@/components/templates/field-labels';
 import { PhotoUpload } from '@/components/templates/photo-upload';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
@@ -26,7 +28,7 @@ export default async function TemplatePage({ params }: Props) {
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
-  const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
+  const [photos, revisions, dateFormat] = await Promise.all([listPhotos(template.id), listRevisions(template.id), requestDateFormat()]);
   const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
 
@@ -44,7 +46,7 @@ export default async function TemplatePage({ params }: Props) {
           </h1>
           <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
           <p className="text-xs text-steel-500">
-            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatWhen(template.updatedAt)}
+            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
           </p>
         </div>
         {canEdit ? (
@@ -144,7 +146,7 @@ export default async function TemplatePage({ params }: Props) {
         <h2 id="history-heading" className="text-lg font-semibold">
           History
         </h2>
-        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} />
+        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} dateFormat={dateFormat} />
       </section>
     </article>
   );

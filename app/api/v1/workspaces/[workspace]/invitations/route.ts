@@ -6,6 +6,7 @@ import { serviceResponse } from '@/app/lib/service-response';
 import { invite } from '@/app/lib/workspace-service';
 import { pendingInvitations } from '@/db/invitations';
 import { inviteSchema } from '@/lib/account-forms';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 type Context = { params: Promise<{ workspace: string }> };
 
@@ -23,6 +24,6 @@ export async function POST(request: Request, { params }: Context) {
     const access = await requireAction((await params).workspace, 'invitations.manage');
     const parsed = await parseJsonBody(request, inviteSchema);
     if (!parsed.ok) return parsed.response;
-    return serviceResponse(await invite(access, parsed.data, appOrigin(request)), 201);
+    return serviceResponse(await invite(access, parsed.data, appOrigin(request), dateFormatOf(request)), 201);
   });
 }

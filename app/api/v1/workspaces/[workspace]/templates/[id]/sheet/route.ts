@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { jsonError } from '@/app/lib/api';
+import { dateFormatOf } from '@/app/lib/date-format';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
 import { availableSheetKinds, sheetNeeds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
@@ -36,6 +37,6 @@ export async function GET(request: Request, { params }: TemplateParams): Promise
     const sheet = sheetRequestSchema.safeParse({ ...input, format: query.data.format });
     if (!sheet.success) return jsonError(400, 'The template’s figures do not make a valid sheet', toFieldIssues(sheet.error));
 
-    return sheetDownloadResponse(sheet.data);
+    return sheetDownloadResponse(sheet.data, dateFormatOf(request));
   });
 }
