@@ -14,6 +14,8 @@ export type WriteOptions = {
   accepts?: BodyKind[];
   /** The most bytes of body read before answering 413 (default: 64 KiB). */
   maxBytes?: number;
+  /** The 413 answer in the route's own words (default: "The request body is larger than …"). */
+  tooLarge?: () => Response;
 };
 
 const MEDIA_TYPES: Record<Exclude<BodyKind, 'none'>, string[]> = {
@@ -46,21 +48,22 @@ export async function guarded(
   const refusal = crossOriginRefusal(request) ?? mediaTypeRefusal(request, options?.accepts ?? ['none', 'json']);
   if (refusal) return refusal;
   const maxBytes = options?.maxBytes ?? MAX_JSON_BODY_BYTES;
-  if (Number(request.headers.get('content-length') ?? '0') > maxBytes) return bodyTooLarge(maxBytes);
+  const tooLarge = options?.tooLarge ?? (() => bodyTooLarge(maxBytes));
+  if (Number(request.headers.get('content-length') ?? '0') > maxBytes) return tooLarge();
   const limited = bodyLimitedRequest(request, maxBytes);
-  const response = await answerErrors(() => body!(limited.request), () => limited.exceeded());
-  return limited.exceeded() && response.status !== 413 ? bodyTooLarge(maxBytes) : response;
+  const response = await answerErrors(() => body!(limited.request), (err) => (limited.exceeded() || err instanceof BodyTooLargeError ? tooLarge() : null));
+  return limited.exceeded() && response.status !== 413 ? tooLarge() : response;
 }
 
-async function answerErrors(body: () => Promise<Response>, bodyWasCut: () => boolean = () => false): Promise<Response> {
+async function answerErrors(body: () => Promise<Response>, tooLarge: (err: unknown) => Response | null = () => null): Promise<Response> {
   try {
     return await body();
   } catch (err) {
     const access = accessErrorResponse(err);
     if (access) return access;
-    if (err instanceof BodyTooLargeError) return bodyTooLarge(err.maxBytes);
     // formData() and json() wrap the stream's error in their own; the limiter knows the cause.
-    if (bodyWasCut()) return jsonError(413, 'The request body is too large');
+    const cutOff = tooLarge(err);
+    if (cutOff) return cutOff;
     console.error(err);
     return jsonError(500, SERVER_ERROR_MESSAGE);
   }

@@ -20,6 +20,8 @@ export type RouteCall = {
   /** Values of the route's dynamic segments; `workspace` defaults to the world's shop. */
   params?: Record<string, string>;
   body?: unknown;
+  /** A body that is not JSON, sent as is with its Content-Type. */
+  raw?: { type: string; body: string };
   /** Appended to the URL, e.g. '?q=50'. */
   search?: string;
 };

@@ -10,8 +10,8 @@ export const RESET_REQUESTED_MESSAGE =
   'If an account uses this address, we have sent it a link to choose a new password. It is valid for 1 hour.';
 
 /** POST { email }: answers the same whether or not the address has an account; rate-limited. */
-export async function POST(request: Request) {
-  return guarded(async () => {
+export async function POST(incoming: Request) {
+  return guarded(incoming, {}, async (request) => {
     const parsed = await parseJsonBody(request, emailOnlySchema);
     if (!parsed.ok) return parsed.response;
     const email = normalizeEmail(parsed.data.email);

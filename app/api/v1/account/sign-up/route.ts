@@ -7,8 +7,8 @@ import { signUpSchema } from '@/lib/account-forms';
 import { guarded } from '@/app/lib/route-handler';
 
 /** POST: create an account (open to anyone, 20 an hour per client address) with its personal workspace. */
-export async function POST(request: Request) {
-  return guarded(async () => {
+export async function POST(incoming: Request) {
+  return guarded(incoming, {}, async (request) => {
     const parsed = await parseJsonBody(request, signUpSchema);
     if (!parsed.ok) return parsed.response;
     try {

@@ -14,6 +14,10 @@ const MAX_IMPORT_BYTES = 16 * 1024 * 1024;
 /** Room for the multipart boundaries and the choice fields around the file. */
 const MULTIPART_OVERHEAD_BYTES = 64 * 1024;
 
+function tooLarge(): Response {
+  return jsonError(413, 'The CSV is larger than 16 MiB', [{ path: 'file', message: 'At most 16 MiB per import' }]);
+}
+
 type Upload = { bytes: Uint8Array; charset: string | null; fields: URLSearchParams };
 
 function charsetOf(contentType: string): string | null {
@@ -29,7 +33,7 @@ async function readUpload(request: Request): Promise<Upload | Response> {
   const form = await request.formData();
   const file = form.get('file');
   if (!(file instanceof Blob)) return jsonError(400, 'No CSV file in the upload', [{ path: 'file', message: 'Add a "file" field with the CSV' }]);
-  if (file.size > MAX_IMPORT_BYTES) return jsonError(413, 'The CSV is larger than 16 MiB', [{ path: 'file', message: 'At most 16 MiB per import' }]);
+  if (file.size > MAX_IMPORT_BYTES) return tooLarge();
   for (const name of ['preview', 'onMatch', 'matchVersions']) {
     const value = form.get(name);
     if (typeof value === 'string' && value !== '') fields.set(name, value);
@@ -98,7 +102,7 @@ const doneBody = (counts: ImportCounts) => ({ imported: counts.created + counts.
  * With an `Idempotency-Key` header a repeated request gets the first answer again.
  */
 export async function POST(incoming: Request, { params }: WorkspaceParams): Promise<Response> {
-  return guarded(incoming, { accepts: ['csv', 'multipart'], maxBytes: MAX_IMPORT_BYTES + MULTIPART_OVERHEAD_BYTES }, async (request) => {
+  return guarded(incoming, { accepts: ['csv', 'multipart'], maxBytes: MAX_IMPORT_BYTES + MULTIPART_OVERHEAD_BYTES, tooLarge }, async (request) => {
     const { workspace } = await params;
     const access = await requireAction(workspace, 'template.import');
     const key = idempotencyKey(request);
