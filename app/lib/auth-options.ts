@@ -3,7 +3,7 @@ import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
 import { authSecret } from './auth-secret';
 import { signInWithPassword } from './password-sign-in';
-import { clientAddress } from './rate-limit';
+import { clientAddress } from './client-address';
 
 // next-auth 4 takes its origin from NEXTAUTH_URL, or from the Host header when this is set:
 // the app then works on whatever host and port it is served from without configuration.

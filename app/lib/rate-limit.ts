@@ -57,12 +57,3 @@ export async function forgetKey(name: LimitName, key: string): Promise<void> {
 export function resetAllLimits(): void {
   globalForLimits.rimscaleLimiters = undefined;
 }
-
-/**
- * The client address as the nearest proxy reports it. Without a trusted proxy the header
- * can be forged, which is why every limit also applies per account.
- */
-export function clientAddress(headers: Headers | Record<string, string | string[] | undefined>): string {
-  const get = (name: string) => (headers instanceof Headers ? headers.get(name) : [headers[name]].flat()[0]) ?? '';
-  return get('x-forwarded-for').split(',')[0]?.trim() || get('x-real-ip').trim() || 'local';
-}

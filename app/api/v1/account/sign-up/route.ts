@@ -1,7 +1,8 @@
 import { signUp } from '@/app/lib/account-service';
 import { jsonError, parseJsonBody } from '@/app/lib/api';
 import { appOrigin } from '@/app/lib/app-origin';
-import { clientAddress, consumePoint, RateLimitedError } from '@/app/lib/rate-limit';
+import { clientAddress } from '@/app/lib/client-address';
+import { consumePoint, RateLimitedError } from '@/app/lib/rate-limit';
 import { serviceResponse } from '@/app/lib/service-response';
 import { signUpSchema } from '@/lib/account-forms';
 import { guarded } from '@/app/lib/route-handler';
