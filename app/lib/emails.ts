@@ -1,13 +1,15 @@
 import 'server-only';
+import { mailName } from '@/lib/text/mail-name';
 import type { OutgoingMail } from './mailer';
 
 /** The words of each e-mail the app sends. Links carry the one-time token, nothing else secret. */
 
 export function verificationMail(to: string, name: string, link: string): OutgoingMail {
+  const greeting = mailName(name);
   return {
     to,
     subject: 'Confirm your e-mail address for Rimscale',
-    text: `Hello ${name},\n\nOpen this link to confirm your address (valid for 24 hours, once):\n\n${link}\n\nIf you did not sign up, ignore this message.\n`,
+    text: `${greeting ? `Hello ${greeting}` : 'Hello'},\n\nOpen this link to confirm your address (valid for 24 hours, once):\n\n${link}\n\nIf you did not sign up, ignore this message.\n`,
   };
 }
 
@@ -19,7 +21,9 @@ export function resetMail(to: string, link: string): OutgoingMail {
   };
 }
 
-export function invitationMail(to: string, inviter: string, workspace: string, role: string, link: string): OutgoingMail {
+export function invitationMail(to: string, inviterName: string, workspaceName: string, role: string, link: string): OutgoingMail {
+  const inviter = mailName(inviterName) ?? 'A Rimscale user';
+  const workspace = mailName(workspaceName) ?? 'a shop';
   return {
     to,
     subject: `${inviter} invites you to ${workspace} on Rimscale`,

@@ -93,11 +93,20 @@ describe('sign-in', () => {
     expect(JSON.parse(rows[0].detail)).toEqual({ address: '198.51.100.4' });
   });
 
-  it('locks an account after 5 failed attempts, even with the right password, from any address', async () => {
+  it('locks an account for one client address after 5 failed attempts, not for the owner elsewhere', async () => {
+    // Issue 11, hole 7: five wrong passwords from an attacker's address (RFC 5737 documentation ranges).
     const { email } = world.users.technician;
-    for (let i = 0; i < 5; i++) {
-      expect(await signInWithPassword({ email, password: 'wrong password' }, `192.0.2.${i}`)).toBeNull();
-    }
+    for (let i = 0; i < 5; i++) expect(await signInWithPassword({ email, password: 'wrong password' }, '203.0.113.66')).toBeNull();
+    // The sixth, from the same address, is refused even with the right password…
+    await expect(signInWithPassword({ email, password: WORLD_PASSWORD }, '203.0.113.66')).rejects.toThrow(RATE_LIMITED_CODE);
+    // …and a sixth wrong one from a second address does not lock the owner at the first (their own) address out.
+    expect(await signInWithPassword({ email, password: 'wrong password' }, '198.51.100.77')).toBeNull();
+    expect(await signInWithPassword({ email, password: WORLD_PASSWORD }, '192.0.2.10')).not.toBeNull();
+  });
+
+  it('still caps one account at 100 failures an hour spread over many addresses', async () => {
+    const { email } = world.users.technician;
+    for (let i = 0; i < 100; i++) await signInWithPassword({ email, password: 'wrong' }, `10.0.${Math.floor(i / 4)}.${i % 4}`);
     await expect(signInWithPassword({ email, password: WORLD_PASSWORD }, '192.0.2.99')).rejects.toThrow(RATE_LIMITED_CODE);
     // Another account is not affected.
     expect(await signInWithPassword({ email: world.users.viewer.email, password: WORLD_PASSWORD }, '192.0.2.99')).not.toBeNull();

@@ -19,7 +19,7 @@ export async function POST(incoming: Request) {
     try {
       await consumePoint([
         ['resetPerAddress', clientAddress(request.headers)],
-        ['resetPerAccount', email],
+        ['resetPerTarget', email],
       ]);
     } catch (err) {
       if (err instanceof RateLimitedError) {

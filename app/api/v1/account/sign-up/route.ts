@@ -12,13 +12,14 @@ export async function POST(incoming: Request) {
   return guarded(incoming, {}, async (request) => {
     const parsed = await parseJsonBody(request, signUpSchema);
     if (!parsed.ok) return parsed.response;
+    const client = clientAddress(request.headers);
     try {
-      await consumePoint([['signUpPerAddress', clientAddress(request.headers)]]);
+      await consumePoint([['signUpPerAddress', client]]);
     } catch (err) {
       if (err instanceof RateLimitedError) return jsonError(429, err.message);
       throw err;
     }
-    const result = await signUp(parsed.data, appOrigin(request));
+    const result = await signUp(parsed.data, appOrigin(request), client);
     return serviceResponse(result, 201);
   });
 }
