@@ -2,11 +2,15 @@ import 'server-only';
 import { jsonError } from './api';
 
 /**
- * The origins the app's own pages are served from: the request's own (the Host the browser
- * addressed) and APP_URL's when set (behind a proxy the request may arrive on another host).
+ * The origins the app's own pages are served from: the one the browser addressed (its Host
+ * header, which a page of another origin cannot set; Next's request.url may carry the
+ * server's bound name instead) and APP_URL's when set (behind a TLS proxy).
  */
 function ownOrigins(request: Request): Set<string> {
-  const origins = new Set([new URL(request.url).origin]);
+  const url = new URL(request.url);
+  const origins = new Set([url.origin]);
+  const host = request.headers.get('host');
+  if (host) origins.add(`${url.protocol}//${host}`);
   const configured = process.env.APP_URL || process.env.NEXTAUTH_URL;
   if (configured) origins.add(new URL(configured).origin);
   return origins;

@@ -69,3 +69,15 @@ describe('guarded for a state-changing request', () => {
     expect(called).toBe(false);
   });
 });
+
+describe('guarded’s own-origin check behind a bound address', () => {
+  it('takes the Host the browser addressed as the app’s origin', async () => {
+    // Next may put the bound name (0.0.0.0) in request.url; the browser's Origin then matches only its Host.
+    const request = new Request('http://0.0.0.0:3000/api/x', {
+      method: 'POST',
+      headers: { host: '192.0.2.2:3000', origin: 'http://192.0.2.2:3000', 'content-type': 'application/json' },
+      body: '{}',
+    });
+    expect((await guarded(request, {}, async () => new Response(null, { status: 204 }))).status).toBe(204);
+  });
+});
