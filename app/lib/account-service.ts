@@ -115,3 +115,17 @@ export async function resetPassword(token: string, password: string): Promise<Se
   await recordAudit({ action: 'password-reset', actorUserId: used.userId });
   return { ok: true, value: { userId: used.userId } };
 }
+
+/**
+ * Ends every session of the user: sessions carry the version they were signed in at, and
+ * app/lib/session.ts reads one that no longer matches as signed out, so a saved cookie stops
+ * working at once. With `fromVersion` (a sign-out's own token) only a current session raises
+ * it, so replaying an already dead cookie cannot end newer sessions.
+ */
+export async function endSessions(userId: number, fromVersion?: number): Promise<boolean> {
+  const query = db()(TABLES.users).where({ id: userId });
+  if (fromVersion !== undefined) query.andWhere({ session_version: fromVersion });
+  const changed = await query.update({ session_version: db().raw('session_version + 1') });
+  if (changed > 0) await recordAudit({ action: 'signed-out', actorUserId: userId, detail: { everywhere: fromVersion === undefined ? 1 : 0 } });
+  return changed > 0;
+}

@@ -24,7 +24,7 @@ const LIMITS = {
   // Address confirmations: the sign-up's own mail counts against the target, then resends.
   verifyMailPerTarget: { points: 3, duration: HOUR },
   verifyMailPerAccount: { points: 3, duration: HOUR },
-  verifyMailPerAddress: { points: 10, duration: HOUR },
+  verifyMailPerAddress: { points: 20, duration: HOUR },
   // Invitations: per workspace per day, and per invited address per day across workspaces.
   invitePerWorkspace: { points: 20, duration: DAY },
   invitePerTarget: { points: 3, duration: DAY },

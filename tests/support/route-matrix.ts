@@ -85,6 +85,11 @@ export const ROUTE_MATRIX: RouteCase[] = [
     expected: { signedOut: 401, viewer: 202, technician: 202, owner: 202, outsider: 202 },
   },
   {
+    file: `${V1}/account/sign-out-everywhere/route.ts`,
+    method: 'POST',
+    expected: { signedOut: 401, viewer: 200, technician: 200, owner: 200, outsider: 200 },
+  },
+  {
     file: `${V1}/account/password-reset/route.ts`,
     method: 'POST',
     call: (world, actor) => ({ body: { email: userOf(world, actor).email } }),
