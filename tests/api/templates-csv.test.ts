@@ -265,7 +265,7 @@ describe('CSV re-import of templates that exist', () => {
     const response = await api.importCsv(ws, csv, { query: '?preview=1' });
     expect(response.status).toBe(200);
     const body = await response.json();
-    expect(body).toMatchObject({ preview: true, rows: 3, newRows: 2, matchingRows: 1, matches: [{ row: 2, id, version: 1 }] });
+    expect(body).toMatchObject({ preview: true, separatedBy: 'comma', rows: 3, newRows: 2, matchingRows: 1, matches: [{ row: 2, id, version: 1 }] });
     expect(body.message).toBe('3 rows checked: 2 new, 1 row matches an existing template by name. Skip those rows or update the templates from them.');
     expect(await templateCount()).toBe(1);
   });

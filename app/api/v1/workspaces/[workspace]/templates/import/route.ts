@@ -6,6 +6,7 @@ import { guarded } from '@/app/lib/route-handler';
 import { findImportReceipt, saveImportReceipt, type ImportReceipt } from '@/db/import-receipts';
 import { importTemplates, planImport, type ImportCounts, type OnMatch } from '@/db/templates/import-templates';
 import { decodeCsvBytes } from '@/lib/csv/decode-csv-bytes';
+import { DELIMITER_NAMES } from '@/lib/csv/detect-delimiter';
 import { importChoiceNeededMessage, importDoneMessage, importPreviewMessage, importProblemsMessage } from '@/lib/templates/import-messages';
 import { parseTemplatesCsv, type CsvProblem } from '@/lib/templates/template-csv';
 import { type WorkspaceParams } from '../_shared/template-params';
@@ -119,7 +120,13 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
 
     const plan = await planImport(access.workspace.id, parsed.templates);
     const planBody = { rows: plan.rows, newRows: plan.newRows, matchingRows: plan.matches.length, matches: plan.matches.slice(0, 500) };
-    if (choices.preview) return Response.json({ preview: true, ...planBody, message: importPreviewMessage(plan.rows, plan.newRows, plan.matches.length) });
+    if (choices.preview)
+      return Response.json({
+        preview: true,
+        separatedBy: DELIMITER_NAMES[parsed.delimiter],
+        ...planBody,
+        message: importPreviewMessage(plan.rows, plan.newRows, plan.matches.length),
+      });
 
     const bodySha256 = createHash('sha256')
       .update(upload.bytes)
