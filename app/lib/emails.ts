@@ -1,14 +1,16 @@
 import 'server-only';
 import { formatDateTime, type DateFormat } from '@/lib/format/date-format';
+import { mailName } from '@/lib/text/mail-name';
 import type { OutgoingMail } from './mailer';
 
 /** The words of each e-mail the app sends. Links carry the one-time token, nothing else secret. */
 
 export function verificationMail(to: string, name: string, link: string): OutgoingMail {
+  const greeting = mailName(name);
   return {
     to,
     subject: 'Confirm your e-mail address for Rimscale',
-    text: `Hello ${name},\n\nOpen this link to confirm your address (valid for 24 hours, once):\n\n${link}\n\nIf you did not sign up, ignore this message.\n`,
+    text: `${greeting ? `Hello ${greeting}` : 'Hello'},\n\nOpen this link to confirm your address (valid for 24 hours, once):\n\n${link}\n\nIf you did not sign up, ignore this message.\n`,
   };
 }
 
@@ -26,7 +28,9 @@ export function invitationMail(
   invitation: { inviter: string; workspace: string; role: string; link: string; expiresAt: string },
   dateFormat: DateFormat,
 ): OutgoingMail {
-  const { inviter, workspace, role, link, expiresAt } = invitation;
+  const { role, link, expiresAt } = invitation;
+  const inviter = mailName(invitation.inviter) ?? 'A Rimscale user';
+  const workspace = mailName(invitation.workspace) ?? 'a shop';
   return {
     to,
     subject: `${inviter} invites you to ${workspace} on Rimscale`,

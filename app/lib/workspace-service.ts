@@ -1,4 +1,5 @@
 import 'server-only';
+import { consumePoint, RateLimitedError } from './rate-limit';
 import { recordAudit } from '@/db/audit-log';
 import { countHolders, createWorkspace, findRole, findUserById, membersOf, slugFrom } from '@/db/accounts';
 import { acceptInvitation, createInvitation, lookUpInvitation, revokeInvitation } from '@/db/invitations';
@@ -37,6 +38,15 @@ export async function invite(
   const members = await membersOf(access.workspace.id);
   if (members.some((m) => m.email === input.email.trim().toLowerCase())) {
     return refuse(409, `${input.email} is already a member of ${access.workspace.name}`);
+  }
+  try {
+    await consumePoint([
+      ['invitePerWorkspace', String(access.workspace.id)],
+      ['invitePerTarget', input.email.trim().toLowerCase()],
+    ]);
+  } catch (err) {
+    if (err instanceof RateLimitedError) return refuse(429, `${err.message} (invitations are limited per shop per day and per invited address)`);
+    throw err;
   }
   const { id, token, expiresAt } = await createInvitation({ workspaceId: access.workspace.id, email: input.email, role: input.role, invitedBy: access.user.id });
   try {

@@ -19,8 +19,8 @@ export async function GET(_request: Request, { params }: Context) {
 }
 
 /** POST { email, role }: invitations.manage: invite someone by e-mail; the link is single-use and expires in 7 days. */
-export async function POST(request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async (request) => {
     const access = await requireAction((await params).workspace, 'invitations.manage');
     const parsed = await parseJsonBody(request, inviteSchema);
     if (!parsed.ok) return parsed.response;

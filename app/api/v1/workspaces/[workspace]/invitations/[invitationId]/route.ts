@@ -7,8 +7,8 @@ import { parsePathId } from '@/lib/path-id';
 type Context = { params: Promise<{ workspace: string; invitationId: string }> };
 
 /** DELETE: invitations.manage: withdraw a pending invitation; its link stops working. */
-export async function DELETE(_request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function DELETE(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async () => {
     const { workspace, invitationId } = await params;
     const access = await requireAction(workspace, 'invitations.manage');
     const id = parsePathId(invitationId);

@@ -11,8 +11,8 @@ type Context = { params: Promise<{ workspace: string; userId: string }> };
 const NO_MEMBER = 'No such member in this workspace';
 
 /** PATCH { role }: members.manage changes a member's role; the last owner cannot be demoted. */
-export async function PATCH(request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function PATCH(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async (request) => {
     const { workspace, userId } = await params;
     const access = await requireAction(workspace, 'members.manage');
     const target = parsePathId(userId);
@@ -24,8 +24,8 @@ export async function PATCH(request: Request, { params }: Context) {
 }
 
 /** DELETE: members.manage removes a member; the last owner cannot be removed. */
-export async function DELETE(_request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function DELETE(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async () => {
     const { workspace, userId } = await params;
     const access = await requireAction(workspace, 'members.manage');
     const target = parsePathId(userId);

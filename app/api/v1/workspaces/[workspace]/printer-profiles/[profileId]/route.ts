@@ -7,8 +7,8 @@ import { parsePathId } from '@/lib/path-id';
 type Context = { params: Promise<{ workspace: string; profileId: string }> };
 
 /** DELETE: members who may edit printer profiles remove a profile of their workspace. */
-export async function DELETE(_request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function DELETE(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async () => {
     const { workspace, profileId } = await params;
     const access = await requireAction(workspace, 'printer-profile.edit');
     const id = parsePathId(profileId);
