@@ -10,4 +10,7 @@ export const TABLES = {
   templates: 'templates',
   templatePhotos: 'template_photos',
   templateRevisions: 'template_revisions',
+  builds: 'builds',
+  buildRevisions: 'build_revisions',
+  buildSends: 'build_sends',
 } as const;

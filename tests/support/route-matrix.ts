@@ -12,6 +12,7 @@ import { HOLDING_ROLE, type Action } from '@/lib/access-policy';
 import type { AccessWorld } from './access-world';
 import { guardedBy, type Actor } from './policy-expectations';
 import { TEMPLATE_ROUTE_CASES } from '../api/templates-route-cases';
+import { BUILD_ROUTE_CASES } from '../api/builds-route-cases';
 
 export { ACTORS, type Actor } from './policy-expectations';
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -183,6 +184,9 @@ export const ROUTE_MATRIX: RouteCase[] = [
 
   // Template library (issue 6).
   ...TEMPLATE_ROUTE_CASES,
+
+  // Build records (issue 9).
+  ...BUILD_ROUTE_CASES,
 ];
 
 /** Server actions that check the session; empty while every write goes through a route handler. */
