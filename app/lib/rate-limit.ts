@@ -9,6 +9,8 @@ const LIMITS = {
   resetPerAddress: { points: 10, duration: 60 * 60 },
   // Sign-up says when an address already has an account, so it is limited like a guess.
   signUpPerAddress: { points: 20, duration: 60 * 60 },
+  // A shop mails customers their copies; more than this an hour looks like a loop or abuse of the mailer.
+  buildSendPerWorkspace: { points: 30, duration: 60 * 60 },
 } as const;
 
 export type LimitName = keyof typeof LIMITS;

@@ -20,3 +20,7 @@ export async function sendsOf(knex: Knex | Knex.Transaction, buildIds: number[])
   return byBuild;
 }
 
+
+export async function insertSend(knex: Knex | Knex.Transaction, send: { buildId: number; to: string; sentBy: number; sentAt: string }): Promise<void> {
+  await knex(TABLES.buildSends).insert({ build_id: send.buildId, to_email: send.to, sent_by: send.sentBy, sent_at: send.sentAt });
+}

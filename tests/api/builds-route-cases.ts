@@ -43,4 +43,7 @@ export const BUILD_ROUTE_CASES: RouteCase[] = [
   { file: `${B}/[id]/route.ts`, method: 'PATCH', call: withBuild({ body: { version: 1, notes: 'edited' } }), ...guardedBy('build.edit', 200) },
   { file: `${B}/[id]/route.ts`, method: 'DELETE', call: withBuild(), ...guardedBy('build.delete', 204) },
   { file: `${B}/[id]/revisions/route.ts`, method: 'GET', call: withBuild(), ...guardedBy('build.read', 200) },
+  { file: `${B}/[id]/record/route.ts`, method: 'GET', call: withBuild({ search: '?format=pdf' }), ...guardedBy('build.read', 200) },
+  // Without a customer e-mail the send stops past the role check with 400, so the matrix mails nobody.
+  { file: `${B}/[id]/send/route.ts`, method: 'POST', call: withBuild({}, { customer_email: '' }), ...guardedBy('build.send', 400) },
 ];

@@ -1,6 +1,8 @@
 import * as list from '@/app/api/v1/workspaces/[workspace]/builds/route';
 import * as one from '@/app/api/v1/workspaces/[workspace]/builds/[id]/route';
 import * as revisions from '@/app/api/v1/workspaces/[workspace]/builds/[id]/revisions/route';
+import * as record from '@/app/api/v1/workspaces/[workspace]/builds/[id]/record/route';
+import * as send from '@/app/api/v1/workspaces/[workspace]/builds/[id]/send/route';
 
 /** Calls the build record route handlers directly, as Next would, with JSON helpers. */
 const BASE = 'http://test.local/api/v1/workspaces';
@@ -23,6 +25,8 @@ export const buildApi = {
   patch: (ws: string, id: number | string, body: unknown) => one.PATCH(json('PATCH', `${BASE}/${ws}/builds/${id}`, body), idParams(ws, id)),
   delete: (ws: string, id: number | string) => one.DELETE(json('DELETE', `${BASE}/${ws}/builds/${id}`), idParams(ws, id)),
   revisions: (ws: string, id: number | string) => revisions.GET(json('GET', `${BASE}/${ws}/builds/${id}/revisions`), idParams(ws, id)),
+  record: (ws: string, id: number | string, query = '?format=pdf') => record.GET(json('GET', `${BASE}/${ws}/builds/${id}/record${query}`), idParams(ws, id)),
+  send: (ws: string, id: number | string) => send.POST(json('POST', `${BASE}/${ws}/builds/${id}/send`), idParams(ws, id)),
 };
 
 /**
