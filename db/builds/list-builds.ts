@@ -1,7 +1,7 @@
 import 'server-only';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
-import type { BuildPage } from '@/lib/builds/build';
+import type { Build, BuildPage } from '@/lib/builds/build';
 import { BUILD_FIELD_LIST, buildFields } from '@/lib/builds/build-fields';
 import type { BuildListQuery } from '@/lib/builds/list-query';
 import { BUILD_COLUMNS, rowToBuild, type BuildRow } from './build-row';
@@ -51,3 +51,11 @@ export async function listBuilds(workspaceId: number, query: BuildListQuery): Pr
   return { items, total: Number(counted?.total ?? 0), page: query.page, pageSize: query.pageSize };
 }
 
+
+/** Every record of a workspace with its results (for CSV export), oldest first. */
+export async function allBuilds(workspaceId: number): Promise<Build[]> {
+  const knex = db();
+  const rows: BuildRow[] = await selectBuilds(knex, workspaceId).orderBy('b.id');
+  const sends = await sendsOf(knex, rows.map((r) => r.id));
+  return rows.map((row) => rowToBuild(row, sends.get(row.id) ?? []));
+}

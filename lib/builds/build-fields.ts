@@ -29,10 +29,12 @@ const portNameSchema = z
   .min(1, 'Port name must not be empty (1–24 characters)')
   .max(24, 'Port name must be at most 24 characters');
 
+export const PORT_HEIGHT_RANGE_MM = { min: 0, max: 400 } as const;
+
 /** A measured port: its top edge below the cylinder top, as the port calculator takes it. */
-export const measuredPortSchema = z.object({
+const measuredPortSchema = z.object({
   name: portNameSchema,
-  heightMm: rangedNumber({ label: 'Port edge height', min: 0, max: 400, unit: 'mm' }),
+  heightMm: rangedNumber({ label: 'Port edge height', ...PORT_HEIGHT_RANGE_MM, unit: 'mm' }),
 });
 
 const freeMeasurementSchema = z.object({

@@ -99,6 +99,30 @@ export const buildVersionSchema = z
   .int('Version must be a whole number from 1')
   .min(1, 'Version must be a whole number from 1');
 
+type LooseStops = { readingADeg?: unknown; readingBDeg?: unknown } | null | undefined;
+
+/** A form's stop readings left blank mean "not measured" (null), not two bad numbers. */
+function blankStopsAsNull(value: unknown): unknown {
+  const stops = value as LooseStops;
+  const blank = (v: unknown) => v === null || v === undefined || v === '';
+  return stops && blank(stops.readingADeg) && blank(stops.readingBDeg) ? null : value;
+}
+
+/** A form's port rows whose height was left blank are dropped: the template names them, not every one gets measured. */
+function withoutBlankPorts(value: unknown): unknown {
+  return Array.isArray(value) ? value.filter((p: { heightMm?: unknown }) => p?.heightMm !== null && p?.heightMm !== '') : value;
+}
+
+/** The form edits a whole record and carries the version it was loaded at (absent when creating). */
+export const buildFormSchema = withCrossFieldRules(
+  z.object({
+    ...shapeOf(buildFields),
+    stops: z.preprocess(blankStopsAsNull, buildFields.stops.schema),
+    ports: z.preprocess(withoutBlankPorts, buildFields.ports.schema),
+    version: buildVersionSchema.optional(),
+  }),
+);
+
 /** PATCH body: the version the edit started from plus any fields to change (`null` clears a measurement). */
 export const buildPatchSchema = z
   .object({ version: buildVersionSchema, ...shapeOf(buildFields) })

@@ -39,6 +39,7 @@ export const withBuild =
 export const BUILD_ROUTE_CASES: RouteCase[] = [
   { file: `${B}/route.ts`, method: 'GET', ...guardedBy('build.read', 200) },
   { file: `${B}/route.ts`, method: 'POST', call: () => ({ body: { customerName: 'Matrix new' } }), ...guardedBy('build.edit', 201) },
+  { file: `${B}/export/route.ts`, method: 'GET', ...guardedBy('build.read', 200) },
   { file: `${B}/[id]/route.ts`, method: 'GET', call: withBuild(), ...guardedBy('build.read', 200) },
   { file: `${B}/[id]/route.ts`, method: 'PATCH', call: withBuild({ body: { version: 1, notes: 'edited' } }), ...guardedBy('build.edit', 200) },
   { file: `${B}/[id]/route.ts`, method: 'DELETE', call: withBuild(), ...guardedBy('build.delete', 204) },

@@ -43,6 +43,9 @@ export default async function WorkspaceHomePage({ params }: Props) {
           <Link href={`/w/${workspace.slug}/templates`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
             Engine templates
           </Link>
+          <Link href={`/w/${workspace.slug}/builds`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
+            Build records
+          </Link>
           <Link href="/printer-check" className="font-medium text-gauge-700 underline dark:text-gauge-300">
             Printer check
           </Link>

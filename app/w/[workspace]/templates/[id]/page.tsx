@@ -12,6 +12,8 @@ import { TemplateHistory } from '@/components/templates/template-history';
 import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos } from '@/db/templates/photos';
 import { listRevisions } from '@/db/templates/revisions';
+import { TemplateBuilds } from '@/components/builds/template-builds';
+import { listBuilds } from '@/db/builds/list-builds';
 import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
@@ -39,7 +41,13 @@ export default async function TemplatePage({ params }: Props) {
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
-  const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
+  const [photos, revisions, builds] = await Promise.all([
+    listPhotos(template.id),
+    listRevisions(template.id),
+    can(access.role, 'build.read')
+      ? listBuilds(access.workspace.id, { q: '', status: 'all', template: template.id, sort: 'updatedAt', dir: 'desc', page: 1, pageSize: 20 })
+      : Promise.resolve(null),
+  ]);
   const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
 
@@ -94,6 +102,8 @@ export default async function TemplatePage({ params }: Props) {
           Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
         </p>
       </section>
+
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">
