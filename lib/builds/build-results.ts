@@ -1,3 +1,4 @@
+import { normalizeDeg } from '@/lib/angle';
 import { btdcDegFromBtdcMm, btdcMmFromBtdcDeg } from '@/lib/engine/btdc-timing';
 import { offsetCrankGeometryProblem } from '@/lib/engine/offset-slider-crank';
 import { portEvents, type PortStatus } from '@/lib/engine/port-events';
@@ -74,7 +75,8 @@ const sameName = (a: string, b: string) => a.trim().toLowerCase() === b.trim().t
 function compareWithTarget(port: BuildPortResult, b: BuildFields, toleranceDeg: number): BuildPortResult {
   const target = b.portTargets.find((t) => sameName(t.name, port.name));
   if (!target || port.durationDeg === null) return port;
-  const targetDurationDeg = target.closesCrankDeg - target.opensCrankDeg;
+  // A target may wrap past TDC (an inlet opening at 285° and closing at 75° is open 150°).
+  const targetDurationDeg = normalizeDeg(target.closesCrankDeg - target.opensCrankDeg);
   const deviationDeg = port.durationDeg - targetDurationDeg;
   return { ...port, targetDurationDeg, deviationDeg, withinTolerance: Math.abs(deviationDeg) <= toleranceDeg };
 }

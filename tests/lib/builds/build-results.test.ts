@@ -72,6 +72,11 @@ describe('build record results', () => {
     expect(boost?.targetDurationDeg).toBeUndefined();
   });
 
+  it('reads a target that wraps past TDC as the crank turns (285° to 75° is 150°)', () => {
+    const wrapped = buildResults({ ...RECORD, portTargets: [{ name: 'Exhaust', opensCrankDeg: 285, closesCrankDeg: 75 }] });
+    expect(wrapped.ports[0]?.targetDurationDeg).toBe(150);
+  });
+
   it('judges the deviation with the workspace tolerance', () => {
     const { ports } = buildResults(RECORD, 0.5);
     expect(ports[0]?.withinTolerance).toBe(false);
