@@ -5,6 +5,7 @@ import * as createPrinterProfiles from './migrations/20261201000200_create_print
 import * as createTemplates from './migrations/20261201000600_create_templates';
 import * as addSessionVersion from './migrations/20261201001500_add_session_version';
 import * as createBuilds from './migrations/20261203000900_create_builds';
+import * as addDefaultPrinterProfile from './migrations/20261203001000_add_default_printer_profile';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
 
@@ -20,6 +21,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261201000600_create_templates.ts': createTemplates,
   '20261201001500_add_session_version.ts': addSessionVersion,
   '20261203000900_create_builds.ts': createBuilds,
+  '20261203001000_add_default_printer_profile.ts': addDefaultPrinterProfile,
 };
 
 export const staticMigrationSource: Knex.MigrationSource<string> = {

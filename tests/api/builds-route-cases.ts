@@ -2,6 +2,8 @@ import type { AccessWorld } from '@/tests/support/access-world';
 import { guardedBy, type Actor } from '@/tests/support/policy-expectations';
 import type { RouteCase } from '@/tests/support/route-matrix';
 import { TABLES } from '@/db/tables';
+import { insertTemplates } from '@/db/templates/insert-templates';
+import { EMPTY_TEMPLATE } from '@/lib/templates/template-schema';
 
 /** The build records' rows of the authorization matrix (tests/support/route-matrix.ts). */
 
@@ -36,6 +38,17 @@ export const withBuild =
     ...extra,
   });
 
+/** A record built from a template with a rim diameter, so its strip can be printed. */
+async function withBuildFromTemplate(world: AccessWorld, actor: Actor) {
+  const [templateId] = await insertTemplates(world.knex, [{ ...EMPTY_TEMPLATE, name: 'Matrix single', rimDiameterMm: 110 }], {
+    workspaceId: world.shop.id,
+    userId: world.users.owner.id,
+    at: new Date().toISOString(),
+    action: 'create',
+  });
+  return { params: { workspace: workspaceFor(world, actor), id: String(await seedBuild(world, { template_id: templateId, template_version: 1 })) }, search: '?kind=strip&format=svg' };
+}
+
 export const BUILD_ROUTE_CASES: RouteCase[] = [
   { file: `${B}/route.ts`, method: 'GET', ...guardedBy('build.read', 200) },
   { file: `${B}/route.ts`, method: 'POST', call: () => ({ body: { customerName: 'Matrix new' } }), ...guardedBy('build.edit', 201) },
@@ -45,6 +58,7 @@ export const BUILD_ROUTE_CASES: RouteCase[] = [
   { file: `${B}/[id]/route.ts`, method: 'DELETE', call: withBuild(), ...guardedBy('build.delete', 204) },
   { file: `${B}/[id]/revisions/route.ts`, method: 'GET', call: withBuild(), ...guardedBy('build.read', 200) },
   { file: `${B}/[id]/record/route.ts`, method: 'GET', call: withBuild({ search: '?format=pdf' }), ...guardedBy('build.read', 200) },
+  { file: `${B}/[id]/sheet/route.ts`, method: 'GET', call: withBuildFromTemplate, ...guardedBy('sheet.print', 200) },
   // Without a customer e-mail the send stops past the role check with 400, so the matrix mails nobody.
   { file: `${B}/[id]/send/route.ts`, method: 'POST', call: withBuild({}, { customer_email: '' }), ...guardedBy('build.send', 400) },
 ];

@@ -181,6 +181,13 @@ export const ROUTE_MATRIX: RouteCase[] = [
     },
     ...guardedBy('printer-profile.edit', 204),
   },
+  { file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`, method: 'GET', ...guardedBy('printer-profile.read', 200) },
+  {
+    file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`,
+    method: 'PUT',
+    call: () => ({ body: { profileId: null } }),
+    ...guardedBy('printer-profile.set-default', 200),
+  },
 
   // Template library (issue 6).
   ...TEMPLATE_ROUTE_CASES,

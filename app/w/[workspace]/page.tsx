@@ -59,7 +59,7 @@ export default async function WorkspaceHomePage({ params }: Props) {
 
       <div className="space-y-2">
         <h2 className="text-lg font-semibold">Printer profiles</h2>
-        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} />
+        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} canSetDefault={can(role, 'printer-profile.set-default')} />
       </div>
 
       {may.settings || may.invite || may.audit ? (

@@ -8,6 +8,7 @@ import { StatusBadge } from '@/components/builds/status-badge';
 import { ActionButton } from '@/components/templates/template-actions';
 import { findStoredBuild } from '@/db/builds/find-build';
 import { listBuildRevisions } from '@/db/builds/revisions';
+import { defaultProfileOf } from '@/db/printer-profiles';
 import { findTemplate } from '@/db/templates/find-template';
 import { can } from '@/lib/access-policy';
 import { buildFields, type BuildStatus } from '@/lib/builds/build-fields';
@@ -36,9 +37,10 @@ export default async function BuildPage({ params }: Props) {
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();
   const { build } = stored;
-  const [revisions, template] = await Promise.all([
+  const [revisions, template, profile] = await Promise.all([
     listBuildRevisions(build.id),
     build.templateId ? findTemplate(access.workspace.id, build.templateId) : Promise.resolve(null),
+    defaultProfileOf(access.workspace.id),
   ]);
   const api = `/api/v1/workspaces/${slug}/builds/${build.id}`;
   const finalForMe = build.status === 'handed-over' && !can(access.role, 'build.reopen-handed-over');
@@ -210,7 +212,7 @@ export default async function BuildPage({ params }: Props) {
         <h2 id="print-heading" className="text-lg font-semibold">
           Print the sheets for this build
         </h2>
-        <BuildPrintLinks template={template} build={build} />
+        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} />
       </section>
 
       <section aria-labelledby="history-heading" className="space-y-2">

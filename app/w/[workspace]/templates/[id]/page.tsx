@@ -13,6 +13,7 @@ import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos } from '@/db/templates/photos';
 import { listRevisions } from '@/db/templates/revisions';
 import { TemplateBuilds } from '@/components/builds/template-builds';
+import { defaultProfileOf } from '@/db/printer-profiles';
 import { listBuilds } from '@/db/builds/list-builds';
 import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
@@ -41,12 +42,13 @@ export default async function TemplatePage({ params }: Props) {
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
-  const [photos, revisions, builds] = await Promise.all([
+  const [photos, revisions, builds, profile] = await Promise.all([
     listPhotos(template.id),
     listRevisions(template.id),
     can(access.role, 'build.read')
       ? listBuilds(access.workspace.id, { q: '', status: 'all', template: template.id, sort: 'updatedAt', dir: 'desc', page: 1, pageSize: 20 })
       : Promise.resolve(null),
+    defaultProfileOf(access.workspace.id),
   ]);
   const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
@@ -98,6 +100,9 @@ export default async function TemplatePage({ params }: Props) {
           Print from this template
         </h2>
         <PrintLinks template={template} sheetUrl={`${api}/sheet`} />
+        <p className="text-xs text-steel-500">
+          {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
+        </p>
         <p className="text-xs text-steel-500">
           Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
         </p>
