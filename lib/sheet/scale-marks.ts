@@ -132,10 +132,17 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
  * ticks) whose last label is at least `gapDeg` behind it, so labels never print over each
  * other; with every lane taken the label is left off (the mark itself is always drawn).
  */
-export function labelLanes(marks: readonly PlacedMark[], gapDeg: number, laneCount: number): Map<number, number> {
+export function labelLanes(marks: readonly PlacedMark[], gapDeg: number, laneCount: number, blocked: readonly AlongInterval[] = []): Map<number, number> {
   const lanes = new Map<number, number>();
   const lastInLane = Array.from({ length: Math.max(1, laneCount) }, () => -Infinity);
+  // A label reaches gapDeg / 2 either side of its mark; blocked stretches (the rotation arrow) take none.
+  const clear = (along: number) => blocked.every((b) => {
+    const mid = (b.fromAlongDeg + b.toAlongDeg) / 2;
+    const d = Math.abs(((along - mid) % 360 + 540) % 360 - 180);
+    return d >= (b.toAlongDeg - b.fromAlongDeg) / 2 + gapDeg / 2;
+  });
   for (const along of [...new Set(marks.map((m) => m.alongDeg))].sort((a, b) => a - b)) {
+    if (!clear(along)) continue;
     const lane = lastInLane.findIndex((last) => along - last >= gapDeg - 1e-9);
     if (lane < 0) continue;
     lanes.set(along, lane);
