@@ -10,7 +10,7 @@ import { text } from './shapes';
  */
 
 /** The smallest size such text is shrunk to before it is left off, mm (about 2.8 pt). */
-export const MIN_PIECE_TEXT_MM = 1;
+const MIN_PIECE_TEXT_MM = 1;
 
 export type Annulus = { centreMm: [number, number]; innerMm: number; outerMm: number };
 

@@ -19,9 +19,6 @@ import { STROKE_MM, TEXT_MM, textWidthMm } from './sheet-style';
 export const STRIP_OVERLAP_MM = 10;
 export const GLUE_TAIL_MM = 15;
 export const STRIP_LABEL_BAND_MM = 5;
-/** Depth below the strip where fanned labels' leaders run from their marks to the labels (least, most). */
-export const STRIP_FAN_MM = 3;
-export const STRIP_MAX_FAN_MM = 12;
 
 export type StripSegment = {
   letter: string;
