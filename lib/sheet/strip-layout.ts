@@ -2,7 +2,7 @@ import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
 import { chooseLevels } from './graduations';
 import { freeLabelSpot, MIN_STRIP_LABEL_MM, stripMarkLabels, type InkBox, type StripMark, type Zone } from './strip-labels';
-import { formatDeg, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
+import { formatDeg, numberStrideFor, portAngleWords, scaleMarks, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, crankFromAlongDeg, stripXMm } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
@@ -105,7 +105,6 @@ function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment,
     advanceMarksDeg: req.advanceMarksDeg,
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
-    drawPorts: req.numbering === 'full',
     numberClearDeg: Math.max(1.5, (numeralWidthMm / 2 + 0.4) / plan.mmPerDeg),
   });
 }
@@ -306,11 +305,29 @@ export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
   const choice = chooseLevels(plan.mmPerDeg, req.minPitchMm, 'on this strip');
   const stride = numberStrideFor(plan.mmPerDeg * 10, textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize));
   const warnings = [...choice.warnings];
-  if (req.portEvents.length && req.numbering !== 'full') warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
+  warnings.push(...outsideWindowWarnings(req));
   if (plan.segments.length > 1)
     warnings.push(
       `The strip (${(plan.markedMm).toFixed(2)} mm marked) is cut into ${plan.segments.length} segments, ${plan.segments[0]!.letter}–${plan.segments[plan.segments.length - 1]!.letter}, that join end to end`,
     );
   const rows = plan.segments.map((segment, i) => stripRow(req, plan, segment, i, choice.finestLevel, stride));
   return { rows, keptLevels: choice.keptLevels, stripLengthMm: plan.stripLengthMm, warnings, plan };
+}
+
+/** What a window strip cannot show: each requested advance mark, band or port event outside the window, by name. */
+function outsideWindowWarnings(req: SheetRequest): string[] {
+  if (!req.windowCrankDeg) return [];
+  const [from] = req.windowCrankDeg;
+  const span = windowSpanDeg(req.windowCrankDeg);
+  const inWindow = (crankDeg: number) => normalizeDeg(crankDeg - from) <= span + 1e-7;
+  const left: string[] = [];
+  for (const advanceDeg of new Set(req.advanceMarksDeg)) if (!inWindow(360 - advanceDeg)) left.push(`advance mark ${formatDeg(advanceDeg)}° BTDC`);
+  for (const port of req.portEvents)
+    for (const [crank, verb] of [
+      [port.opensCrankDeg, 'opens'],
+      [port.closesCrankDeg, 'closes'],
+    ] as const)
+      if (!inWindow(crank)) left.push(`${port.name} ${verb} ${portAngleWords(crank, req.numbering)}`);
+  if (req.advanceBandDeg && !inWindow(360 - req.advanceBandDeg[0]) && !inWindow(360 - req.advanceBandDeg[1])) left.push(`advance band ${formatDeg(Math.min(...req.advanceBandDeg))}–${formatDeg(Math.max(...req.advanceBandDeg))}° BTDC`);
+  return left.length ? [`Not drawn, outside the window: ${left.join(', ')}`] : [];
 }

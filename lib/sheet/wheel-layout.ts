@@ -24,9 +24,7 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
   const numeralWidthMm = textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale);
   const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), numeralWidthMm);
   const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcPitchMm(2 * numeralRadius, 1), 1e-6));
-  const drawPorts = req.numbering === 'full';
   const warnings = [...choice.warnings];
-  if (req.portEvents.length && !drawPorts) warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
   const marks = scaleMarks({
     range: 'turn',
     carrier: req.carrier,
@@ -36,7 +34,6 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     advanceMarksDeg: req.advanceMarksDeg,
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
-    drawPorts,
     numberClearDeg,
   });
   const shapes = polarScaleShapes({
