@@ -5,7 +5,7 @@ import { printerScaleFields } from './sheet/sheet-request-fields';
 
 /**
  * Printer profiles: the scale-check sheet carries 100 mm bars in both axes
- * (PRODUCT.md §3). The user measures what the printer made of them; the profile
+ * (DEVELOPERS.md, "Sheets"). The user measures what the printer made of them; the profile
  * holds what the printer makes of one millimetre (measured ÷ 100) per axis, and
  * later sheets are pre-scaled by its inverse.
  */

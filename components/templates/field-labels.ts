@@ -27,7 +27,3 @@ export function formatFieldValue(field: string, value: unknown): string {
   }
   return typeof value === 'number' ? withUnit(value, unit) : String(value);
 }
-
-export function formatWhen(iso: string): string {
-  return iso.replace('T', ' ').replace(/\.\d+Z$/, ' UTC').replace(/Z$/, ' UTC');
-}

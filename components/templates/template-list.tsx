@@ -10,7 +10,8 @@ import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/templates/list-view';
 import type { Template, TemplatePage } from '@/lib/templates/template';
 import { inputClass } from '@/components/generator/fields';
-import { formatFieldValue, formatWhen } from './field-labels';
+import { formatDate, type DateFormat } from '@/lib/format/date-format';
+import { formatFieldValue } from './field-labels';
 
 const features = tableFeatures({});
 const helper = createColumnHelper<typeof features, Template>();
@@ -80,7 +81,8 @@ function useSearchText(urlQ: string, show: (patch: Partial<TemplateListView>) =>
 }
 
 /** The template list: SWR fetches each page from the JSON API (search, sort, filter and paging in SQL). */
-export function TemplateList({ slug }: { slug: string }) {
+/** `dateFormat` comes from the page (the reader's locale and the deployment's time zone), so dates read as on the server. */
+export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: DateFormat }) {
   const { view, show } = useListView();
   const { q: search, sort, dir, archived, page } = view;
   const { text: q, setText: setQ, input: searchInput } = useSearchText(search, show);
@@ -106,7 +108,7 @@ export function TemplateList({ slug }: { slug: string }) {
                   {row.name}
                 </Link>
               );
-            if (c.key === 'updatedAt') return formatWhen(row.updatedAt).slice(0, 10);
+            if (c.key === 'updatedAt') return <time dateTime={row.updatedAt}>{formatDate(row.updatedAt, dateFormat)}</time>;
             if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation)}>{row.rotation.toUpperCase()}</abbr>;
             if (c.key === 'description')
               return (
@@ -119,7 +121,7 @@ export function TemplateList({ slug }: { slug: string }) {
         }),
       ),
     );
-  }, [slug]);
+  }, [slug, dateFormat]);
 
   const table = useTable({ features, columns, data: data?.items ?? EMPTY });
   const total = data?.total ?? 0;

@@ -13,7 +13,7 @@ import { crankDegFromDropMm, crankGeometryProblem, crankThrowMm, pistonDropMm, t
  *   y(φ) = a·cos φ + √(l² − (a·sin φ − e)²)
  * TDC (y greatest, crank and rod in line): y_TDC = √((l + a)² − e²) at φ_TDC = asin(e / (l + a));
  * BDC (folded): y_BDC = √((l − a)² − e²) at φ_BDC = 180° + asin(e / (l − a)).
- * Rimscale keeps crankDeg = 0 at piston TDC (PRODUCT.md §2): crankDeg = φ − φ_TDC.
+ * Rimscale keeps crankDeg = 0 at piston TDC (DEVELOPERS.md, "Angles"): crankDeg = φ − φ_TDC.
  * With e = 0 every function hands over to the centred-pin functions (Heywood eq. 2.5) unchanged.
  */
 

@@ -75,6 +75,24 @@ describe('owners manage members', () => {
     expect(await roleOf(world.users.viewer.id)).toBeUndefined();
   });
 
+  it('the invitation e-mail says until when it is valid, in the inviter\'s language and the stated zone', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(new Date('2026-12-01T12:00:00Z'));
+    try {
+      const res = await callRoute(inviteRoute, {
+        params: { workspace: world.shop.slug },
+        body: { email: 'dated@world.test', role: 'viewer' },
+        headers: { 'accept-language': 'en-GB,en;q=0.8' },
+      });
+      expect(res.status).toBe(201);
+    } finally {
+      vi.useRealTimers();
+    }
+    const [message] = await mail.inbox('dated@world.test');
+    // Invitations last 7 days (lib/one-time-token.ts): 1 Dec 12:00 UTC + 7 days, in CLDR en-GB "d MMM y, HH:mm z".
+    expect(message?.text).toContain('valid for 7 days, until 8 Dec 2026, 12:00 UTC, once');
+  });
+
   it('a role outside the three is refused by field', async () => {
     const res = await callRoute(roleRoute, {
       method: 'PATCH',

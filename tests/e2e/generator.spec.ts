@@ -22,7 +22,7 @@ test('the preview follows the diameter and the kind as you type', async ({ page 
   await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
   const diameter = page.getByLabel('Diameter', { exact: true });
 
-  // PRODUCT.md §2: graduations every 0.5° when the pitch allows → 360 / 0.5 = 720 lines on a
+  // DEVELOPERS.md, "Graduation levels": graduations every 0.5° when the pitch allows → 360 / 0.5 = 720 lines on a
   // 300 mm wheel (0.5° of arc at r ≈ 150 mm is ≈ 1.3 mm, over the 0.6 mm minimum).
   await diameter.fill('300');
   await expect(graduations(page)).toHaveCount(720, { timeout: 15_000 });
@@ -34,7 +34,7 @@ test('the preview follows the diameter and the kind as you type', async ({ page 
   await expect(page.getByTestId('layout-warnings')).toBeVisible();
 
   // A rim strip for D = 100 mm, t = 0.10 mm: 1° along π·(D + t) is π·100.1 / 360 ≈ 0.874 mm (kept, ≥ 0.6 mm)
-  // and 0.5° is ≈ 0.437 mm (dropped), so the graduations sit at 360 distinct crank angles (PRODUCT.md §2–3).
+  // and 0.5° is ≈ 0.437 mm (dropped), so the graduations sit at 360 distinct crank angles (DEVELOPERS.md, "Graduation levels").
   await page.getByRole('radio', { name: /^Rim strip/ }).check();
   await expect(page.getByLabel('Strip width')).toBeVisible();
   await diameter.fill('100');

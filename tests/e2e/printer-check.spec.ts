@@ -2,7 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { expect, test } from '@playwright/test';
 import { PDFParse } from 'pdf-parse';
 
-// The expected factors follow the scale-check sheet's own definition (PRODUCT.md §3,
+// The expected factors follow the scale-check sheet's own definition (DEVELOPERS.md, "Sheets",
 // issue 3): 100 mm bars, factor = measured ÷ 100, bars outside 90–110 mm refused.
 
 test('measuring 98 and 100 mm stores a profile that the sheet maker offers and sends', async ({ page }) => {

@@ -8,7 +8,7 @@ import {
   scaleFromMeasuredMm,
 } from '@/lib/printer-profile';
 
-// Source for every expected factor: the scale-check sheet's own definition (PRODUCT.md §3
+// Source for every expected factor: the scale-check sheet's own definition (DEVELOPERS.md, "Sheets"
 // and issue 3): the bars are 100 mm long, the profile holds measured ÷ true length per axis,
 // and a bar under 90 or over 110 mm means the printer scaled the page to fit.
 

@@ -30,8 +30,8 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  * 10 MB) and an optional `caption`; technician or above. The type is read from the content;
  * the stored file is re-encoded without metadata. Refusals: 413 too large, 415 not an image.
  */
-export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: TemplateParams): Promise<Response> {
+  return guarded(incoming, { accepts: ['multipart'], maxBytes: MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES, tooLarge }, async (request) => {
     const { access, template } = await templateFor(params, 'template.edit');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES) return tooLarge();
     if (!request.headers.get('content-type')?.startsWith('multipart/form-data'))
