@@ -182,7 +182,7 @@ export function TemplateForm({ slug, template }: { slug: string; template: Templ
           <FormSection key={section.title} title={section.title}>
             {runsOf(section.fields).map((run) =>
               run.length > 1 ? (
-                <div key={run[0]!.key} className={`grid gap-3 ${run.length % 3 === 0 ? 'sm:grid-cols-3' : 'sm:grid-cols-2'}`}>
+                <div key={run[0]!.key} className="grid gap-3 sm:grid-cols-3">
                   {run.map((field) => (
                     <TemplateField key={field.key} field={field} />
                   ))}
