@@ -10,7 +10,7 @@ import { applyIssues, submitJson } from '@/components/account/submit-json';
 import { FieldErrorText, FormSection, LabelledField, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
 import type { Field } from '@/lib/fields/field';
 import type { Template } from '@/lib/templates/template';
-import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
+import { TEMPLATE_FIELD_LIST, templateFields } from '@/lib/templates/template-fields';
 import { EMPTY_TEMPLATE, templateFormSchema } from '@/lib/templates/template-schema';
 import { OptionalNumberField, commaListAsNumbers } from './optional-number-field';
 
@@ -112,7 +112,7 @@ function PortTargets() {
   const error = useFieldError('portTargets');
   return (
     <div className="space-y-2">
-      <p className="text-xs text-steel-500">Crank angles from TDC in the direction of rotation (0–360°): exhaust opening near 90° ATDC is 90, its closing 270.</p>
+      <p className="text-xs text-steel-500">{templateFields.portTargets.help}</p>
       {fields.map((field, index) => (
         <div key={field.id} className="grid grid-cols-[1fr_7rem_7rem_auto] items-end gap-2">
           <PortCell index={index} part="name" label="Port" register={register} />

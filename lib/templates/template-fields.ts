@@ -106,6 +106,7 @@ export const templateFields = defineFields({
       label: 'Port targets',
       csvColumn: 'port_targets',
       column: 'port_targets_json',
+      help: 'Crank angles from TDC in the direction of rotation (0–360°): exhaust opening near 90° ATDC is 90, its closing 270.',
     },
     z
       .array(portTargetSchema, { error: 'Port targets must be a list of { name, opensCrankDeg, closesCrankDeg }' })
