@@ -24,8 +24,8 @@ const SCALING_HINT =
 /** What the printer-check form asks for: a name and the two measured bar lengths. */
 export const printerMeasurementFields = defineFields({
   name: textField({ label: 'Profile name', minLength: 1, maxLength: PROFILE_NAME_MAX }),
-  measuredXMm: lengthField({ label: 'Horizontal bar', ...MEASURED_BAR_RANGE_MM, hint: SCALING_HINT }),
-  measuredYMm: lengthField({ label: 'Vertical bar', ...MEASURED_BAR_RANGE_MM, hint: SCALING_HINT }),
+  measuredXMm: lengthField({ label: 'Horizontal bar', ...MEASURED_BAR_RANGE_MM, hint: SCALING_HINT, help: 'The 100 mm bar that runs across the page.' }),
+  measuredYMm: lengthField({ label: 'Vertical bar', ...MEASURED_BAR_RANGE_MM, hint: SCALING_HINT, help: 'The 100 mm bar that runs down the page.' }),
 });
 
 export const printerMeasurementSchema = z.object(shapeOf(printerMeasurementFields));
