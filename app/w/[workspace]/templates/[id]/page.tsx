@@ -17,13 +17,11 @@ import { listRevisions } from '@/db/templates/revisions';
 import { TemplateBuilds } from '@/components/builds/template-builds';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { listBuilds } from '@/db/builds/list-builds';
-import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
-
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
