@@ -187,7 +187,7 @@ test('a link prefills the form and reports the values it could not use', async (
   await expect(page.getByLabel('Advance marks (° BTDC)')).toHaveValue('16, 18');
   await expect(page.getByRole('radio', { name: /^Full circle/ })).toBeChecked();
   const notice = page.getByRole('status').filter({ hasText: 'not used' });
-  await expect(notice).toContainText('Port events (portEvents) are not valid JSON');
+  await expect(notice).toContainText('Port events are not valid JSON');
   await expect(notice).toContainText('60° BTDC');
 
   await page.goto(`/?kind=wheel&numbering=full&portEvents=${encodeURIComponent('[{"name":"Exhaust","opensCrankDeg":97,"closesCrankDeg":263}]')}`);
