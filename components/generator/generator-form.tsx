@@ -11,7 +11,7 @@ import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId,
 import { convertLengths, toSheetRequestInput, usesField, LENGTH_FIELDS, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
 import { messageInTypedUnit } from './inch-messages';
-import { DownloadPanel } from './download-panel';
+import { DownloadPanel, type WorkspacePrinterProfiles } from './download-panel';
 import { PortEventsField } from './port-events-field';
 import { SheetPreview } from './sheet-preview';
 import { PrintAtActualSize, SafetyPanel } from './safety-panel';
@@ -40,7 +40,15 @@ const DIAMETER_HELP: Partial<Record<SheetKind, React.ReactNode>> = {
 };
 
 /** The sheet generator: form on the left, live preview and downloads on the right. */
-export function GeneratorForm({ defaultValues, ignored }: { defaultValues: GeneratorFormValues; ignored: IgnoredParam[] }) {
+export function GeneratorForm({
+  defaultValues,
+  ignored,
+  workspace = null,
+}: {
+  defaultValues: GeneratorFormValues;
+  ignored: IgnoredParam[];
+  workspace?: WorkspacePrinterProfiles | null;
+}) {
   const form = useForm<GeneratorFormValues, unknown, SheetRequest>({
     defaultValues,
     resolver: generatorResolver,
@@ -70,7 +78,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
         <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
           <SheetPreview request={request} describeIssue={(issue) => messageInTypedUnit(issue, { ...defaultValues, ...values })} />
           <PrintAtActualSize />
-          <DownloadPanel validate={validate} />
+          <DownloadPanel validate={validate} workspace={workspace} />
           <SafetyPanel />
         </div>
       </div>

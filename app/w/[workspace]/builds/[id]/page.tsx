@@ -212,7 +212,7 @@ export default async function BuildPage({ params }: Props) {
         <h2 id="print-heading" className="text-lg font-semibold">
           Print the sheets for this build
         </h2>
-        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} />
+        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} workspaceSlug={slug} />
       </section>
 
       <section aria-labelledby="history-heading" className="space-y-2">
