@@ -1,12 +1,12 @@
 import Papa from 'papaparse';
-import { writeTextCell } from '@/lib/templates/csv-cells';
+import { guardCell } from '@/lib/csv/formula-guard';
 import type { Build } from './build';
 import { BUILD_FIELD_LIST } from './build-fields';
 
 /**
  * Build records as CSV: a column per field the field table gives a `csvColumn`, then the
- * measurements and results that are lists. Every cell, numbers included, goes through the
- * templates' formula guard, so no cell can start a spreadsheet formula.
+ * measurements and results that are lists. Every cell goes through the shared formula guard
+ * (lib/csv/formula-guard.ts), so no cell can start a spreadsheet formula.
  */
 
 type Column = { header: string; cell: (b: Build) => unknown };
@@ -38,6 +38,6 @@ const cellText = (value: unknown) => (value === null || value === undefined ? ''
 
 export function buildsToCsv(builds: Build[]): string {
   const columns = [...FIELD_COLUMNS, ...RESULT_COLUMNS];
-  const rows = builds.map((b) => columns.map((c) => writeTextCell(cellText(c.cell(b)))));
+  const rows = builds.map((b) => columns.map((c) => guardCell(cellText(c.cell(b)))));
   return Papa.unparse({ fields: columns.map((c) => c.header), data: rows }, { newline: '\r\n' });
 }

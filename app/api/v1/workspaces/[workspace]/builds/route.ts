@@ -28,8 +28,8 @@ const jsonObject = z.record(z.string(), z.unknown(), { error: 'Send a JSON objec
  * the template's geometry, rotation, advance and port targets are the starting values of
  * whatever the body leaves out.
  */
-export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: WorkspaceParams): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const access = await requireAction((await params).workspace, 'build.edit');
     const body = await parseJsonBody(request, jsonObject);
     if (!body.ok) return body.response;

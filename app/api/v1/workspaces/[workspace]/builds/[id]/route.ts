@@ -17,8 +17,8 @@ export async function GET(_request: Request, { params }: BuildParams): Promise<R
  * PATCH …/builds/[id] — `{ version, ...fields }` (build.edit). The version is the one the edit
  * started from; if someone saved in between the answer is 409 and nothing is written.
  */
-export async function PATCH(request: Request, { params }: BuildParams): Promise<Response> {
-  return guarded(async () => {
+export async function PATCH(incoming: Request, { params }: BuildParams): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const { workspace, id } = await params;
     const access = await requireAction(workspace, 'build.edit');
     const buildId = parsePathId(id);
@@ -32,8 +32,8 @@ export async function PATCH(request: Request, { params }: BuildParams): Promise<
 }
 
 /** DELETE …/builds/[id] — build.delete: removes the record, its history and its sends. */
-export async function DELETE(_request: Request, { params }: BuildParams): Promise<Response> {
-  return guarded(async () => {
+export async function DELETE(incoming: Request, { params }: BuildParams): Promise<Response> {
+  return guarded(incoming, {}, async () => {
     const { workspace, id } = await params;
     const access = await requireAction(workspace, 'build.delete');
     const buildId = parsePathId(id);

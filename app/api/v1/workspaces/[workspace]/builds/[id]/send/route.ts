@@ -15,8 +15,8 @@ export const dynamic = 'force-dynamic';
  * record's customer e-mail (build.send), recorded on the record and in the audit log; 202 with the
  * record. Limited per workspace (app/lib/rate-limit.ts).
  */
-export async function POST(request: Request, { params }: BuildParams): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: BuildParams): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const { access, build } = await buildFor(params, 'build.send');
     const query = copyQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));

@@ -1,4 +1,5 @@
 import { z } from 'zod';
+import { dateFormatOf } from '@/app/lib/date-format';
 import { jsonError } from '@/app/lib/api';
 import { guarded } from '@/app/lib/route-handler';
 import { profileChoiceSchema, sheetCorrection } from '@/app/lib/sheet-printer-profile';
@@ -37,6 +38,6 @@ export async function GET(request: Request, { params }: BuildParams): Promise<Re
     if (!correction) return jsonError(400, 'No such printer profile in this workspace', [{ path: 'profile', message: 'Use default, none or the id of one of this workspace’s profiles' }]);
     const sheet = sheetRequestSchema.safeParse({ ...input, ...correction, format: query.data.format });
     if (!sheet.success) return jsonError(400, 'The record’s figures do not make a valid sheet', toFieldIssues(sheet.error));
-    return sheetDownloadResponse(sheet.data);
+    return sheetDownloadResponse(sheet.data, dateFormatOf(request));
   });
 }
