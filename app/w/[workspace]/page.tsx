@@ -12,6 +12,9 @@ import { PendingInvitations } from '@/components/workspace/pending-invitations';
 import { membersOf } from '@/db/accounts';
 import { auditOf } from '@/db/audit-log';
 import { pendingInvitations } from '@/db/invitations';
+import { BuildSettingsForm } from '@/components/builds/build-settings-form';
+import { workspaceToleranceDeg } from '@/db/builds/references';
+import { db } from '@/db/knex';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Workspace' };
@@ -84,6 +87,8 @@ export default async function WorkspaceHomePage({ params }: Props) {
             <div className="space-y-2">
               <h3 className="font-medium">Name</h3>
               <ShopNameForm renameSlug={workspace.slug} currentName={workspace.name} />
+              <h3 className="pt-2 font-medium">Build records</h3>
+              <BuildSettingsForm slug={workspace.slug} settings={{ toleranceDeg: await workspaceToleranceDeg(db(), workspace.id) }} />
             </div>
           ) : null}
           {may.audit ? (
