@@ -9,9 +9,9 @@ type Context = { params: Promise<{ workspace: string }> };
 const defaultSchema = z
   .object({
     profileId: z
-      .number({ error: 'Default printer profile (profileId) must be the id of one of this workspace’s profiles, or null for none' })
-      .int('Default printer profile (profileId) must be a whole number')
-      .min(1, 'Default printer profile (profileId) must be a whole number from 1')
+      .number({ error: 'Default printer profile must be the id of one of this workspace’s profiles, or null for none' })
+      .int('Default printer profile must be a whole number')
+      .min(1, 'Default printer profile must be a whole number from 1')
       .nullable(),
   })
   .strict();
