@@ -6,11 +6,19 @@ import type { SheetRequest } from '@/lib/sheet/sheet-request';
 import { dayStart } from '@/pdf/pdf-job';
 import { jsonError } from './api';
 import { PdfPoolBusy, renderPdf } from './pdf-pool';
+import { cachedSheet, matchesIfNoneMatch, sheetCacheKey } from './sheet-cache';
 
 const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
   svg: 'image/svg+xml; charset=utf-8',
   pdf: 'application/pdf',
 };
+
+/**
+ * Browsers may keep a sheet but must ask again before using it (RFC 9111 §5.2.2.4):
+ * the answer is a 304 while it is unchanged. `private`: template sheets belong to
+ * a signed-in member, so no shared cache keeps them.
+ */
+const CACHE_CONTROL = 'private, no-cache';
 
 /** Today in UTC (YYYY-MM-DD): the date a sheet drawn now carries in its title block. */
 export function sheetDay(now = new Date()): string {
@@ -23,23 +31,45 @@ export async function renderSheetBody(sheet: SheetRequest, day: string): Promise
   return renderPdf({ kind: 'sheet', props: { request: sheet, day } });
 }
 
-/** A validated sheet request drawn and answered as a PDF or SVG download (the public and the template routes alike). */
-export async function sheetDownloadResponse(sheet: SheetRequest): Promise<Response> {
-  let body: Uint8Array | string;
+type DownloadOptions = {
+  /** The incoming request, for its If-None-Match. */
+  request?: Request;
+  /** A stored record the sheet is drawn from, with its version ('template:12@v3'): part of the cache key. */
+  record?: string;
+  /** The sheet's date (YYYY-MM-DD); today in UTC unless given. */
+  day?: string;
+};
+
+function busyResponse(error: PdfPoolBusy): Response {
+  const busy = jsonError(503, 'The server is busy drawing other sheets. Try again in a moment.');
+  busy.headers.set('Retry-After', String(error.retryAfterS));
+  return busy;
+}
+
+/**
+ * A validated sheet request answered as a PDF or SVG download (the public and the template
+ * routes alike): from the cache when the same sheet was drawn before, with a strong ETag,
+ * and as 304 Not Modified without a body when the caller already holds those bytes.
+ */
+export async function sheetDownloadResponse(sheet: SheetRequest, options: DownloadOptions = {}): Promise<Response> {
+  const day = options.day ?? sheetDay();
+  const key = sheetCacheKey({ request: sheet, day, ...(options.record ? { record: options.record } : {}) });
+  let entry;
   try {
-    body = await renderSheetBody(sheet, sheetDay());
+    entry = await cachedSheet(key, () => renderSheetBody(sheet, day));
   } catch (error) {
-    if (!(error instanceof PdfPoolBusy)) throw error;
-    const busy = jsonError(503, 'The server is busy drawing other sheets. Try again in a moment.');
-    busy.headers.set('Retry-After', String(error.retryAfterS));
-    return busy;
+    if (error instanceof PdfPoolBusy) return busyResponse(error);
+    throw error;
   }
-  return new Response(body as BodyInit, {
+  const validators = { ETag: entry.etag, 'Cache-Control': CACHE_CONTROL };
+  if (matchesIfNoneMatch(options.request?.headers.get('if-none-match') ?? null, entry.etag))
+    return new Response(null, { status: 304, headers: validators });
+  return new Response(entry.body as Uint8Array<ArrayBuffer>, {
     status: 200,
     headers: {
+      ...validators,
       'Content-Type': CONTENT_TYPE[sheet.format],
       'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
-      'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
     },
   });

@@ -8,7 +8,8 @@ export const dynamic = 'force-dynamic';
 
 /**
  * POST /api/v1/sheets: a sheet request (JSON, lib/sheet/sheet-request.ts) in, the
- * drawing as a PDF (default) or SVG download out.
+ * drawing as a PDF (default) or SVG download out; a repeat comes from the sheet cache,
+ * and a repeat with the ETag in If-None-Match is a 304 without a body.
  * Public on purpose, so no session or role check: the generator serves visitors
  * without an account (PRODUCT.md §1, issue 3), and it reads and writes no stored data.
  */
@@ -16,7 +17,7 @@ export async function POST(request: Request): Promise<Response> {
   try {
     const parsed = await parseJsonBody(request, sheetRequestSchema);
     if (!parsed.ok) return parsed.response;
-    return await sheetDownloadResponse(parsed.data);
+    return await sheetDownloadResponse(parsed.data, { request });
   } catch (error) {
     // Never a stack trace to the caller; the message stays in the server log.
     console.error('POST /api/v1/sheets failed:', error instanceof Error ? error.message : String(error));
