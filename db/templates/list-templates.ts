@@ -1,4 +1,5 @@
 import 'server-only';
+import type { Knex } from 'knex';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
 import type { TemplateListQuery } from '@/lib/templates/list-query';
@@ -7,9 +8,17 @@ import type { TemplateFields } from '@/lib/templates/template-schema';
 import { selectTemplates } from './select-templates';
 import { rowToFields, rowToTemplate, SORT_COLUMNS, type TemplateRow } from './template-row';
 
+/** Sort keys whose columns are NOT NULL (db/migrations/20261201000600_create_templates.ts). */
+const NOT_NULL_SORT_KEYS: ReadonlySet<TemplateListQuery['sort']> = new Set(['name', 'description', 'rotation', 'version', 'createdAt', 'updatedAt']);
+
 /** LIKE pattern for a search term, with the wildcards in the term escaped. */
 function likePattern(term: string): string {
   return `%${term.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+async function countOf(query: Knex.QueryBuilder): Promise<number> {
+  const [counted] = (await query.count({ total: '*' })) as Array<{ total: number }>;
+  return Number(counted?.total ?? 0);
 }
 
 /** One page of a workspace's templates: filtered, searched and sorted in SQL (limit/offset). */
@@ -24,17 +33,19 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
     }
     return q;
   };
-  const [counted] = (await filtered().count({ total: '*' })) as Array<{ total: number }>;
-  const total = counted?.total ?? 0;
   const column = `t.${SORT_COLUMNS[query.sort]}`;
   const text = query.sort === 'name' || query.sort === 'description';
-  const idRows: Array<{ id: number }> = await filtered()
-    .select('t.id')
-    .orderByRaw(`${column} IS NULL`) // unknown measurements last in either direction
+  const ids = filtered().select('t.id');
+  // A search scans every row of the workspace: count the matches in the same scan (a window over the filtered rows).
+  if (query.q) ids.select(knex.raw('count(*) over () as total'));
+  // Unknown measurements last in either direction; columns that are never NULL skip the term, so an index can give the order.
+  if (!NOT_NULL_SORT_KEYS.has(query.sort)) ids.orderByRaw(`${column} IS NULL`);
+  const idRows: Array<{ id: number; total?: number }> = await ids
     .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
     .orderBy('t.id', query.dir)
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);
+  const total = idRows[0]?.total ?? (await countOf(filtered()));
   const rows: TemplateRow[] = await selectTemplates(knex, workspaceId).whereIn(
     't.id',
     idRows.map((r) => r.id),
