@@ -1,5 +1,5 @@
 import { loadSheetFonts } from './fonts';
-import { renderPdfJob, type PdfJob } from './pdf-job';
+import { renderPdfJob, type PdfJob, type RenderedPdf } from './pdf-job';
 
 /**
  * The worker-thread entry of the PDF pool (app/lib/pdf-pool.ts). Bundled on its
@@ -10,7 +10,7 @@ import { renderPdfJob, type PdfJob } from './pdf-job';
 // Fonts are read and parsed once per worker, when it starts, not per request.
 const fontsReady = loadSheetFonts();
 
-export default async function renderInWorker(job: PdfJob): Promise<Uint8Array> {
+export default async function renderInWorker(job: PdfJob): Promise<RenderedPdf> {
   await fontsReady;
   return renderPdfJob(job);
 }

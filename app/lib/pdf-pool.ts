@@ -4,7 +4,8 @@ import os from 'node:os';
 import path from 'node:path';
 import { pathToFileURL } from 'node:url';
 import Piscina from 'piscina';
-import type { PdfJob } from '@/pdf/pdf-job';
+import { jsonError } from './api';
+import type { PdfJob, RenderedPdf } from '@/pdf/pdf-job';
 
 /**
  * PDF rendering on every core: a pool of worker threads (piscina), one per core,
@@ -28,13 +29,13 @@ export class PdfPoolBusy extends Error {
 
 // One pool per process, wherever Next has loaded this module from.
 const POOL = Symbol.for('rimscale.pdf.pool');
-type PoolGlobal = typeof globalThis & { [POOL]?: Piscina<PdfJob, Uint8Array> };
+type PoolGlobal = typeof globalThis & { [POOL]?: Piscina<PdfJob, RenderedPdf> };
 
-function pool(): Piscina<PdfJob, Uint8Array> {
+function pool(): Piscina<PdfJob, RenderedPdf> {
   const global = globalThis as PoolGlobal;
   if (global[POOL]) return global[POOL];
   if (!existsSync(PDF_WORKER_FILE)) throw new Error(`PDF worker bundle missing at ${PDF_WORKER_FILE}: run \`node scripts/build-pdf-worker.mjs\` (npm run build does)`);
-  global[POOL] = new Piscina<PdfJob, Uint8Array>({
+  global[POOL] = new Piscina<PdfJob, RenderedPdf>({
     filename: pathToFileURL(PDF_WORKER_FILE).href,
     minThreads: THREADS,
     maxThreads: THREADS,
@@ -51,8 +52,8 @@ function retryAfterS(workers: Piscina): number {
   return Math.min(30, Math.max(1, Math.ceil((workers.queueSize * meanMs) / THREADS / 1000)));
 }
 
-/** The PDF bytes of a job, rendered in a worker thread. */
-export async function renderPdf(job: PdfJob): Promise<Uint8Array> {
+/** The PDF of a job, rendered in a worker thread. */
+export async function renderPdf(job: PdfJob): Promise<RenderedPdf> {
   const workers = pool();
   if (workers.queueSize >= MAX_QUEUE) throw new PdfPoolBusy(retryAfterS(workers));
   try {
@@ -61,6 +62,14 @@ export async function renderPdf(job: PdfJob): Promise<Uint8Array> {
     if (error instanceof Error && error.message === 'Task queue is at limit') throw new PdfPoolBusy(retryAfterS(workers));
     throw error;
   }
+}
+
+/** The API's answer when `error` is a full queue: 503 with Retry-After; null for any other error. */
+export function pdfPoolBusyResponse(error: unknown): Response | null {
+  if (!(error instanceof PdfPoolBusy)) return null;
+  const busy = jsonError(503, 'The server is busy drawing other documents. Try again in a moment.');
+  busy.headers.set('Retry-After', String(error.retryAfterS));
+  return busy;
 }
 
 /** Stops the workers (tests; a server just exits). */

@@ -8,7 +8,9 @@ import { LRUCache } from 'lru-cache';
  * from here. Least recently used first out, bounded by the bytes of the bodies.
  */
 
-export type CachedSheet = { body: Buffer; etag: string };
+/** A drawn sheet: its bytes, their ETag, and the layout's notes (what it could not draw as asked). */
+export type CachedSheet = { body: Buffer; etag: string; notes: string[] };
+export type DrawnSheet = { body: Uint8Array | string; notes: string[] };
 
 const MAX_BYTES = (Number(process.env.RIMSCALE_SHEET_CACHE_MB) || 32) * 1024 * 1024;
 const ENTRY_OVERHEAD_BYTES = 200; // key, ETag and bookkeeping, so tiny bodies still count
@@ -25,7 +27,7 @@ function canonicalJson(value: unknown): string {
 }
 
 /** The cache key of a sheet: what it is drawn from, hashed. `record` names a stored record and its version. */
-export function sheetCacheKey(parts: { request: object; day: string; record?: string }): string {
+export function sheetCacheKey(parts: { request: object; day: string; locale?: string; record?: string }): string {
   return createHash('sha256').update(canonicalJson(parts)).digest('base64url');
 }
 
@@ -53,7 +55,7 @@ function store(): { cache: LRUCache<string, CachedSheet>; inFlight: Map<string, 
  * The cached sheet for `key`, or `draw()`'s, stored. Identical requests that arrive
  * while the first is still drawing wait for it instead of drawing again.
  */
-export async function cachedSheet(key: string, draw: () => Promise<Uint8Array | string>): Promise<CachedSheet> {
+export async function cachedSheet(key: string, draw: () => Promise<DrawnSheet>): Promise<CachedSheet> {
   const { cache, inFlight } = store();
   const hit = cache.get(key);
   if (hit) return hit;
@@ -61,8 +63,8 @@ export async function cachedSheet(key: string, draw: () => Promise<Uint8Array | 
   if (pending) return pending;
   const drawing = (async () => {
     const drawn = await draw();
-    const body = typeof drawn === 'string' ? Buffer.from(drawn, 'utf8') : Buffer.from(drawn.buffer, drawn.byteOffset, drawn.byteLength);
-    const entry = { body, etag: strongEtag(body) };
+    const body = typeof drawn.body === 'string' ? Buffer.from(drawn.body, 'utf8') : Buffer.from(drawn.body.buffer, drawn.body.byteOffset, drawn.body.byteLength);
+    const entry = { body, etag: strongEtag(body), notes: drawn.notes };
     cache.set(key, entry);
     return entry;
   })();

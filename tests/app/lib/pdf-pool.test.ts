@@ -1,4 +1,5 @@
 import { afterAll, describe, expect, it, vi } from 'vitest';
+import { DEFAULT_DATE_FORMAT } from '@/lib/format/date-format';
 import { sheetRequestSchema, type SheetRequestInput } from '@/lib/sheet/sheet-request';
 import { renderPdfJob, type PdfJob } from '@/pdf/pdf-job';
 import { readPdfText } from '../../pdf/read-pdf-text';
@@ -11,16 +12,18 @@ const { sheetDownloadResponse } = await import('@/app/lib/sheet-response');
 
 afterAll(() => closePdfPool());
 
-const job = (input: SheetRequestInput, day = '2026-03-14'): PdfJob => ({ kind: 'sheet', props: { request: sheetRequestSchema.parse(input), day } });
+const job = (input: SheetRequestInput, day = '2026-03-14'): PdfJob => ({ kind: 'sheet', props: { request: sheetRequestSchema.parse(input), day, locale: 'en-GB' } });
 
 describe('the PDF worker pool', () => {
   it('renders in a worker thread what this thread renders, and the title block carries the job’s day', async () => {
     const sheet = job({ kind: 'wheel', diameterMm: 128.4, title: 'Pool check' });
     const pooled = await renderPdf(sheet);
-    expect(Buffer.from(pooled).equals(Buffer.from(await renderPdfJob(sheet)))).toBe(true);
-    // pdf-parse, an independent reader, finds the date the job named.
-    const { text } = await readPdfText(Buffer.from(pooled));
-    expect(text).toContain('2026-03-14');
+    const direct = await renderPdfJob(sheet);
+    expect(Buffer.from(pooled.bytes).equals(Buffer.from(direct.bytes))).toBe(true);
+    expect(pooled.notes).toEqual(direct.notes);
+    // pdf-parse, an independent reader, finds the date the job named, as en-GB writes it (lib/format/date-format.ts).
+    const { text } = await readPdfText(Buffer.from(pooled.bytes));
+    expect(text).toContain('14 Mar 2026');
   });
 
   it('refuses work beyond the bounded queue with PdfPoolBusy and a Retry-After of at least a second', async () => {
@@ -34,7 +37,7 @@ describe('the PDF worker pool', () => {
 
   it('answers a full queue with 503, Retry-After and the API error shape (RFC 9110 §15.6.4, §10.2.3)', async () => {
     const responses = await Promise.all(
-      Array.from({ length: 6 }, (_, i) => sheetDownloadResponse(sheetRequestSchema.parse({ kind: 'wheel', diameterMm: 110 + i }))),
+      Array.from({ length: 6 }, (_, i) => sheetDownloadResponse(sheetRequestSchema.parse({ kind: 'wheel', diameterMm: 110 + i }), DEFAULT_DATE_FORMAT)),
     );
     const refused = responses.filter((r) => r.status === 503);
     expect(refused.length).toBeGreaterThan(0);

@@ -7,11 +7,11 @@ const { cachedSheet, clearSheetCache, matchesIfNoneMatch, sheetCacheKey, strongE
 
 beforeEach(() => clearSheetCache());
 
-const body = (fill: number, bytes = 300_000) => new Uint8Array(bytes).fill(fill);
+const drawn = (fill: number, bytes = 300_000) => ({ body: new Uint8Array(bytes).fill(fill), notes: [] });
 
 describe('the sheet cache', () => {
   it('draws a key once: a repeat and a concurrent twin get the first drawing', async () => {
-    const draw = vi.fn(async () => body(1));
+    const draw = vi.fn(async () => drawn(1));
     const [a, b] = await Promise.all([cachedSheet('k', draw), cachedSheet('k', draw)]);
     const c = await cachedSheet('k', draw);
     expect(draw).toHaveBeenCalledTimes(1);
@@ -24,7 +24,7 @@ describe('the sheet cache', () => {
     const get = (key: string) =>
       cachedSheet(key, async () => {
         draws.set(key, (draws.get(key) ?? 0) + 1);
-        return body(key.charCodeAt(0));
+        return drawn(key.charCodeAt(0));
       });
     await get('a');
     await get('b');

@@ -1,11 +1,12 @@
 import { afterAll, beforeEach, describe, expect, it } from 'vitest';
 import { closePdfPool } from '@/app/lib/pdf-pool';
 import { clearSheetCache } from '@/app/lib/sheet-cache';
-import { sheetDownloadResponse } from '@/app/lib/sheet-response';
+import { sheetDay, sheetDownloadResponse } from '@/app/lib/sheet-response';
+import { DEFAULT_DATE_FORMAT } from '@/lib/format/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetRequestSchema, type SheetRequestInput } from '@/lib/sheet/sheet-request';
-import { dayStart, renderPdfJob } from '@/pdf/pdf-job';
+import { dayFormat, dayStart, renderPdfJob } from '@/pdf/pdf-job';
 
 afterAll(() => closePdfPool());
 beforeEach(() => clearSheetCache());
@@ -15,13 +16,14 @@ const DAY = '2026-03-14';
 /** What this thread draws for a request, with no pool and no cache: the reference bytes. */
 async function directBytes(input: SheetRequestInput, day = DAY): Promise<Buffer> {
   const request = sheetRequestSchema.parse(input);
-  if (request.format === 'svg') return Buffer.from(renderSvg(buildDrawing(request, { date: dayStart(day) })), 'utf8');
-  return Buffer.from(await renderPdfJob({ kind: 'sheet', props: { request, day } }));
+  const { locale } = DEFAULT_DATE_FORMAT;
+  if (request.format === 'svg') return Buffer.from(renderSvg(buildDrawing(request, { date: dayStart(day), dateFormat: dayFormat(locale) })), 'utf8');
+  return Buffer.from((await renderPdfJob({ kind: 'sheet', props: { request, day, locale } })).bytes);
 }
 
 function download(input: SheetRequestInput, headers: Record<string, string> = {}, day = DAY): Promise<Response> {
   const request = new Request('http://localhost/api/v1/sheets', { method: 'POST', headers });
-  return sheetDownloadResponse(sheetRequestSchema.parse(input), { request, day });
+  return sheetDownloadResponse(sheetRequestSchema.parse(input), DEFAULT_DATE_FORMAT, { request, day });
 }
 
 const bytesOf = async (response: Response) => Buffer.from(await response.arrayBuffer());
@@ -68,8 +70,18 @@ describe('sheet downloads through the worker pool and the cache', () => {
     const input: SheetRequestInput = { kind: 'wheel', diameterMm: 100, format: 'svg' };
     const today = await bytesOf(await download(input, {}, '2026-03-14'));
     const tomorrow = await bytesOf(await download(input, {}, '2026-03-15'));
-    expect(today.toString('utf8')).toContain('2026-03-14');
-    expect(tomorrow.toString('utf8')).toContain('2026-03-15');
+    // en-GB, the default date format (lib/format/date-format.ts), writes "14 Mar 2026".
+    expect(today.toString('utf8')).toContain('14 Mar 2026');
+    expect(tomorrow.toString('utf8')).toContain('15 Mar 2026');
     expect(tomorrow.equals(await directBytes(input, '2026-03-15'))).toBe(true);
+  });
+});
+
+describe('sheetDay', () => {
+  it('is the calendar day in the reader’s time zone (IANA tz: Berlin is UTC+1 in March, Los Angeles UTC−7 after 8 March 2026)', () => {
+    const lateEvening = new Date('2026-03-14T23:30:00Z');
+    expect(sheetDay({ locale: 'en-GB', timeZone: 'UTC' }, lateEvening)).toBe('2026-03-14');
+    expect(sheetDay({ locale: 'en-GB', timeZone: 'Europe/Berlin' }, lateEvening)).toBe('2026-03-15');
+    expect(sheetDay({ locale: 'en-GB', timeZone: 'America/Los_Angeles' }, new Date('2026-03-15T05:00:00Z'))).toBe('2026-03-14');
   });
 });
