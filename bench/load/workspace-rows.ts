@@ -1,9 +1,12 @@
-/** 10,000 invented templates in the demo shop, so the list API pages through a busy workspace. */
-import knex from 'knex';
+/** 10,000 invented templates and 10,000 invented build records in the demo shop, so the list APIs page through a busy workspace. */
+import knex, { type Knex } from 'knex';
 import { sqliteConfig } from '@/db/config';
 import { DEMO_SHOP, DEMO_USERS } from '@/db/seeds/01_demo_shop';
 import { TABLES } from '@/db/tables';
 import { insertTemplates } from '@/db/templates/insert-templates';
+import { fieldsToColumns as buildColumns } from '@/db/builds/build-row';
+import { buildResults, DEFAULT_TOLERANCE_DEG } from '@/lib/builds/build-results';
+import { buildSchema, emptyBuild } from '@/lib/builds/build-schema';
 import { EMPTY_TEMPLATE, type TemplateFields } from '@/lib/templates/template-schema';
 
 export const LIST_ROWS = 10_000;
@@ -30,6 +33,45 @@ function benchTemplate(i: number): TemplateFields {
   };
 }
 
+const STATUSES = ['open', 'done', 'handed-over'] as const;
+const BUILD_BATCH = 200; // ~40 columns a row: well inside SQLite's bound-parameter limit
+
+/** Build records with invented customers, spread over a year, in every status. */
+async function insertBuilds(db: Knex, workspaceId: number, userId: number): Promise<void> {
+  const template = await db(TABLES.templates).where('workspace_id', workspaceId).orderBy('id').first();
+  for (let start = 0; start < LIST_ROWS; start += BUILD_BATCH) {
+    const rows = Array.from({ length: Math.min(BUILD_BATCH, LIST_ROWS - start) }, (_, k) => {
+      const i = start + k;
+      const openedOn = new Date(Date.UTC(2026, 0, 1) + (i % 365) * 86_400_000).toISOString().slice(0, 10);
+      const fields = buildSchema.parse({
+        ...emptyBuild(openedOn),
+        customerName: `${WORDS[i % WORDS.length]} customer ${i}`,
+        engineNumber: `BE${String(i).padStart(6, '0')}`,
+        engineDescription: `invented ${WORDS[(i * 7) % WORDS.length]} two-stroke`,
+        templateId: template.id,
+        templateVersion: template.version,
+        technicianId: userId,
+        status: STATUSES[i % STATUSES.length],
+        strokeMm: 40 + (i % 20),
+        rodMm: 85,
+        advanceDeg: 17,
+      });
+      const at = `${openedOn}T${String(i % 24).padStart(2, '0')}:00:00.000Z`;
+      return {
+        ...buildColumns(fields),
+        workspace_id: workspaceId,
+        results_json: JSON.stringify(buildResults(fields, DEFAULT_TOLERANCE_DEG)),
+        version: 1,
+        created_by: userId,
+        updated_by: userId,
+        created_at: at,
+        updated_at: at,
+      };
+    });
+    await db(TABLES.builds).insert(rows);
+  }
+}
+
 export async function addListRows(dbFile: string): Promise<void> {
   const db = knex(sqliteConfig(dbFile));
   try {
@@ -39,6 +81,7 @@ export async function addListRows(dbFile: string): Promise<void> {
     await db.transaction((trx) =>
       insertTemplates(trx, Array.from({ length: LIST_ROWS }, (_, i) => benchTemplate(i)), { workspaceId: shop.id, userId: owner.id, at, action: 'import' }),
     );
+    await db.transaction((trx) => insertBuilds(trx, shop.id, owner.id));
   } finally {
     await db.destroy();
   }
