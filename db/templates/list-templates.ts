@@ -9,8 +9,8 @@ import type { TemplateFields } from '@/lib/templates/template-schema';
 import { selectTemplates } from './select-templates';
 import { rowToFields, rowToTemplate, SORT_COLUMNS, type TemplateRow } from './template-row';
 
-/** Sort keys whose columns are NOT NULL (db/migrations/20261201000600_create_templates.ts). */
-const NOT_NULL_SORT_KEYS: ReadonlySet<TemplateListQuery['sort']> = new Set(['name', 'description', 'rotation', 'version', 'createdAt', 'updatedAt']);
+/** Sort keys that may hold NULL: fields whose schema takes null (unknown measurements); version and the times never do. */
+const NULLABLE_SORT_KEYS: ReadonlySet<string> = new Set(TEMPLATE_FIELD_LIST.filter((field) => field.schema.safeParse(null).success).map((field) => field.key));
 
 /** LIKE pattern for a search term, with the wildcards in the term escaped. */
 function likePattern(term: string): string {
@@ -42,7 +42,7 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   // A search scans every row of the workspace: count the matches in the same scan (a window over the filtered rows).
   if (query.q) ids.select(knex.raw('count(*) over () as total'));
   // Unknown measurements last in either direction; columns that are never NULL skip the term, so an index can give the order.
-  if (!NOT_NULL_SORT_KEYS.has(query.sort)) ids.orderByRaw(`${column} IS NULL`);
+  if (NULLABLE_SORT_KEYS.has(query.sort)) ids.orderByRaw(`${column} IS NULL`);
   const idRows: Array<{ id: number; total?: number }> = await ids
     .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
     .orderBy('t.id', query.dir)
