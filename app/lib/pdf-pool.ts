@@ -21,6 +21,8 @@ const THREADS = Math.max(1, Number(process.env.RIMSCALE_PDF_THREADS) || os.avail
 /** Jobs that may wait for a free worker: about a second of work for the pool at ~20 ms a page. */
 const MAX_QUEUE = Math.max(1, Number(process.env.RIMSCALE_PDF_QUEUE) || 16 * THREADS);
 
+const WORKER_HEAP_MB = Math.max(64, Number(process.env.RIMSCALE_PDF_WORKER_HEAP_MB) || 192);
+
 export class PdfPoolBusy extends Error {
   constructor(readonly retryAfterS: number) {
     super('Every PDF worker is busy and the queue is full');
@@ -41,6 +43,9 @@ function pool(): Piscina<PdfJob, RenderedPdf> {
     maxThreads: THREADS,
     maxQueue: MAX_QUEUE,
     idleTimeout: 60_000,
+    // A ceiling on each worker's heap: the largest sheet (a 600 mm wheel at 0.2 mm pitch, tiled) needs ~80 MB.
+    // A worker that passes it is ended and replaced, its memory returned, instead of the process growing.
+    resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
   });
   return global[POOL];
 }
