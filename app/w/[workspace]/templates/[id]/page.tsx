@@ -23,7 +23,6 @@ export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
 
-
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageAction(slug, 'template.read', `/w/${slug}/templates/${id}`);
