@@ -14,8 +14,8 @@ import { wrapText } from './text-wrap';
 /** `notes`: what the layout could not draw as asked, and why (printed on the sheet as well as returned). */
 export type InfoContent = { title: string; lines: string[]; request: SheetRequest; notes: string[] };
 
-const LINE_GAP = 1.38; // line height as a share of the text size
-const GUTTER_MM = 5;
+const LINE_GAP = 1.3; // line height as a share of the text size
+const GUTTER_MM = 4;
 const MIN_TEXT_COLUMN_MM = 58;
 
 function paragraph(shapes: Shape[], content: string, x: number, y: number, sizeMm: number, widthMm: number, weight: 'normal' | 'bold' = 'normal', role?: string): number {
@@ -68,17 +68,25 @@ function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; h
   y += 0.6;
   for (const row of content.lines) y = paragraph(shapes, row, 1.5, y, TEXT_MM.small, widthMm - 3);
   shapes.push(rect(0, boxTop - 0.4, widthMm, y - boxTop + 1, STROKE_MM.fine, 'none', { role: 'title-block' }));
-  y += 2.5;
+  y += 1.8;
   if (content.notes.length) {
     y = paragraph(shapes, `Layout notes: ${content.notes.join(' · ')}`, 0, y, TEXT_MM.small, widthMm, 'normal', 'layout-notes');
     y += 1;
   }
   y = paragraph(shapes, PRINT_AT_100, 0, y, TEXT_MM.body, widthMm, 'bold', 'print-at-100');
-  y += 1;
-  y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
-  const diagram = whichWayDiagram(content.request, 4, y);
-  shapes.push(...diagram.shapes);
-  y += diagram.heightMm + 1;
+  y += 0.5;
+  if (content.request.kind === 'strip') {
+    y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
+    const diagram = whichWayDiagram(content.request, 4, y);
+    shapes.push(...diagram.shapes);
+    y += diagram.heightMm;
+  } else {
+    // The round diagram (about 30 mm wide with its labels) stands left of the note, which wraps beside it.
+    const diagram = whichWayDiagram(content.request, 6, y);
+    shapes.push(...diagram.shapes);
+    const noteEnd = paragraph(shapes, whichWayNote(content.request), 33, y, TEXT_MM.small, widthMm - 33, 'normal', 'which-way-note');
+    y = Math.max(noteEnd, y + diagram.heightMm);
+  }
   y = paragraph(shapes, CAUTIONS, 0, y, TEXT_MM.small, widthMm, 'normal', 'cautions');
   return { shapes, heightMm: y };
 }
