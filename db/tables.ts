@@ -10,4 +10,8 @@ export const TABLES = {
   templates: 'templates',
   templatePhotos: 'template_photos',
   templateRevisions: 'template_revisions',
+  importReceipts: 'import_receipts',
+  builds: 'builds',
+  buildRevisions: 'build_revisions',
+  buildSends: 'build_sends',
 } as const;
