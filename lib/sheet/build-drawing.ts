@@ -14,12 +14,13 @@ import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
 import { stripLayout } from './strip-layout';
 import { formatDeg } from './scale-marks';
+import { howToSteps } from './how-to';
 
 /** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"). */
 export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
-export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
+export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean; howToOnPiece?: boolean };
 
 /** Pre-scales by the printer correction (before any placing or tiling) and frames the result. */
 function correctedBlock(shapes: readonly Shape[], req: SheetRequest, padMm: number, centreMm?: [number, number]): Block {
@@ -33,7 +34,7 @@ function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): S
     case 'wheel':
     case 'ring': {
       const polar = req.kind === 'wheel' ? wheelLayout(req) : ringLayout(req);
-      return { blocks: [correctedBlock(polar.shapes, req, 1, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false };
+      return { blocks: [correctedBlock(polar.shapes, req, 1, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false, howToOnPiece: polar.howToOnPiece };
     }
     case 'strip': {
       const strip = stripLayout(req, printable);
@@ -182,6 +183,7 @@ function planSheet(request: SheetRequest, options: BuildOptions) {
     title,
     request,
     notes: layout ? sheetNotes(layout) : [],
+    howTo: layout?.howToOnPiece ? [] : howToSteps(request),
     lines: titleBlockLines(request, {
       date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
       ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
