@@ -15,7 +15,8 @@ export type AuditAction =
   | 'invitation-accepted'
   | 'role-changed'
   | 'member-removed'
-  | 'member-left';
+  | 'member-left'
+  | 'build-sent';
 
 export type AuditEntry = {
   action: AuditAction;
