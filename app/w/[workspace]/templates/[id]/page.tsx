@@ -17,7 +17,6 @@ import { listRevisions } from '@/db/templates/revisions';
 import { TemplateBuilds } from '@/components/builds/template-builds';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { listBuilds } from '@/db/builds/list-builds';
-import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };
@@ -99,7 +98,7 @@ export default async function TemplatePage({ params }: Props) {
         </p>
       </section>
 
-      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} dateFormat={dateFormat} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">

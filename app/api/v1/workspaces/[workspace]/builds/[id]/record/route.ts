@@ -5,6 +5,7 @@ import { toFieldIssues } from '@/lib/sheet/sheet-request';
 import { renderBuildRecordPdf } from '@/pdf/render-build-record-pdf';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 import { copyQuerySchema } from '../../_shared/copy-query';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -15,7 +16,7 @@ export async function GET(request: Request, { params }: BuildParams): Promise<Re
     const { access, build } = await buildFor(params, 'build.read');
     const query = copyQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
-    const pdf = await renderBuildRecordPdf(build, access.workspace.name, query.data.paper);
+    const pdf = await renderBuildRecordPdf(build, access.workspace.name, query.data.paper, dateFormatOf(request));
     return new Response(new Uint8Array(pdf), {
       headers: {
         'Content-Type': 'application/pdf',

@@ -6,6 +6,7 @@ import { buildFields } from '@/lib/builds/build-fields';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 import { copyQuerySchema } from '../../_shared/copy-query';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -30,6 +31,6 @@ export async function POST(incoming: Request, { params }: BuildParams): Promise<
       if (err instanceof RateLimitedError) return jsonError(429, `Too many copies sent from this workspace: ${err.message}`);
       throw err;
     }
-    return Response.json({ build: await sendCustomerCopy(access, build, query.data.paper) }, { status: 202 });
+    return Response.json({ build: await sendCustomerCopy(access, build, query.data.paper, dateFormatOf(request)) }, { status: 202 });
   });
 }
