@@ -112,9 +112,8 @@ export function DownloadPanel({
             {status.issues.length > 0 ? (
               <ul className="mt-1 list-disc pl-5 text-xs">
                 {status.issues.map((issue) => (
-                  <li key={`${issue.path}-${issue.message}`}>
-                    <span className="font-mono">{issue.path}</span>: {issue.message}
-                  </li>
+                  // The message names the field by its label; the JSON path stays for API clients only.
+                  <li key={`${issue.path}-${issue.message}`}>{issue.message}</li>
                 ))}
               </ul>
             ) : null}
