@@ -1,7 +1,7 @@
 /**
  * THE authorization table: every route handler (and server action) that checks a session
  * or a workspace role, with the status each kind of caller must get. Append your rows;
- * tests/api/authorization-matrix.test.ts runs every row for every actor against a fresh
+ * tests/app/api/authorization-matrix.test.ts runs every row for every actor against a fresh
  * AccessWorld, and fails if a route file under a `[workspace]` segment, or one that imports
  * app/lib/authz, has an exported method without a row here.
  */
@@ -11,8 +11,8 @@ import { TABLES } from '@/db/tables';
 import { HOLDING_ROLE, type Action } from '@/lib/access-policy';
 import type { AccessWorld } from './access-world';
 import { guardedBy, type Actor } from './policy-expectations';
-import { TEMPLATE_ROUTE_CASES } from '../api/templates-route-cases';
-import { BUILD_ROUTE_CASES } from '../api/builds-route-cases';
+import { TEMPLATE_ROUTE_CASES } from '@/tests/app/api/v1/workspaces/[workspace]/templates/templates-route-cases';
+import { BUILD_ROUTE_CASES } from '@/tests/app/api/v1/workspaces/[workspace]/builds/builds-route-cases';
 
 export { ACTORS, type Actor } from './policy-expectations';
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';

@@ -4,7 +4,7 @@ import { consumePoint, resetAllLimits } from '@/app/lib/rate-limit';
 import { actAs } from '@/tests/support/session';
 import { useAccessWorldPerTest, useMailFakeForFile } from '@/tests/support/route-test-hooks';
 import { readPdfText } from '@/tests/pdf/read-pdf-text';
-import { BUILD_SAMPLE, buildApi } from './builds-support';
+import { BUILD_SAMPLE, buildApi } from '@/tests/app/api/v1/workspaces/[workspace]/builds/builds-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 

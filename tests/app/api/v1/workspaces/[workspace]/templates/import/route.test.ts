@@ -2,7 +2,7 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import Papa from 'papaparse';
 import { CSV_COLUMNS } from '@/lib/templates/csv-columns';
 import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
-import { api, SAMPLE } from './templates-support';
+import { api, SAMPLE } from '@/tests/app/api/v1/workspaces/[workspace]/templates/templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 

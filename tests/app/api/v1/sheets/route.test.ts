@@ -2,7 +2,7 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/sheets/route';
 import { MAX_JSON_BODY_BYTES } from '@/app/lib/api';
-import { readPdfText } from '../pdf/read-pdf-text';
+import { readPdfText } from '@/tests/pdf/read-pdf-text';
 
 /** POST /api/v1/sheets called directly with a Request, no server. */
 

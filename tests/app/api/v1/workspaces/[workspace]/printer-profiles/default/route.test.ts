@@ -8,8 +8,8 @@ import { readPdfText } from '@/tests/pdf/read-pdf-text';
 import { callRoute } from '@/tests/support/call-route';
 import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
 import { actAs } from '@/tests/support/session';
-import { BUILD_SAMPLE, buildApi } from './builds-support';
-import { api, SAMPLE } from './templates-support';
+import { BUILD_SAMPLE, buildApi } from '@/tests/app/api/v1/workspaces/[workspace]/builds/builds-support';
+import { api, SAMPLE } from '@/tests/app/api/v1/workspaces/[workspace]/templates/templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 

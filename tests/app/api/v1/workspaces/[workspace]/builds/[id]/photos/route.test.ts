@@ -5,7 +5,7 @@ import sharp from 'sharp';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { actAs } from '@/tests/support/session';
 import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
-import { BUILD_SAMPLE, buildApi } from './builds-support';
+import { BUILD_SAMPLE, buildApi } from '@/tests/app/api/v1/workspaces/[workspace]/builds/builds-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 

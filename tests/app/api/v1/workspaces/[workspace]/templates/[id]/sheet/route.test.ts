@@ -4,7 +4,7 @@ import { beforeEach, describe, expect, it, vi } from 'vitest';
 import * as sheet from '@/app/api/v1/workspaces/[workspace]/templates/[id]/sheet/route';
 import { actAs } from '@/tests/support/session';
 import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
-import { api, SAMPLE } from './templates-support';
+import { api, SAMPLE } from '@/tests/app/api/v1/workspaces/[workspace]/templates/templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 

@@ -5,7 +5,7 @@ import sharp from 'sharp';
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { actAs } from '@/tests/support/session';
 import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
-import { api, SAMPLE } from './templates-support';
+import { api, SAMPLE } from '@/tests/app/api/v1/workspaces/[workspace]/templates/templates-support';
 
 vi.mock('@/app/lib/session', () => import('@/tests/support/session'));
 

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import { closeDb } from '@/db/knex';
 import { GET } from '@/app/api/health/route';
-import { createTempDb } from '../support/temp-db';
+import { createTempDb } from '@/tests/support/temp-db';
 
 let cleanup: (() => Promise<void>) | undefined;
 afterEach(async () => {

@@ -3,7 +3,7 @@ import path from 'node:path';
 import { afterEach, describe, expect, it } from 'vitest';
 import { staticMigrationSource } from '@/db/migration-source';
 import { TABLES } from '@/db/tables';
-import { createTempDb } from '../support/temp-db';
+import { createTempDb } from '@/tests/support/temp-db';
 
 let cleanup: (() => Promise<void>) | undefined;
 afterEach(async () => {
