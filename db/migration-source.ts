@@ -8,6 +8,7 @@ import * as createBuilds from './migrations/20261203000900_create_builds';
 import * as addDefaultPrinterProfile from './migrations/20261203001000_add_default_printer_profile';
 import * as createBuildPhotos from './migrations/20261203001100_create_build_photos';
 import * as createImportReceipts from './migrations/20261203110000_create_import_receipts';
+import * as templateListSortIndexes from './migrations/20261203001400_template_list_sort_indexes';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
 
@@ -26,6 +27,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261203001000_add_default_printer_profile.ts': addDefaultPrinterProfile,
   '20261203001100_create_build_photos.ts': createBuildPhotos,
   '20261203110000_create_import_receipts.ts': createImportReceipts,
+  '20261203001400_template_list_sort_indexes.ts': templateListSortIndexes,
 };
 
 export const staticMigrationSource: Knex.MigrationSource<string> = {

@@ -23,7 +23,6 @@ export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
 
-
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageAction(slug, 'template.read', `/w/${slug}/templates/${id}`);
@@ -98,7 +97,7 @@ export default async function TemplatePage({ params }: Props) {
         </p>
       </section>
 
-      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} dateFormat={dateFormat} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">
