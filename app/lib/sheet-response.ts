@@ -1,7 +1,9 @@
 import 'server-only';
 import type { DateFormat } from '@/lib/format/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
-import { renderSvg } from '@/lib/sheet/render-svg';
+import { strToU8, zipSync } from 'fflate';
+import type { Drawing } from '@/lib/sheet/drawing';
+import { renderSvg, renderSvgPage } from '@/lib/sheet/render-svg';
 import { sheetFileName } from '@/lib/sheet/sheet-file-name';
 import type { SheetRequest } from '@/lib/sheet/sheet-request';
 import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
@@ -17,16 +19,31 @@ const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
  */
 export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: DateFormat): Promise<Response> {
   const drawing = buildDrawing(sheet, { dateFormat });
-  const body = sheet.format === 'svg' ? renderSvg(drawing) : new Uint8Array(await renderSheetPdf(drawing));
-  return new Response(body, {
+  const file = await sheetFile(sheet, drawing);
+  return new Response(file.body, {
     status: 200,
     headers: {
-      'Content-Type': CONTENT_TYPE[sheet.format],
-      'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
+      'Content-Type': file.contentType,
+      'Content-Disposition': `attachment; filename="${file.name}"`,
       'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
       // What the layout could not draw as asked, and why (also printed on the sheet): percent-encoded JSON list.
       'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(drawing.warnings)),
     },
   });
+}
+
+/**
+ * The file: a PDF (one page per layout page), one plain SVG for a one-page sheet, or for a
+ * multi-page sheet a ZIP of one true-size SVG per page (page-01.svg, page-02.svg, …), so no
+ * page is lost in one unpaged canvas.
+ */
+async function sheetFile(sheet: SheetRequest, drawing: Drawing): Promise<{ body: string | Uint8Array<ArrayBuffer>; contentType: string; name: string }> {
+  const name = sheetFileName(sheet);
+  if (sheet.format === 'pdf') return { body: new Uint8Array(await renderSheetPdf(drawing)), contentType: CONTENT_TYPE.pdf, name };
+  if (drawing.pages.length === 1) return { body: renderSvg(drawing), contentType: CONTENT_TYPE.svg, name };
+  const digits = String(drawing.pages.length).length;
+  const files: Record<string, Uint8Array> = {};
+  drawing.pages.forEach((_, i) => (files[`page-${String(i + 1).padStart(Math.max(2, digits), '0')}.svg`] = strToU8(renderSvgPage(drawing, i))));
+  return { body: new Uint8Array(zipSync(files, { level: 6 })), contentType: 'application/zip', name: name.replace(/\.svg$/, '.zip') };
 }
