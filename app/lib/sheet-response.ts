@@ -6,7 +6,9 @@ import type { Drawing } from '@/lib/sheet/drawing';
 import { renderSvg, renderSvgPage } from '@/lib/sheet/render-svg';
 import { sheetFileName } from '@/lib/sheet/sheet-file-name';
 import type { SheetRequest } from '@/lib/sheet/sheet-request';
-import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
+import { dayFormat, dayStart } from '@/pdf/pdf-job';
+import { pdfPoolBusyResponse, renderPdf } from './pdf-pool';
+import { cachedSheet, matchesIfNoneMatch, sheetCacheKey, type DrawnSheet } from './sheet-cache';
 
 const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
   svg: 'image/svg+xml; charset=utf-8',
@@ -14,36 +16,86 @@ const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
 };
 
 /**
- * A validated sheet request drawn and answered as a PDF or SVG download (the public and the template routes alike),
- * its date written in the reader's `dateFormat`.
+ * Browsers may keep a sheet but must ask again before using it (RFC 9111 §5.2.2.4):
+ * the answer is a 304 while it is unchanged. `private`: template and build sheets
+ * belong to a signed-in member, so no shared cache keeps them.
  */
-export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: DateFormat): Promise<Response> {
-  const drawing = buildDrawing(sheet, { dateFormat });
-  const file = await sheetFile(sheet, drawing);
-  return new Response(file.body, {
+const CACHE_CONTROL = 'private, no-cache';
+
+/** Today (YYYY-MM-DD) in the reader's time zone: the date a sheet drawn now carries in its title block. */
+export function sheetDay(dateFormat: DateFormat, now = new Date()): string {
+  // en-CA writes the calendar date as YYYY-MM-DD.
+  return new Intl.DateTimeFormat('en-CA', { timeZone: dateFormat.timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+}
+
+/** A sheet drawn for a day: SVG here (a millisecond or two), PDF in the worker pool. */
+export async function drawSheet(sheet: SheetRequest, day: string, locale: string): Promise<DrawnSheet> {
+  if (sheet.format === 'svg') {
+    const drawing = buildDrawing(sheet, { date: dayStart(day), dateFormat: dayFormat(locale) });
+    return { body: svgFile(drawing), notes: drawing.warnings };
+  }
+  const { bytes, notes } = await renderPdf({ kind: 'sheet', props: { request: sheet, day, locale } });
+  return { body: bytes, notes };
+}
+
+type DownloadOptions = {
+  /** The incoming request, for its If-None-Match. */
+  request?: Request;
+  /** The stored records the sheet is drawn from, with their versions ('template:12@v3'): part of the cache key. */
+  record?: string;
+  /** The sheet's date (YYYY-MM-DD); today in the reader's time zone unless given. */
+  day?: string;
+};
+
+/**
+ * A validated sheet request answered as a PDF or SVG download (the public, template and build
+ * routes alike), its date written in the reader's `dateFormat`: from the cache when the same sheet
+ * was drawn before, with a strong ETag, and as 304 Not Modified without a body when the caller
+ * already holds those bytes.
+ */
+export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: DateFormat, options: DownloadOptions = {}): Promise<Response> {
+  const day = options.day ?? sheetDay(dateFormat);
+  const { locale } = dateFormat;
+  const key = sheetCacheKey({ request: sheet, day, locale, ...(options.record ? { record: options.record } : {}) });
+  let entry;
+  try {
+    entry = await cachedSheet(key, () => drawSheet(sheet, day, locale));
+  } catch (error) {
+    const busy = pdfPoolBusyResponse(error);
+    if (busy) return busy;
+    throw error;
+  }
+  const validators = { ETag: entry.etag, 'Cache-Control': CACHE_CONTROL };
+  if (matchesIfNoneMatch(options.request?.headers.get('if-none-match') ?? null, entry.etag))
+    return new Response(null, { status: 304, headers: validators });
+  return new Response(entry.body as Uint8Array<ArrayBuffer>, {
     status: 200,
     headers: {
-      'Content-Type': file.contentType,
-      'Content-Disposition': `attachment; filename="${file.name}"`,
-      'Cache-Control': 'no-store',
+      ...validators,
+      // A multi-page sheet as SVG is a ZIP of its pages (svgFile).
+      ...(sheet.format === 'svg' && isZip(entry.body)
+        ? { 'Content-Type': 'application/zip', 'Content-Disposition': `attachment; filename="${sheetFileName(sheet).replace(/\.svg$/, '.zip')}"` }
+        : { 'Content-Type': CONTENT_TYPE[sheet.format], 'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"` }),
       'X-Content-Type-Options': 'nosniff',
       // What the layout could not draw as asked, and why (also printed on the sheet): percent-encoded JSON list.
-      'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(drawing.warnings)),
+      'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(entry.notes)),
     },
   });
 }
 
 /**
- * The file: a PDF (one page per layout page), one plain SVG for a one-page sheet, or for a
- * multi-page sheet a ZIP of one true-size SVG per page (page-01.svg, page-02.svg, …), so no
- * page is lost in one unpaged canvas.
+ * One plain SVG for a one-page sheet; for a multi-page sheet a ZIP of one true-size SVG per page
+ * (page-01.svg, page-02.svg, …), so no page is lost in one unpaged canvas.
  */
-async function sheetFile(sheet: SheetRequest, drawing: Drawing): Promise<{ body: string | Uint8Array<ArrayBuffer>; contentType: string; name: string }> {
-  const name = sheetFileName(sheet);
-  if (sheet.format === 'pdf') return { body: new Uint8Array(await renderSheetPdf(drawing)), contentType: CONTENT_TYPE.pdf, name };
-  if (drawing.pages.length === 1) return { body: renderSvg(drawing), contentType: CONTENT_TYPE.svg, name };
-  const digits = String(drawing.pages.length).length;
+function svgFile(drawing: Drawing): string | Uint8Array {
+  if (drawing.pages.length === 1) return renderSvg(drawing);
+  const digits = Math.max(2, String(drawing.pages.length).length);
   const files: Record<string, Uint8Array> = {};
-  drawing.pages.forEach((_, i) => (files[`page-${String(i + 1).padStart(Math.max(2, digits), '0')}.svg`] = strToU8(renderSvgPage(drawing, i))));
-  return { body: new Uint8Array(zipSync(files, { level: 6 })), contentType: 'application/zip', name: name.replace(/\.svg$/, '.zip') };
+  drawing.pages.forEach((_, i) => (files[`page-${String(i + 1).padStart(digits, '0')}.svg`] = strToU8(renderSvgPage(drawing, i))));
+  return zipSync(files, { level: 6 });
+}
+
+/** A ZIP starts with its local file header signature "PK\x03\x04" (PKWARE APPNOTE.TXT §4.3.7). */
+function isZip(body: Uint8Array): boolean {
+  return body[0] === 0x50 && body[1] === 0x4b && body[2] === 0x03 && body[3] === 0x04;
 }

@@ -8,6 +8,8 @@ import { StatusBadge } from '@/components/builds/status-badge';
 import { ActionButton } from '@/components/templates/template-actions';
 import { findStoredBuild } from '@/db/builds/find-build';
 import { listBuildRevisions } from '@/db/builds/revisions';
+import { listBuildPhotos } from '@/db/builds/photos';
+import { PhotoUpload } from '@/components/templates/photo-upload';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { findTemplate } from '@/db/templates/find-template';
 import { can } from '@/lib/access-policy';
@@ -37,10 +39,11 @@ export default async function BuildPage({ params }: Props) {
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();
   const { build } = stored;
-  const [revisions, template, profile] = await Promise.all([
+  const [revisions, template, profile, photos] = await Promise.all([
     listBuildRevisions(build.id),
     build.templateId ? findTemplate(access.workspace.id, build.templateId) : Promise.resolve(null),
     defaultProfileOf(access.workspace.id),
+    listBuildPhotos(build.id),
   ]);
   const api = `/api/v1/workspaces/${slug}/builds/${build.id}`;
   const finalForMe = build.status === 'handed-over' && !can(access.role, 'build.reopen-handed-over');
@@ -208,11 +211,31 @@ export default async function BuildPage({ params }: Props) {
         {build.notes ? <p className="whitespace-pre-line text-sm">{build.notes}</p> : null}
       </section>
 
+      <section aria-labelledby="photos-heading" className="space-y-3">
+        <h2 id="photos-heading" className="text-lg font-semibold">
+          Photos
+        </h2>
+        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
+        <ul className="flex flex-wrap gap-4">
+          {photos.map((photo) => (
+            <li key={photo.id} className="space-y-1">
+              <a href={`${api}/photos/${photo.id}`}>
+                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
+                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of the engine of ${build.customerName}`} className="h-40 rounded border border-steel-200 object-contain" />
+              </a>
+              <p className="max-w-60 text-xs">{photo.caption}</p>
+              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm="Delete this photo?" /> : null}
+            </li>
+          ))}
+        </ul>
+        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
+      </section>
+
       <section aria-labelledby="print-heading" className="space-y-2">
         <h2 id="print-heading" className="text-lg font-semibold">
           Print the sheets for this build
         </h2>
-        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} />
+        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} workspaceSlug={slug} />
       </section>
 
       <section aria-labelledby="history-heading" className="space-y-2">

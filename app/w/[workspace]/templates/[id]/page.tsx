@@ -17,13 +17,11 @@ import { listRevisions } from '@/db/templates/revisions';
 import { TemplateBuilds } from '@/components/builds/template-builds';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { listBuilds } from '@/db/builds/list-builds';
-import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
-
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
@@ -90,7 +88,7 @@ export default async function TemplatePage({ params }: Props) {
         <h2 id="print-heading" className="text-lg font-semibold">
           Print from this template
         </h2>
-        <PrintLinks template={template} sheetUrl={`${api}/sheet`} />
+        <PrintLinks template={template} sheetUrl={`${api}/sheet`} workspaceSlug={slug} />
         <p className="text-xs text-steel-500">
           {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
         </p>
