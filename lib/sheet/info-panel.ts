@@ -80,7 +80,9 @@ function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; h
     shapes.push(...howToShapes(content.howTo, widthMm, 0, y));
     y += howToRows(content.howTo, widthMm).heightMm + 1.5;
   }
-  if (content.request.kind === 'strip') {
+  if (content.request.kind === 'check') {
+    // Nothing turns on a check sheet: no which-way note.
+  } else if (content.request.kind === 'strip') {
     y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
     const diagram = whichWayDiagram(content.request, 4, y);
     shapes.push(...diagram.shapes);
