@@ -94,7 +94,6 @@ export function titleBlockLines(
     ...(req.targetAdvanceDeg !== undefined ? [`Target: ${req.targetAdvanceDeg}° BTDC (the mark with the wedge)`] : []),
   ];
   if (advance.length) lines.push(advance.join(' · '));
-  if (req.strobeReadable && req.kind !== 'scribe') lines.push('Strobe-readable: large numerals through the advance range');
   lines.push(`Date ${facts.date} · paper ${req.paper} ${req.orientation}`);
   lines.push(`Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`);
   if (req.note) lines.push(`Note: ${req.note}`);
