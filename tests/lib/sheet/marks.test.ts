@@ -84,7 +84,7 @@ describe('port events', () => {
     expect(labels.sort()).toEqual(['Exhaust closes 264°', 'Exhaust opens 96°']);
   });
 
-  // Analytic angles from the direction rule (PRODUCT.md §2 digest in lib/sheet/scale-direction.ts is
+  // Analytic angles from the direction rule (DEVELOPERS.md, "Rotation and carrier"; lib/sheet/scale-direction.ts is
   // what is under test, so the expectation is worked out here by hand): rotating cw, crank c lies
   // (360 − c)° clockwise from TDC as seen.
   it.each([

@@ -87,7 +87,7 @@ describe('how to use this sheet', () => {
     ['window strip', { kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10] }, ['arrow pointing the way the rim moves', 'positive stop']],
     ['scribe chart', { kind: 'scribe', diameterMm: 120 }, ['dividers', 'positive stop', 'scribe the advance mark']],
   ] as const)('%s: numbered steps under the heading, in the trade’s words', (_, input, phrases) => {
-    const { svg } = sheetText(input as unknown as Parameters<typeof req>[0]);
+    const { svg } = sheetText(input as unknown as Parameters<typeof sheetText>[0]);
     expect(svg.all('text').some((t) => t.getAttribute('data-role') === 'how-to-heading' && t.textContent === 'How to use this sheet')).toBe(true);
     const steps = svg.all('text').filter((t) => t.getAttribute('data-role') === 'how-to').map((t) => t.textContent).join(' ');
     expect(steps).toMatch(/^1\. Print at 100 %/);

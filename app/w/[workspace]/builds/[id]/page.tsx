@@ -17,6 +17,8 @@ import { buildFields, type BuildStatus } from '@/lib/builds/build-fields';
 import { statusChangeProblem } from '@/lib/builds/build-status';
 import { degText, mmText } from '@/lib/builds/customer-copy';
 import { parsePathId } from '@/lib/path-id';
+import { requestDateFormat } from '@/app/lib/date-format';
+import { formatDate, formatDateTime } from '@/lib/format/date-format';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Build record' };
@@ -39,11 +41,12 @@ export default async function BuildPage({ params }: Props) {
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();
   const { build } = stored;
-  const [revisions, template, profile, photos] = await Promise.all([
+  const [revisions, template, profile, photos, dateFormat] = await Promise.all([
     listBuildRevisions(build.id),
     build.templateId ? findTemplate(access.workspace.id, build.templateId) : Promise.resolve(null),
     defaultProfileOf(access.workspace.id),
     listBuildPhotos(build.id),
+    requestDateFormat(),
   ]);
   const api = `/api/v1/workspaces/${slug}/builds/${build.id}`;
   const finalForMe = build.status === 'handed-over' && !can(access.role, 'build.reopen-handed-over');
@@ -66,10 +69,10 @@ export default async function BuildPage({ params }: Props) {
             {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
           </p>
           <p className="text-xs text-steel-500">
-            Opened {build.openedOn}
-            {build.finishedOn ? ` · finished ${build.finishedOn}` : ''}
-            {build.handedOverOn ? ` · handed over ${build.handedOverOn}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
-            {build.updatedBy?.name ?? 'a removed user'} at {build.updatedAt}
+            Opened {formatDate(build.openedOn, dateFormat)}
+            {build.finishedOn ? ` · finished ${formatDate(build.finishedOn, dateFormat)}` : ''}
+            {build.handedOverOn ? ` · handed over ${formatDate(build.handedOverOn, dateFormat)}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
+            {build.updatedBy?.name ?? 'a removed user'} at {formatDateTime(build.updatedAt, dateFormat)}
           </p>
           {build.template ? (
             <p className="text-xs text-steel-500">
@@ -122,7 +125,7 @@ export default async function BuildPage({ params }: Props) {
           <ul aria-label="Sent copies" className="text-sm">
             {build.sends.map((send) => (
               <li key={send.id}>
-                Sent to {send.to} at {send.sentAt} by {send.sentBy?.name ?? 'a removed user'}
+                Sent to {send.to} at {formatDateTime(send.sentAt, dateFormat)} by {send.sentBy?.name ?? 'a removed user'}
               </li>
             ))}
           </ul>
@@ -245,7 +248,7 @@ export default async function BuildPage({ params }: Props) {
         <ol className="space-y-1 text-sm">
           {revisions.map((r) => (
             <li key={r.id}>
-              Version {r.version} · {r.action} by {r.user?.name ?? 'a removed user'} at {r.createdAt}:{' '}
+              Version {r.version} · {r.action} by {r.user?.name ?? 'a removed user'} at {formatDateTime(r.createdAt, dateFormat)}:{' '}
               <span className="text-steel-600 dark:text-steel-300">{r.changes.map((c) => buildFields[c.field as keyof typeof buildFields]?.label ?? c.field).join(', ') || 'no field changes'}</span>
             </li>
           ))}

@@ -97,7 +97,7 @@ export default async function TemplatePage({ params }: Props) {
         </p>
       </section>
 
-      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} dateFormat={dateFormat} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">
