@@ -1,7 +1,9 @@
 import 'server-only';
 import type { DateFormat } from '@/lib/format/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
-import { renderSvg } from '@/lib/sheet/render-svg';
+import { strToU8, zipSync } from 'fflate';
+import type { Drawing } from '@/lib/sheet/drawing';
+import { renderSvg, renderSvgPage } from '@/lib/sheet/render-svg';
 import { sheetFileName } from '@/lib/sheet/sheet-file-name';
 import type { SheetRequest } from '@/lib/sheet/sheet-request';
 import { dayFormat, dayStart } from '@/pdf/pdf-job';
@@ -30,7 +32,7 @@ export function sheetDay(dateFormat: DateFormat, now = new Date()): string {
 export async function drawSheet(sheet: SheetRequest, day: string, locale: string): Promise<DrawnSheet> {
   if (sheet.format === 'svg') {
     const drawing = buildDrawing(sheet, { date: dayStart(day), dateFormat: dayFormat(locale) });
-    return { body: renderSvg(drawing), notes: drawing.warnings };
+    return { body: svgFile(drawing), notes: drawing.warnings };
   }
   const { bytes, notes } = await renderPdf({ kind: 'sheet', props: { request: sheet, day, locale } });
   return { body: bytes, notes };
@@ -70,11 +72,30 @@ export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: Dat
     status: 200,
     headers: {
       ...validators,
-      'Content-Type': CONTENT_TYPE[sheet.format],
-      'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
+      // A multi-page sheet as SVG is a ZIP of its pages (svgFile).
+      ...(sheet.format === 'svg' && isZip(entry.body)
+        ? { 'Content-Type': 'application/zip', 'Content-Disposition': `attachment; filename="${sheetFileName(sheet).replace(/\.svg$/, '.zip')}"` }
+        : { 'Content-Type': CONTENT_TYPE[sheet.format], 'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"` }),
       'X-Content-Type-Options': 'nosniff',
       // What the layout could not draw as asked, and why (also printed on the sheet): percent-encoded JSON list.
       'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(entry.notes)),
     },
   });
+}
+
+/**
+ * One plain SVG for a one-page sheet; for a multi-page sheet a ZIP of one true-size SVG per page
+ * (page-01.svg, page-02.svg, …), so no page is lost in one unpaged canvas.
+ */
+function svgFile(drawing: Drawing): string | Uint8Array {
+  if (drawing.pages.length === 1) return renderSvg(drawing);
+  const digits = Math.max(2, String(drawing.pages.length).length);
+  const files: Record<string, Uint8Array> = {};
+  drawing.pages.forEach((_, i) => (files[`page-${String(i + 1).padStart(digits, '0')}.svg`] = strToU8(renderSvgPage(drawing, i))));
+  return zipSync(files, { level: 6 });
+}
+
+/** A ZIP starts with its local file header signature "PK\x03\x04" (PKWARE APPNOTE.TXT §4.3.7). */
+function isZip(body: Uint8Array): boolean {
+  return body[0] === 0x50 && body[1] === 0x4b && body[2] === 0x03 && body[3] === 0x04;
 }

@@ -34,7 +34,7 @@ function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): S
     case 'wheel':
     case 'ring': {
       const polar = req.kind === 'wheel' ? wheelLayout(req) : ringLayout(req);
-      return { blocks: [correctedBlock(polar.shapes, req, 1, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false, howToOnPiece: polar.howToOnPiece };
+      return { blocks: [correctedBlock(polar.shapes, req, 0.5, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false, howToOnPiece: polar.howToOnPiece };
     }
     case 'strip': {
       const strip = stripLayout(req, printable);

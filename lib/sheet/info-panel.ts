@@ -25,6 +25,22 @@ function paragraph(shapes: Shape[], content: string, x: number, y: number, sizeM
   return y + sizeMm + (rows.length - 1) * sizeMm * LINE_GAP + sizeMm * 0.6;
 }
 
+const MIN_TITLE_MM = 2.4;
+
+/**
+ * The title wraps to at most two lines, then shrinks (never below MIN_TITLE_MM) until it does.
+ * Capitals in bold run wider than the average glyph the wrap estimates (about 0.75 em in
+ * DejaVu Sans Bold, from memory), so the wrap width is narrowed by the title's share of them.
+ */
+function titleParagraph(shapes: Shape[], title: string, widthMm: number): number {
+  const letters = title.replace(/\s/g, '');
+  const capitals = letters.length ? letters.replace(/[^A-Z0-9]/g, '').length / letters.length : 0;
+  const fitWidthMm = widthMm / (1 + capitals * (0.75 / 0.62 - 1));
+  let size: number = TEXT_MM.title;
+  while (size > MIN_TITLE_MM && wrapText(title, size, fitWidthMm).length > 2) size = Math.max(MIN_TITLE_MM, size * 0.9);
+  return paragraph(shapes, title, 0, 0, size, fitWidthMm, 'bold', 'title');
+}
+
 function whichWayDiagram(req: SheetRequest, x: number, y: number): { shapes: Shape[]; heightMm: number } {
   const shapes: Shape[] = [];
   if (req.kind === 'strip') {
@@ -64,7 +80,7 @@ function whichWayDiagram(req: SheetRequest, x: number, y: number): { shapes: Sha
 
 function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; heightMm: number } {
   const shapes: Shape[] = [];
-  let y = paragraph(shapes, content.title, 0, 0, TEXT_MM.title, widthMm, 'bold', 'title');
+  let y = titleParagraph(shapes, content.title, widthMm);
   const boxTop = y;
   y += 0.6;
   for (const row of content.lines) y = paragraph(shapes, row, 1.5, y, TEXT_MM.small, widthMm - 3);
@@ -80,7 +96,9 @@ function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; h
     shapes.push(...howToShapes(content.howTo, widthMm, 0, y));
     y += howToRows(content.howTo, widthMm).heightMm + 1.5;
   }
-  if (content.request.kind === 'strip') {
+  if (content.request.kind === 'check') {
+    // Nothing turns on a check sheet: no which-way note.
+  } else if (content.request.kind === 'strip') {
     y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
     const diagram = whichWayDiagram(content.request, 4, y);
     shapes.push(...diagram.shapes);

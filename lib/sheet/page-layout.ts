@@ -17,7 +17,7 @@ export type PageSpec = { sizeMm: Size; marginMm: number; bandMm?: number };
 /** `tileNames[i]` names page i when it is a tile of an oversized block ('A1', 'B2', …). */
 export type PagedDrawing = { sizeMm: Size; shapes: Shape[]; pages: PageLayout[]; centreMm?: [number, number]; warnings: string[]; tileNames?: Array<string | undefined> };
 
-export const BLOCK_GAP_MM = 5;
+export const BLOCK_GAP_MM = 4.5;
 export const TILE_LABEL_BAND_MM = 7;
 export const TILE_OVERLAP_MM = 12;
 const EPS = 1e-6;

@@ -3,7 +3,7 @@ import type { Fill, GraduationLevel, Shape } from './drawing';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
 import { spreadOnTurn } from './label-fan';
-import { labelLanes, type AlongInterval, type PlacedMark, type ScaleMarks } from './scale-marks';
+import { formatDeg, labelLanes, type AlongInterval, type PlacedMark, type ScaleMarks } from './scale-marks';
 import { tangentialText, textInAnnulus, type Annulus } from './annulus-text';
 import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
 import { arrow, line, path, text } from './shapes';
@@ -40,6 +40,9 @@ export type PolarScaleOptions = {
   carrier: Carrier;
   marks: ScaleMarks;
   bandFill: Fill;
+  /** The advance band asked for, [from, to] ° BTDC, for its label. */
+  bandDeg?: readonly [number, number];
+  strobe?: boolean;
   /** How deep (mm from the edge) labels may go: a wheel stops short of its hub hole. */
   maxDepthMm: number;
 };
@@ -91,8 +94,10 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
 
   for (const mark of o.marks.advance) {
     const [x1, y1] = at(mark.alongDeg, 0);
-    const [x2, y2] = at(mark.alongDeg, POLAR_DEPTH_MM.bandTo);
+    // The target runs on past the band and carries a filled wedge at the reading edge.
+    const [x2, y2] = at(mark.alongDeg, mark.target ? POLAR_DEPTH_MM.bandTo + 0.7 : POLAR_DEPTH_MM.bandTo);
     shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg }));
+    if (mark.target) shapes.push(targetWedge(o, mark.alongDeg, at));
     shapes.push(...radialLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
   }
   for (const mark of o.marks.ports) {
@@ -103,6 +108,7 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   }
 
   shapes.push(...tdcPointer(o, at));
+  for (const band of o.marks.bands.slice(0, 1)) shapes.push(...bandLabel(o, band, radius, angle, piece));
   shapes.push(...sideLabels(o, at, angle, busyAlongDeg, piece, narrow ? radius((POLAR_DEPTH_MM.bandFrom + POLAR_DEPTH_MM.bandTo) / 2) : undefined));
   shapes.push(...arrow.shapes);
   return shapes;
@@ -356,4 +362,26 @@ function narrowRotationArrow(o: PolarScaleOptions, radius: (depthMm: number) => 
     shapes: [path(points.slice(0, steps - 1), false, 'none', STROKE_MM.outline, { role: 'rotation-arrow' }), head, ...(words ? [words] : [])],
     blocked: [{ fromAlongDeg: 180 - reachDeg, toAlongDeg: 180 + reachDeg }],
   };
+}
+
+/** A filled wedge on the target mark, its point on the reading edge: the figure the engine is set to. */
+function targetWedge(o: PolarScaleOptions, alongDeg: number, at: At): Shape {
+  const f = o.depthScale;
+  const depth = o.strobe ? 6 : 3.5;
+  const halfDeg = (((o.strobe ? 2.2 : 1.1) * f) / Math.max(o.edgeRadiusMm, 1e-6)) * (180 / Math.PI);
+  return path([at(alongDeg, 0), at(alongDeg - halfDeg, depth), at(alongDeg + halfDeg, depth)], true, 'black', STROKE_MM.fine, { role: 'target-wedge' });
+}
+
+/** The advance band's range in words ("16–20° BTDC"), along the circle just past the band's far end, in the band's zone. */
+function bandLabel(o: PolarScaleOptions, band: AlongInterval, radius: (depthMm: number) => number, angle: (alongDeg: number) => number, piece: Annulus): Shape[] {
+  const [lo, hi] = o.bandDeg ?? [0, 0];
+  if (!(hi > lo)) return [];
+  const words = `${formatDeg(lo)}–${formatDeg(hi)}° BTDC`;
+  const size = 2 * o.depthScale;
+  const r = radius((POLAR_DEPTH_MM.bandFrom + POLAR_DEPTH_MM.bandTo) / 2);
+  const halfDeg = ((textWidthMm(words, size) / 2 + 1) / Math.max(r, 1e-6)) * (180 / Math.PI);
+  // Past whichever end lies farther from TDC, so the label stays clear of the TDC pointer.
+  const farEnd = Math.abs(((band.toAlongDeg + 180) % 360) - 180) >= Math.abs(((band.fromAlongDeg + 180) % 360) - 180) ? band.toAlongDeg + halfDeg : band.fromAlongDeg - halfDeg;
+  const shape = tangentialText(words, size, angle(farEnd), r, piece, { weight: 'bold', data: { role: 'band-label' } });
+  return shape ? [shape] : [];
 }

@@ -1,3 +1,4 @@
+import { shapeBox } from './bounds';
 import type { Drawing, Fill, Shape, ShapeData } from './drawing';
 
 /**
@@ -131,6 +132,36 @@ export function renderSvg(drawing: Drawing): string {
     `<g fill="none" stroke-linecap="butt">`,
   ];
   for (const shape of drawing.shapes) parts.push(shapeToSvg(shape));
+  parts.push('</g></svg>');
+  return parts.join('\n');
+}
+
+/**
+ * One printed page of the drawing as its own true-size SVG (width and height the paper's, in mm):
+ * the part of the drawing the page shows, clipped to its viewport and moved to where it lands on
+ * the page, then the page's own shapes (tile label, band). A multi-page sheet is one of these per page.
+ */
+export function renderSvgPage(drawing: Drawing, pageIndex: number): string {
+  const page = drawing.pages[pageIndex];
+  if (!page) throw new Error(`The sheet has no page ${pageIndex + 1}`);
+  const { viewportMm: v, originMm: [ox, oy], sizeMm } = page;
+  const w = num(sizeMm.widthMm);
+  const h = num(sizeMm.heightMm);
+  const parts: string[] = [
+    `<svg xmlns="http://www.w3.org/2000/svg" width="${w}mm" height="${h}mm" viewBox="0 0 ${w} ${h}" data-page="${pageIndex + 1}" data-pages="${drawing.pages.length}">`,
+    `<title>${escapeXml(`${drawing.title} — page ${pageIndex + 1} of ${drawing.pages.length}`)}</title>`,
+    defs(),
+    `<clipPath id="rimscale-page-view"><rect x="${num(ox)}" y="${num(oy)}" width="${num(v.widthMm)}" height="${num(v.heightMm)}"/></clipPath>`,
+    `<rect x="0" y="0" width="${w}" height="${h}" fill="#fff" data-role="paper"/>`,
+    `<g clip-path="url(#rimscale-page-view)"><g transform="translate(${num(ox - v.xMm)} ${num(oy - v.yMm)})" fill="none" stroke-linecap="butt">`,
+  ];
+  for (const shape of drawing.shapes) {
+    const box = shapeBox(shape);
+    if (box.maxX < v.xMm || box.minX > v.xMm + v.widthMm || box.maxY < v.yMm || box.minY > v.yMm + v.heightMm) continue;
+    parts.push(shapeToSvg(shape));
+  }
+  parts.push('</g></g>', '<g fill="none" stroke-linecap="butt">');
+  for (const shape of page.pageShapes) parts.push(shapeToSvg(shape));
   parts.push('</g></svg>');
   return parts.join('\n');
 }

@@ -11,7 +11,8 @@ import { alongRotationDeg, btdcToCrankDeg, type Carrier } from './scale-directio
  */
 
 export type PlacedMark = { alongDeg: number; crankDeg: number; label: string };
-export type AdvanceMark = PlacedMark & { advanceDeg: number };
+/** `target`: the static advance the engine is set to, drawn heavier and named. */
+export type AdvanceMark = PlacedMark & { advanceDeg: number; target: boolean };
 export type AlongInterval = { fromAlongDeg: number; toAlongDeg: number };
 
 export type ScaleMarks = {
@@ -31,6 +32,7 @@ export type ScaleMarksOptions = {
   /** Number every n-th 10° tick (n divides 36, so split numbering stays symmetric). */
   numberStride: number;
   advanceMarksDeg: readonly number[];
+  targetAdvanceDeg?: number;
   advanceBandDeg?: readonly [number, number];
   portEvents: readonly PortEvent[];
   /** Numerals this close (degrees) to an advance or port mark are left off, so the heavy line never strikes one through. */
@@ -116,14 +118,12 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
   const [fromIndex, toIndex] = range === 'turn' ? [0, HALF_DEG_PER_TURN - 1] : alongIndexRange(range.fromAlongDeg, range.toAlongDeg);
   const ticks = ticksInAlongRange(fromIndex, toIndex, options.finestLevel, carrier);
 
-  const advance: AdvanceMark[] = [...new Set(options.advanceMarksDeg)].flatMap((advanceDeg) => {
+  const target = options.targetAdvanceDeg;
+  const advance: AdvanceMark[] = [...new Set([...options.advanceMarksDeg, ...(target === undefined ? [] : [target])])].flatMap((advanceDeg) => {
     const crankDeg = btdcToCrankDeg(advanceDeg);
-    return alongPositions(crankDeg, range, carrier).map((alongDeg) => ({
-      alongDeg,
-      crankDeg,
-      advanceDeg,
-      label: advanceDeg === 0 ? 'TDC' : `${formatDeg(advanceDeg)}° BTDC`,
-    }));
+    const isTarget = advanceDeg === target;
+    const name = advanceDeg === 0 ? 'TDC' : `${formatDeg(advanceDeg)}° BTDC`;
+    return alongPositions(crankDeg, range, carrier).map((alongDeg) => ({ alongDeg, crankDeg, advanceDeg, target: isTarget, label: isTarget ? `${name} target` : name }));
   });
 
   const ports: PlacedMark[] = options.portEvents.flatMap((port) =>

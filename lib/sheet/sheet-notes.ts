@@ -1,3 +1,4 @@
+import { windowSpanDeg } from './strip-layout';
 import type { SheetKind, SheetRequest } from './sheet-request';
 import { describeCorrection } from './printer-correction';
 import type { GraduationLevel } from './drawing';
@@ -48,12 +49,19 @@ function dimensionsLine(req: SheetRequest, stripLengthMm?: number): string {
     case 'ring':
       return `Ring inner diameter ${mm(req.innerDiameterMm ?? 0)} (ticks read here) · outer ${mm(req.outerDiameterMm ?? 0)}`;
     case 'strip':
-      return `Rim diameter ${mm(req.diameterMm ?? 0)} + paper ${mm(req.paperThicknessMm)} → strip ${stripLengthMm === undefined ? '' : mm(stripLengthMm)} · width ${mm(req.stripWidthMm)}`;
+      return `Rim diameter ${mm(req.diameterMm ?? 0)} + paper ${mm(req.paperThicknessMm)} → strip ${stripLengthMm === undefined ? '' : mm(stripLengthMm)} · width ${mm(req.stripWidthMm)}${windowWords(req, stripLengthMm)}`;
     case 'scribe':
       return `Rim diameter ${mm(req.diameterMm ?? 0)} · ${req.fromDeg}° to ${req.toDeg}° every ${req.stepDeg}°`;
     case 'check':
       return 'Scale check bars and ID-1 card outline only';
   }
+}
+
+/** A window strip's own length: its crank span of the whole strip's π·(D + t). */
+function windowWords(req: SheetRequest, stripLengthMm?: number): string {
+  if (!req.windowCrankDeg || stripLengthMm === undefined) return '';
+  const span = windowSpanDeg(req.windowCrankDeg);
+  return ` · window ${Math.round(span * 100) / 100}° long = ${mm((stripLengthMm * span) / 360)}`;
 }
 
 export function carrierLine(req: SheetRequest): string {
@@ -70,6 +78,8 @@ export function titleBlockLines(
   req: SheetRequest,
   facts: { date: string; keptLevels?: GraduationLevel[]; stripLengthMm?: number },
 ): string[] {
+  // The scale-check sheet has no scale: carrier, rotation and numbering mean nothing there.
+  if (req.kind === 'check') return [dimensionsLine(req), `Date ${facts.date} · paper ${req.paper} ${req.orientation}`, `Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`, ...(req.note ? [`Note: ${req.note}`] : [])];
   const lines = [
     dimensionsLine(req, facts.stripLengthMm),
     carrierLine(req),
@@ -77,7 +87,13 @@ export function titleBlockLines(
     `Numbering: ${req.numbering === 'split' ? 'split (0 at TDC to 180 at BDC both ways, BTDC / ATDC)' : 'full (0–359 in crank order)'}`,
   ];
   if (facts.keptLevels) lines.push(`Graduations: ${facts.keptLevels.map((l) => `${l}°`).join(', ')}`);
-  if (req.advanceMarksDeg.length) lines.push(`Advance marks: ${[...new Set(req.advanceMarksDeg)].sort((a, b) => a - b).map((d) => `${d}°`).join(', ')} BTDC`);
+  // Marks, band and target share a line: the title block stays short enough for a ring and its panel on one page.
+  const advance = [
+    ...(req.advanceMarksDeg.length ? [`Advance marks: ${[...new Set(req.advanceMarksDeg)].sort((a, b) => a - b).map((d) => `${d}°`).join(', ')} BTDC`] : []),
+    ...(req.advanceBandDeg ? [`Advance band: ${Math.min(...req.advanceBandDeg)}–${Math.max(...req.advanceBandDeg)}° BTDC (hatched)`] : []),
+    ...(req.targetAdvanceDeg !== undefined ? [`Target: ${req.targetAdvanceDeg}° BTDC (the mark with the wedge)`] : []),
+  ];
+  if (advance.length) lines.push(advance.join(' · '));
   lines.push(`Date ${facts.date} · paper ${req.paper} ${req.orientation}`);
   lines.push(`Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`);
   if (req.note) lines.push(`Note: ${req.note}`);

@@ -1,5 +1,5 @@
 import { z } from 'zod';
-import { choiceField, lengthField, listField, numberField, textField } from '../fields/builders';
+import { choiceField, flagField, lengthField, listField, numberField, textField } from '../fields/builders';
 import { defineFields, shapeOf } from '../fields/field';
 import { PAPER_NAMES, type PaperName } from './paper';
 
@@ -77,6 +77,10 @@ export const sheetRequestFields = defineFields({
     { label: 'Advance band', unit: '° BTDC' },
     btdcPair('Advance band start', 'Advance band end', 'Advance band must be two angles [from, to], each 0–60° BTDC'),
   ).optional(),
+  // The static advance the engine is set to (a template's or build's, or the user's): drawn heavier and named.
+  targetAdvanceDeg: numberField({ label: 'Target advance', ...BTDC_RANGE_DEG }).optional(),
+  // For timing with a strobe on a running engine. So far it only draws the target wedge bolder (issue 10, step 7 open).
+  strobeReadable: flagField({ label: 'Strobe-readable' }).default(false),
   portEvents: listField(
     { label: 'Port events' },
     z

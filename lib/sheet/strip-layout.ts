@@ -103,6 +103,7 @@ function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment,
     finestLevel,
     numberStride: stride,
     advanceMarksDeg: req.advanceMarksDeg,
+    ...(req.targetAdvanceDeg !== undefined ? { targetAdvanceDeg: req.targetAdvanceDeg } : {}),
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
     numberClearDeg: Math.max(1.5, (numeralWidthMm / 2 + 0.4) / plan.mmPerDeg),
@@ -122,7 +123,7 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   const last = index === plan.segments.length - 1;
 
   for (const band of marks.bands)
-    shapes.push(rect(x(band.fromAlongDeg), top + depths.bandTop, (band.toAlongDeg - band.fromAlongDeg) * plan.mmPerDeg, w - depths.bandTop, STROKE_MM.fine, 'grey15', tag({ role: 'advance-band' })));
+    shapes.push(rect(x(band.fromAlongDeg), top + depths.bandTop, (band.toAlongDeg - band.fromAlongDeg) * plan.mmPerDeg, w - depths.bandTop, STROKE_MM.fine, 'hatch', tag({ role: 'advance-band' })));
   shapes.push(rect(0, top, rowLength, w, STROKE_MM.outline, 'none', tag({ role: 'cut-line' })));
 
   const startRole = index > 0 ? 'segment-start' : plan.window ? 'window-end' : 'seam';
@@ -160,6 +161,12 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   shapes.push(...labels.shapes);
   const occupied = [...labels.occupied, ...tdc.map(pathBox)];
   shapes.push(...tdc);
+  for (const mark of marks.advance.filter((m) => m.target)) {
+    const half = req.strobeReadable ? 1.4 : 0.8;
+    const depth = Math.min(req.strobeReadable ? 4 : 2.5, depths.tick[10]);
+    shapes.push(path([[x(mark.alongDeg), top], [x(mark.alongDeg) - half, top + depth], [x(mark.alongDeg) + half, top + depth]], true, 'black', STROKE_MM.fine, tag({ role: 'target-wedge' })));
+  }
+  shapes.push(...bandLabels(req, marks, x, zone, occupied, tag));
   shapes.push(...sideLabels(req, segment, plan, x, zone, occupied, tag));
   // The in-strip arrow goes where nothing else is.
   const busy: Array<[number, number]> = occupied.map((box) => [box.x0, box.x1]);
@@ -225,21 +232,23 @@ function sideLabels(req: SheetRequest, segment: StripSegment, plan: StripPlan, x
   const from = segment.startAlongDeg;
   const to = from + segment.markedMm / plan.mmPerDeg;
   const shapes: Shape[] = [];
-  const put = (along: number, label: string, role: string) => {
-    const spot = freeLabelSpot(label, size, x(along), zone, occupied);
+  const put = (along: number, label: string, role: string, sizeMm = size) => {
+    const spot = freeLabelSpot(label, sizeMm, x(along), zone, occupied);
     if (!spot) return;
     occupied.push(spot.box);
-    shapes.push(text(spot.xMm, spot.baselineMm, label, size, { anchor: 'middle', weight: 'bold', data: tag({ role, crankDeg: crankFromAlongDeg(along, req.carrier) }) }));
+    shapes.push(text(spot.xMm, spot.baselineMm, label, sizeMm, { anchor: 'middle', weight: 'bold', data: tag({ role, crankDeg: crankFromAlongDeg(along, req.carrier) }) }));
   };
   for (const [preferredCrank, label, role, onSide] of [
     [315, 'BTDC side', 'btdc-side', (c: number) => c > 182 && c < 358],
     [45, 'ATDC side', 'atdc-side', (c: number) => c > 2 && c < 178],
   ] as const) {
     for (const [runFrom, runTo] of sideRuns(from, to, (along) => onSide(crankFromAlongDeg(along, req.carrier)))) {
-      if ((runTo - runFrom) * plan.mmPerDeg < textWidthMm(label, size) + 1) continue;
+      // A short stretch (a window's) gets the label smaller, down to the legible minimum.
+      const runSize = Math.min(size, ((runTo - runFrom) * plan.mmPerDeg - 1) / textWidthMm(label, 1));
+      if (runSize < MIN_STRIP_LABEL_MM) continue;
       const preferred = normalizeDeg(alongRotationDeg(preferredCrank, req.carrier));
       const inRun = [0, -360, 360, 720].map((t) => preferred + t).find((a) => a >= runFrom && a <= runTo);
-      put(inRun ?? (runFrom + runTo) / 2, label, role);
+      put(inRun ?? (runFrom + runTo) / 2, label, role, runSize);
     }
   }
   const bdc = normalizeDeg(alongRotationDeg(180, req.carrier));
@@ -336,4 +345,21 @@ function outsideWindowWarnings(req: SheetRequest): string[] {
       if (!inWindow(crank)) left.push(`${port.name} ${verb} ${portAngleWords(crank, req.numbering)}`);
   if (req.advanceBandDeg && !inWindow(360 - req.advanceBandDeg[0]) && !inWindow(360 - req.advanceBandDeg[1])) left.push(`advance band ${formatDeg(Math.min(...req.advanceBandDeg))}–${formatDeg(Math.max(...req.advanceBandDeg))}° BTDC`);
   return left.length ? [`Not drawn, outside the window: ${left.join(', ')}`] : [];
+}
+
+/** The advance band's range in words inside the strip, next to the band, at the first free spot. */
+function bandLabels(req: SheetRequest, marks: ScaleMarks, x: (a: number) => number, zone: Zone, occupied: InkBox[], tag: (d: ShapeData) => ShapeData): Shape[] {
+  if (!req.advanceBandDeg) return [];
+  const [lo, hi] = [Math.min(...req.advanceBandDeg), Math.max(...req.advanceBandDeg)];
+  const words = `${formatDeg(lo)}–${formatDeg(hi)}° BTDC`;
+  const size = Math.min(2, (zone.bottomMm - zone.topMm) / 1.1);
+  if (size < MIN_STRIP_LABEL_MM) return [];
+  const shapes: Shape[] = [];
+  for (const band of marks.bands) {
+    const spot = freeLabelSpot(words, size, (x(band.fromAlongDeg) + x(band.toAlongDeg)) / 2, zone, occupied);
+    if (!spot) continue;
+    occupied.push(spot.box);
+    shapes.push(text(spot.xMm, spot.baselineMm, words, size, { anchor: 'middle', weight: 'bold', data: tag({ role: 'band-label' }) }));
+  }
+  return shapes;
 }

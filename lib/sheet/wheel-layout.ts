@@ -36,6 +36,7 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     finestLevel: choice.finestLevel,
     numberStride: stride,
     advanceMarksDeg: req.advanceMarksDeg,
+    ...(req.targetAdvanceDeg !== undefined ? { targetAdvanceDeg: req.targetAdvanceDeg } : {}),
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
     numberClearDeg,
@@ -49,6 +50,8 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     carrier: req.carrier,
     marks,
     bandFill: 'hatch',
+    ...(req.advanceBandDeg ? { bandDeg: [Math.min(...req.advanceBandDeg), Math.max(...req.advanceBandDeg)] as const } : {}),
+    strobe: req.strobeReadable,
     maxDepthMm,
   });
   return { shapes, keptLevels: choice.keptLevels, warnings };

@@ -64,6 +64,8 @@ export function templateSheetRequest(
     rotation: t.rotation,
     numbering: options.numbering ?? 'split',
     advanceMarksDeg: advanceMarks(t),
+    // The static advance the engine is set to: drawn as the named target mark.
+    ...(t.staticAdvanceDeg != null ? { targetAdvanceDeg: t.staticAdvanceDeg } : {}),
     portEvents: t.portTargets.map((p) => ({ ...p })),
     title: t.name.slice(0, 80),
     ...(t.description ? { note: t.description.slice(0, 200) } : {}),

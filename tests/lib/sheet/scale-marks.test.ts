@@ -29,10 +29,10 @@ describe('advance band', () => {
     expect(radii).toHaveLength(2);
   });
 
-  it('is a grey rectangle on a strip, from 16° to 20° BTDC', () => {
+  it('is a hatched rectangle on a strip (the wheels’ mono-laser style), from 16° to 20° BTDC', () => {
     const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'strip', diameterMm: 100, advanceBandDeg: [20, 16], paper: 'A3', orientation: 'landscape' }), { date: FIXED_DATE })));
     const band = svg.all('rect').find((r) => r.getAttribute('data-role') === 'advance-band')!;
-    expect(band.getAttribute('fill')).toBe('#d9d9d9');
+    expect(band.getAttribute('fill')).toMatch(/^url\(#/);
     expect(n(band, 'width')).toBeCloseTo((Math.PI * 100.1 * 4) / 360, 3);
     const at = (crank: string) => lines(svg, (el) => el.hasAttribute('data-level') && el.getAttribute('data-crank-deg') === crank)[0]!.x1;
     expect(Math.min(at('344'), at('340'))).toBeCloseTo(n(band, 'x'), 3);
@@ -154,5 +154,43 @@ describe('numerals next to a mark', () => {
       const at = clockwiseDeg(centre, x, y);
       for (const deg of markDeg) expect(Math.abs(((at - deg + 540) % 360) - 180)).toBeGreaterThan(halfDeg * 0.95);
     }
+  });
+});
+
+describe('advance band label and target', () => {
+  it.each([
+    ['wheel', { kind: 'wheel', diameterMm: 150 }],
+    ['ring', { kind: 'ring', innerDiameterMm: 130, outerDiameterMm: 160 }],
+    ['strip', { kind: 'strip', diameterMm: 90 }],
+  ] as const)('a %s names its band "16–20° BTDC" on the piece and in the info panel', (_, input) => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ ...input, advanceBandDeg: [20, 16] }), { date: FIXED_DATE })));
+    const texts = svg.all('text');
+    expect(texts.filter((t) => t.getAttribute('data-role') === 'band-label').map((t) => t.textContent)).toContain('16–20° BTDC');
+    expect(texts.map((t) => t.textContent).join(' ')).toContain('Advance band: 16–20° BTDC');
+  });
+
+  it.each([
+    ['wheel', { kind: 'wheel', diameterMm: 150 }],
+    ['strip', { kind: 'strip', diameterMm: 90 }],
+  ] as const)('a %s draws the target advance longer or with a wedge, and names it', (kind, input) => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ ...input, advanceMarksDeg: [16, 18, 20], targetAdvanceDeg: 18 }), { date: FIXED_DATE })));
+    const marks = lines(svg, (el) => el.getAttribute('data-role') === 'advance');
+    const length = (m: (typeof marks)[number]) => Math.hypot(m.x2 - m.x1, m.y2 - m.y1);
+    const target = marks.find((m) => n(m.el, 'data-advance-deg') === 18)!;
+    const others = marks.filter((m) => n(m.el, 'data-advance-deg') !== 18);
+    if (kind === 'wheel') for (const other of others) expect(length(target)).toBeGreaterThan(length(other));
+    expect(svg.all('path').filter((p) => p.getAttribute('data-role') === 'target-wedge').length).toBeGreaterThan(0);
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label').map((t) => t.textContent);
+    expect(labels).toContain('18° BTDC target');
+    expect(svg.all('text').map((t) => t.textContent).join(' ')).toContain('Target: 18° BTDC');
+  });
+
+  it('a window strip says the window’s own length: its span of π·(D + t)', () => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10] }), { date: FIXED_DATE })));
+    // 50° of π·(150 + 0.1) mm = 65.49 mm.
+    expect(svg.all('text').map((t) => t.textContent).join(' ')).toContain('window 50° long = 65.49 mm');
+    const roles = svg.all('text').map((t) => t.getAttribute('data-role'));
+    expect(roles).toContain('btdc-side');
+    expect(roles).toContain('atdc-side');
   });
 });

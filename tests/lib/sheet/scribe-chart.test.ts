@@ -53,3 +53,15 @@ describe('scribe chart', () => {
     expect(angles.at(-1)).toBe('39.9');
   });
 });
+
+describe('a scribe chart longer than its first page', () => {
+  it('repeats its column header on every page that holds rows (41 rows, 0–40° every 1°)', () => {
+    const drawing = buildDrawing(req({ kind: 'scribe', diameterMm: 120, fromDeg: 0, toDeg: 40, stepDeg: 1 }), { date: FIXED_DATE });
+    const onPage = (y: number) => drawing.pages.findIndex((p) => y >= p.viewportMm.yMm && y < p.viewportMm.yMm + p.viewportMm.heightMm);
+    const texts = drawing.shapes.filter((s) => s.type === 'text');
+    const rowPages = new Set(texts.filter((t) => t.data?.role === 'scribe-angle').map((t) => onPage(t.yMm)));
+    const headerPages = new Set(texts.filter((t) => t.data?.role === 'scribe-header').map((t) => onPage(t.yMm)));
+    expect(texts.filter((t) => t.data?.role === 'scribe-angle')).toHaveLength(41);
+    for (const page of rowPages) expect(headerPages.has(page)).toBe(true);
+  });
+});

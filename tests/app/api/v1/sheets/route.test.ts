@@ -1,7 +1,12 @@
+import { execFileSync } from 'node:child_process';
+import { mkdtempSync, readdirSync, readFileSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import path from 'node:path';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { POST } from '@/app/api/v1/sheets/route';
 import { MAX_JSON_BODY_BYTES } from '@/app/lib/api';
+import { parseSvg } from '@/tests/lib/sheet/svg-measure';
 import { readPdfText } from '@/tests/pdf/read-pdf-text';
 
 /** POST /api/v1/sheets called directly with a Request, no server. */
@@ -129,8 +134,10 @@ describe('POST /api/v1/sheets draws every valid request (fast-check)', () => {
     await fc.assert(
       fc.asyncProperty(validRequest, async (body) => {
         const response = await post({ ...body, format: 'svg' });
+        expect(response.status).toBe(200);
+        // A multi-page sheet comes as a ZIP of page SVGs (checked on its own below); the rest as one SVG.
+        if (response.headers.get('content-type') === 'application/zip') return;
         const text = await response.text();
-        expect(response.status, text.slice(0, 300)).toBe(200);
         expect(response.headers.get('content-type')).toMatch(/^image\/svg\+xml/);
         expect(text).toMatch(/^<svg[^>]* width="[\d.]+mm" height="[\d.]+mm"/); // CSS absolute length unit mm
         expect(text).not.toMatch(/NaN|Infinity/);
@@ -186,6 +193,37 @@ describe('POST /api/v1/sheets answers sheets', () => {
     expect(notes.find((note) => note.startsWith('Not drawn, outside the window'))).toContain('advance mark 55° BTDC');
     const plain = await post({ kind: 'wheel', diameterMm: 150, advanceMarksDeg: [18], portEvents: [{ name: 'EX', opensCrankDeg: 98, closesCrankDeg: 262 }], format: 'svg' });
     expect(JSON.parse(decodeURIComponent(plain.headers.get('x-sheet-layout-notes') ?? ''))).toEqual([]);
+  });
+
+  it('a multi-page sheet as SVG is a ZIP of one true-size SVG per page, each numbered (read by Info-ZIP unzip and @xmldom/xmldom)', async () => {
+    const response = await post({ kind: 'wheel', diameterMm: 400, format: 'svg' });
+    expect(response.status).toBe(200);
+    expect(response.headers.get('content-type')).toBe('application/zip');
+    expect(response.headers.get('content-disposition')).toBe('attachment; filename="rimscale-wheel-400mm.zip"');
+    const dir = mkdtempSync(path.join(tmpdir(), 'rimscale-zip-'));
+    try {
+      writeFileSync(path.join(dir, 'sheet.zip'), new Uint8Array(await response.arrayBuffer()));
+      execFileSync('unzip', ['-q', 'sheet.zip'], { cwd: dir });
+      const pages = readdirSync(dir).filter((f) => f.endsWith('.svg')).sort();
+      expect(pages.length).toBeGreaterThan(1);
+      pages.forEach((file, i) => {
+        expect(file).toBe(`page-${String(i + 1).padStart(2, '0')}.svg`);
+        const svg = parseSvg(readFileSync(path.join(dir, file), 'utf8'));
+        // ISO 216 A4 portrait, in CSS absolute millimetres.
+        expect(svg.root.getAttribute('width')).toBe('210mm');
+        expect(svg.root.getAttribute('height')).toBe('297mm');
+        expect(svg.root.getAttribute('data-page')).toBe(String(i + 1));
+        expect(svg.all('text').some((t) => (t.textContent ?? '').includes(`page ${i + 1} of ${pages.length}`))).toBe(true);
+      });
+    } finally {
+      rmSync(dir, { recursive: true, force: true });
+    }
+  });
+
+  it('a one-page sheet as SVG stays one plain SVG', async () => {
+    const response = await post({ kind: 'wheel', diameterMm: 100, format: 'svg' });
+    expect(response.headers.get('content-type')).toMatch(/^image\/svg\+xml/);
+    expect((await response.text()).startsWith('<svg')).toBe(true);
   });
 
   it('a check sheet has no diameter in its file name', async () => {
