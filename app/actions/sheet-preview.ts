@@ -1,16 +1,18 @@
 'use server';
 import 'server-only';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
+import { needsJoining } from '@/lib/sheet/join-pieces';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetRequestSchema, toFieldIssues, type FieldIssue } from '@/lib/sheet/sheet-request';
 
 export type SheetPreviewResult =
-  | { ok: true; svg: string; warnings: string[]; pageCount: number }
+  | { ok: true; svg: string; warnings: string[]; pageCount: number; joinPieces: boolean }
   | { ok: false; issues: FieldIssue[] };
 
 /**
  * The generator form's live preview: the same schema as POST /api/v1/sheets, the
- * untiled drawing as SVG, the layout's warnings and how many pages the PDF will take.
+ * untiled drawing as SVG, the layout's warnings and how many pages the PDF will take and
+ * whether they are pieces to join.
  * Public on purpose, so no session or role check: the generator works without an
  * account (PRODUCT.md §1, issue 3) and this touches no stored data.
  */
@@ -19,7 +21,7 @@ export async function previewSheet(input: unknown): Promise<SheetPreviewResult> 
   if (!parsed.success) return { ok: false, issues: toFieldIssues(parsed.error) };
   try {
     const drawing = buildDrawing(parsed.data);
-    return { ok: true, svg: renderSvg(drawing), warnings: drawing.warnings, pageCount: drawing.pages.length };
+    return { ok: true, svg: renderSvg(drawing), warnings: drawing.warnings, pageCount: drawing.pages.length, joinPieces: needsJoining(drawing) };
   } catch (error) {
     console.error('previewSheet failed:', error instanceof Error ? error.message : String(error));
     return { ok: false, issues: [{ path: '(body)', message: 'The preview could not be drawn with these values; try other values.' }] };

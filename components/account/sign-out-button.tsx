@@ -7,7 +7,7 @@ export function SignOutButton() {
     <button
       type="button"
       onClick={() => signOut({ callbackUrl: '/' })}
-      className="rounded px-2 py-1 text-sm hover:bg-steel-100 dark:hover:bg-steel-800"
+      className="min-h-11 rounded px-2 text-sm hover:bg-steel-100 dark:hover:bg-steel-800"
     >
       Sign out
     </button>

@@ -18,7 +18,7 @@ export function WorkspaceSwitcher({ workspaces }: { workspaces: Option[] }) {
         onChange={(e) => {
           if (e.target.value) router.push(`/w/${e.target.value}`);
         }}
-        className="max-w-[14rem] rounded-md border border-steel-300 bg-white px-2 py-1 text-sm dark:border-steel-600 dark:bg-steel-900"
+        className="min-h-11 max-w-[14rem] rounded-md border border-steel-300 bg-white px-2 text-sm dark:border-steel-600 dark:bg-steel-900"
       >
         <option value="">Choose a workspace…</option>
         {workspaces.map((w) => (

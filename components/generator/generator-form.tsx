@@ -2,7 +2,7 @@
 
 import { HydratedForm } from '@/components/hydrated-form';
 import { UnitSwitch } from '@/components/calculators/unit-switch';
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
 import { PAPER_NAMES } from '@/lib/sheet/paper';
 import type { IgnoredParam } from '@/lib/generator-prefill';
@@ -51,11 +51,19 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
   useCarrierFollowsKind(form, values.kind);
 
   const validate = (onValid: (request: SheetRequest) => void, onInvalid: () => void) => form.handleSubmit(onValid, onInvalid)();
+  // Below the lg breakpoint the form and the preview share the screen in turns; the bar that switches them stays on top.
+  const [pane, setPane] = useState<Pane>('settings');
 
   return (
     <FormProvider {...form}>
+      <PaneSwitch pane={pane} onChange={setPane} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.05fr)]">
-        <HydratedForm noValidate onSubmit={(e) => e.preventDefault()} aria-label="Sheet settings" className="space-y-4">
+        <HydratedForm
+          noValidate
+          onSubmit={(e) => e.preventDefault()}
+          aria-label="Sheet settings"
+          className={`min-w-0 space-y-4 ${pane === 'preview' ? 'hidden lg:block' : ''}`}
+        >
           {ignored.length > 0 ? <IgnoredParams ignored={ignored} /> : null}
           <FormSection title="Sheet">
             <ChoiceGroup<GeneratorFormValues> name="kind" legend="What to print" options={KIND_OPTIONS} />
@@ -67,7 +75,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
           <PaperSection kind={values.kind} />
         </HydratedForm>
 
-        <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
+        <div id="sheet-preview-pane" className={`min-w-0 space-y-4 lg:sticky lg:top-4 lg:self-start ${pane === 'settings' ? 'hidden lg:block' : ''}`}>
           <SheetPreview request={request} describeIssue={(issue) => messageInTypedUnit(issue, { ...defaultValues, ...values })} />
           <PrintAtActualSize />
           <DownloadPanel validate={validate} />
@@ -75,6 +83,35 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
         </div>
       </div>
     </FormProvider>
+  );
+}
+
+type Pane = 'settings' | 'preview';
+
+/** The phone's two-way switch between the settings and the preview, pinned to the top of the screen. */
+function PaneSwitch({ pane, onChange }: { pane: Pane; onChange: (pane: Pane) => void }) {
+  const button = (value: Pane, label: string) => (
+    <button
+      type="button"
+      aria-pressed={pane === value}
+      onClick={() => {
+        onChange(value);
+        window.scrollTo({ top: 0 });
+      }}
+      className="min-h-11 flex-1 rounded-md px-3 text-sm font-semibold aria-pressed:bg-gauge-600 aria-pressed:text-white"
+    >
+      {label}
+    </button>
+  );
+  return (
+    <div
+      role="group"
+      aria-label="Show"
+      className="sticky top-0 z-20 -mx-4 mb-4 flex gap-2 border-b border-steel-200 bg-steel-50/95 px-4 py-2 backdrop-blur lg:hidden dark:border-steel-800 dark:bg-steel-950/95"
+    >
+      {button('settings', 'Settings')}
+      {button('preview', 'Preview and download')}
+    </div>
   );
 }
 
@@ -311,6 +348,7 @@ function PairField({
               <input
                 id={`${id}-${index}`}
                 type="number"
+                inputMode="decimal"
                 step="any"
                 aria-invalid={error ? true : undefined}
                 aria-describedby={`${id}-help ${id}-error`}

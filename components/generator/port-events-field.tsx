@@ -73,6 +73,7 @@ function PortEventRow({
             aria-label={`Port ${index + 1} opening angle`}
             aria-describedby={errorId}
             type="number"
+            inputMode="decimal"
             step="any"
             className={`${inputClass} font-mono`}
             {...register(names.opens, { valueAsNumber: true })}
@@ -83,6 +84,7 @@ function PortEventRow({
             aria-label={`Port ${index + 1} closing angle`}
             aria-describedby={errorId}
             type="number"
+            inputMode="decimal"
             step="any"
             className={`${inputClass} font-mono`}
             {...register(names.closes, { valueAsNumber: true })}

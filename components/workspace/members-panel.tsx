@@ -5,6 +5,7 @@ import { useState } from 'react';
 import { FormMessage } from '@/components/account/form-controls';
 import { submitJson } from '@/components/account/submit-json';
 import { inputClass } from '@/components/generator/fields';
+import { ScrollRegion } from '@/components/shell/scroll-region';
 import type { Role } from '@/lib/roles';
 import { ROLE_OPTIONS } from '@/lib/access-policy';
 
@@ -29,6 +30,7 @@ export function MembersPanel({ slug, members, myUserId, canManage }: Props) {
 
   return (
     <div className="space-y-3">
+      <ScrollRegion label="Members">
       <table className="w-full max-w-3xl text-left text-sm">
         <caption className="sr-only">Members and their roles</caption>
         <thead className="border-b border-steel-200 text-xs uppercase text-steel-500 dark:border-steel-700">
@@ -96,6 +98,7 @@ export function MembersPanel({ slug, members, myUserId, canManage }: Props) {
           ))}
         </tbody>
       </table>
+      </ScrollRegion>
       <FormMessage tone={message?.tone} message={message?.text} />
     </div>
   );

@@ -2,6 +2,7 @@ import 'server-only';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
 import type { TemplateListQuery } from '@/lib/templates/list-query';
+import { searchWords } from '@/lib/templates/search-words';
 import type { TemplatePage } from '@/lib/templates/template';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 import { selectTemplates } from './select-templates';
@@ -18,8 +19,8 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   const filtered = () => {
     const q = knex(`${TABLES.templates} as t`).where('t.workspace_id', workspaceId);
     if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true' ? 1 : 0);
-    if (query.q) {
-      const pattern = likePattern(query.q);
+    for (const word of searchWords(query.q ?? '')) {
+      const pattern = likePattern(word);
       q.andWhere((w) => w.whereRaw("t.name LIKE ? ESCAPE '\\'", [pattern]).orWhereRaw("t.description LIKE ? ESCAPE '\\'", [pattern]));
     }
     return q;
