@@ -8,8 +8,9 @@ import { PAPER_NAMES } from '@/lib/sheet/paper';
 import type { IgnoredParam } from '@/lib/generator-prefill';
 import type { SheetKind, SheetRequest } from '@/lib/sheet/sheet-request';
 import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
-import { convertLengths, toSheetRequestInput, usesField, LENGTH_FIELDS, type GeneratorFormValues, type LengthUnit } from './form-values';
+import { convertLengths, toSheetRequestInput, usesField, DEFAULT_FORM_VALUES, LENGTH_FIELDS, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
+import { forgetSheet, useSheetUrl } from './use-sheet-url';
 import { messageInTypedUnit } from './inch-messages';
 import { DownloadPanel } from './download-panel';
 import { PortEventsField } from './port-events-field';
@@ -40,7 +41,16 @@ const DIAMETER_HELP: Partial<Record<SheetKind, React.ReactNode>> = {
 };
 
 /** The sheet generator: form on the left, live preview and downloads on the right. */
-export function GeneratorForm({ defaultValues, ignored }: { defaultValues: GeneratorFormValues; ignored: IgnoredParam[] }) {
+export function GeneratorForm({
+  defaultValues,
+  ignored,
+  notices = [],
+}: {
+  defaultValues: GeneratorFormValues;
+  ignored: IgnoredParam[];
+  /** What the link did to the sheet (lib/sheet-link.ts): restored, added to, a note rewritten. */
+  notices?: string[];
+}) {
   const form = useForm<GeneratorFormValues, unknown, SheetRequest>({
     defaultValues,
     resolver: generatorResolver,
@@ -49,6 +59,13 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
   const values = useWatch({ control: form.control }) as GeneratorFormValues;
   const request = toSheetRequestInput({ ...defaultValues, ...values });
   useCarrierFollowsKind(form, values.kind);
+  useSheetUrl({ ...defaultValues, ...values }, defaultValues, form.reset);
+  const [shownNotices, setShownNotices] = useState(notices);
+  const startOver = () => {
+    forgetSheet();
+    setShownNotices([]);
+    form.reset(DEFAULT_FORM_VALUES);
+  };
 
   const validate = (onValid: (request: SheetRequest) => void, onInvalid: () => void) => form.handleSubmit(onValid, onInvalid)();
   // Below the lg breakpoint the form and the preview share the screen in turns; the bar that switches them stays on top.
@@ -58,12 +75,9 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
     <FormProvider {...form}>
       <PaneSwitch pane={pane} onChange={setPane} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.05fr)]">
-        <HydratedForm
-          noValidate
-          onSubmit={(e) => e.preventDefault()}
-          aria-label="Sheet settings"
-          className={`min-w-0 space-y-4 ${pane === 'preview' ? 'hidden lg:block' : ''}`}
-        >
+        <div className={`min-w-0 ${pane === 'preview' ? 'hidden lg:block' : ''}`}>
+        <HydratedForm noValidate onSubmit={(e) => e.preventDefault()} aria-label="Sheet settings" className="space-y-4">
+          <LinkNotices notices={shownNotices} onStartOver={startOver} />
           {ignored.length > 0 ? <IgnoredParams ignored={ignored} /> : null}
           <FormSection title="Sheet">
             <ChoiceGroup<GeneratorFormValues> name="kind" legend="What to print" options={KIND_OPTIONS} />
@@ -73,7 +87,15 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
           {usesField(values.kind, 'advanceMarksDeg') ? <AdvanceSection /> : null}
           {values.kind === 'scribe' ? <ScribeSection /> : null}
           <PaperSection kind={values.kind} />
+          <button
+            type="button"
+            onClick={startOver}
+            className="min-h-11 rounded-md border border-steel-300 px-4 text-sm font-medium hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
+          >
+            Start a new sheet
+          </button>
         </HydratedForm>
+        </div>
 
         <div id="sheet-preview-pane" className={`min-w-0 space-y-4 lg:sticky lg:top-4 lg:self-start ${pane === 'settings' ? 'hidden lg:block' : ''}`}>
           <SheetPreview request={request} describeIssue={(issue) => messageInTypedUnit(issue, { ...defaultValues, ...values })} />
@@ -124,6 +146,22 @@ function useCarrierFollowsKind(form: ReturnType<typeof useForm<GeneratorFormValu
     if (kind === 'wheel') form.setValue('carrier', 'rotating');
     if (kind === 'ring') form.setValue('carrier', 'stationary');
   }, [form, kind]);
+}
+
+function LinkNotices({ notices, onStartOver }: { notices: string[]; onStartOver: () => void }) {
+  if (notices.length === 0) return null;
+  return (
+    <div role="status" className="rounded-md border border-gauge-500/40 bg-gauge-500/5 p-3 text-sm text-steel-800 dark:text-steel-200">
+      <ul className="space-y-0.5">
+        {notices.map((notice) => (
+          <li key={notice}>{notice}</li>
+        ))}
+      </ul>
+      <button type="button" onClick={onStartOver} className="mt-1 min-h-11 text-sm font-medium text-gauge-700 underline dark:text-gauge-300">
+        Start a new sheet instead
+      </button>
+    </div>
+  );
 }
 
 function IgnoredParams({ ignored }: { ignored: IgnoredParam[] }) {

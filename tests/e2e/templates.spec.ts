@@ -76,7 +76,7 @@ test('a technician creates a template and prints a strip from it; a viewer can p
   await expect(viewer.getByRole('button', { name: 'Archive' })).toHaveCount(0);
   await expect(viewer.getByRole('form', { name: 'Add a photo' })).toHaveCount(0);
 
-  const sheet = await downloadFrom(viewer, () => viewer.getByRole('link', { name: 'rim strip PDF' }).click());
+  const sheet = await downloadFrom(viewer, () => viewer.getByRole('link', { name: 'PDF: rim strip, numbered from TDC both ways (ignition)' }).click());
   expect(sheet.file.subarray(0, 5).toString('latin1')).toBe('%PDF-');
   expect(await pdfText(sheet.file)).toContain(name);
   await expect(viewer.getByRole('link', { name: 'Print a rim strip' })).toBeVisible();
