@@ -19,7 +19,6 @@ type Props = { params: Promise<{ workspace: string }> };
 export default async function WorkspaceHomePage({ params }: Props) {
   const { workspace: slug } = await params;
   const access = await pageAction(slug, 'workspace.read', `/w/${slug}`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const { workspace, role, user } = access;
   const may = {
     manageMembers: can(role, 'members.manage'),
