@@ -1,5 +1,6 @@
 import { jsonError } from '@/app/lib/api';
 import { requireAction } from '@/app/lib/authz';
+import { recordAudit } from '@/db/audit-log';
 import { importTemplates } from '@/db/templates/import-templates';
 import { parseTemplatesCsv } from '@/lib/templates/template-csv';
 import { guarded } from '@/app/lib/route-handler';
@@ -52,6 +53,7 @@ export async function POST(request: Request, { params }: WorkspaceParams): Promi
       );
     }
     const ids = await importTemplates(access.workspace.id, access.user.id, parsed.templates);
+    await recordAudit({ action: 'templates-imported', actorUserId: access.user.id, workspaceId: access.workspace.id, detail: { count: ids.length } });
     return Response.json({ imported: ids.length }, { status: 201 });
   });
 }

@@ -1,6 +1,7 @@
 import { randomUUID } from 'node:crypto';
 import { jsonError } from '@/app/lib/api';
 import { deleteObject, putObject } from '@/app/lib/storage';
+import { recordAudit } from '@/db/audit-log';
 import { insertPhoto, listPhotos, publicPhoto } from '@/db/templates/photos';
 import { MAX_PHOTO_BYTES } from '@/lib/templates/photo-type';
 import { reencodePhoto } from '@/app/lib/reencode-photo';
@@ -69,6 +70,12 @@ export async function POST(request: Request, { params }: TemplateParams): Promis
         bytes: photo.data.length,
         caption,
         createdBy: access.user.id,
+      });
+      await recordAudit({
+        action: 'photo-added',
+        actorUserId: access.user.id,
+        workspaceId: access.workspace.id,
+        detail: { templateId: template.id, name: template.name },
       });
       return Response.json({ photo: publicPhoto(stored) }, { status: 201 });
     } catch (err) {
