@@ -9,6 +9,7 @@ export type AuditAction =
   | 'sign-up'
   | 'email-verified'
   | 'password-reset'
+  | 'signed-out'
   | 'workspace-created'
   | 'invitation-sent'
   | 'invitation-accepted'

@@ -1,5 +1,6 @@
 'use server';
 import 'server-only';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { needsJoining } from '@/lib/sheet/join-pieces';
 import { renderSvg } from '@/lib/sheet/render-svg';
@@ -14,13 +15,13 @@ export type SheetPreviewResult =
  * untiled drawing as SVG, the layout's warnings and how many pages the PDF will take and
  * whether they are pieces to join.
  * Public on purpose, so no session or role check: the generator works without an
- * account (PRODUCT.md §1, issue 3) and this touches no stored data.
+ * account (DEVELOPERS.md, "Public pages") and this touches no stored data.
  */
 export async function previewSheet(input: unknown): Promise<SheetPreviewResult> {
   const parsed = sheetRequestSchema.safeParse(input);
   if (!parsed.success) return { ok: false, issues: toFieldIssues(parsed.error) };
   try {
-    const drawing = buildDrawing(parsed.data);
+    const drawing = buildDrawing(parsed.data, { dateFormat: await requestDateFormat() });
     return { ok: true, svg: renderSvg(drawing), warnings: drawing.warnings, pageCount: drawing.pages.length, joinPieces: needsJoining(drawing) };
   } catch (error) {
     console.error('previewSheet failed:', error instanceof Error ? error.message : String(error));

@@ -1,5 +1,5 @@
 import Link from 'next/link';
-import { formatWhen } from '@/components/templates/field-labels';
+import { formatDateTime, type DateFormat } from '@/lib/format/date-format';
 import { ACTIVITY_GROUPS, type ActivityGroup, type ActivityLine } from './activity-words';
 
 const GROUP_LABELS: Record<ActivityGroup, string> = {
@@ -11,7 +11,17 @@ const GROUP_LABELS: Record<ActivityGroup, string> = {
 };
 
 /** Recent activity in words, with a filter that is a plain link per group (works before any script runs). */
-export function ActivityList({ lines, group, hrefFor }: { lines: ActivityLine[]; group: ActivityGroup; hrefFor: (group: ActivityGroup) => string }) {
+export function ActivityList({
+  lines,
+  group,
+  dateFormat,
+  hrefFor,
+}: {
+  lines: ActivityLine[];
+  group: ActivityGroup;
+  dateFormat: DateFormat;
+  hrefFor: (group: ActivityGroup) => string;
+}) {
   const shown = group === 'all' ? lines : lines.filter((line) => line.group === group);
   return (
     <div className="space-y-3">
@@ -33,7 +43,7 @@ export function ActivityList({ lines, group, hrefFor }: { lines: ActivityLine[];
         {shown.map((line) => (
           <li key={line.key} className="flex flex-wrap gap-x-3">
             <time dateTime={line.at} className="font-mono text-xs text-steel-500">
-              {formatWhen(line.at).slice(0, 16)}
+              {formatDateTime(line.at, dateFormat)}
             </time>
             <span>
               {line.href ? (

@@ -60,8 +60,10 @@ function auditWords(record: ActivityRecord & { source: 'audit' }, who: string): 
       return `${who} created the workspace ${text(d.name, '')}`.trim();
     case 'template-deleted':
       return `${who} deleted the template ${text(d.name, '')}`.trim();
-    case 'templates-imported':
-      return `${who} imported ${plural(typeof d.count === 'number' ? d.count : 0, 'template', 'templates')} from a CSV file`;
+    case 'templates-imported': {
+      const updated = typeof d.updated === 'number' && d.updated > 0 ? ` and updated ${plural(d.updated, 'template', 'templates')}` : '';
+      return `${who} imported ${plural(typeof d.count === 'number' ? d.count : 0, 'new template', 'new templates')}${updated} from a CSV file`;
+    }
     case 'photo-added':
       return `${who} added a photo to ${text(d.name, 'a template')}`;
     case 'photo-deleted':

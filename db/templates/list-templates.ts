@@ -1,8 +1,9 @@
 import 'server-only';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
-import type { TemplateListQuery } from '@/lib/templates/list-query';
+import { TEMPLATE_SEARCH_FIELDS, type TemplateListQuery } from '@/lib/templates/list-query';
 import { searchWords } from '@/lib/templates/search-words';
+import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import type { TemplatePage } from '@/lib/templates/template';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 import { selectTemplates } from './select-templates';
@@ -21,14 +22,16 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
     if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true' ? 1 : 0);
     for (const word of searchWords(query.q ?? '')) {
       const pattern = likePattern(word);
-      q.andWhere((w) => w.whereRaw("t.name LIKE ? ESCAPE '\\'", [pattern]).orWhereRaw("t.description LIKE ? ESCAPE '\\'", [pattern]));
+      q.andWhere((w) => {
+        for (const field of TEMPLATE_SEARCH_FIELDS) w.orWhereRaw(`t.${field.column} LIKE ? ESCAPE '\\'`, [pattern]);
+      });
     }
     return q;
   };
   const [counted] = (await filtered().count({ total: '*' })) as Array<{ total: number }>;
   const total = counted?.total ?? 0;
   const column = `t.${SORT_COLUMNS[query.sort]}`;
-  const text = query.sort === 'name' || query.sort === 'description';
+  const text = TEMPLATE_FIELD_LIST.some((field) => field.key === query.sort && field.kind === 'text');
   const idRows: Array<{ id: number }> = await filtered()
     .select('t.id')
     .orderByRaw(`${column} IS NULL`) // unknown measurements last in either direction

@@ -1,3 +1,4 @@
+import { DEFAULT_DATE_FORMAT, formatDate, type DateFormat } from '../format/date-format';
 import { assertFiniteDrawing } from './assert-finite';
 import { checkBlockShapes } from './check-block';
 import { nestBlock, toBlock, type Block } from './block';
@@ -5,15 +6,16 @@ import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackedPageCount, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
 import { addPageBands, pageBandHeightMm } from './page-band';
-import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
+import { DEFAULT_MARGIN_MM, MIN_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
 import { sheetRequestSchema, type SheetRequest } from './sheet-request';
-import { isoDate, sheetTitle, titleBlockLines } from './sheet-notes';
+import { sheetTitle, titleBlockLines } from './sheet-notes';
 import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
 import { stripLayout } from './strip-layout';
 
-export type BuildOptions = { date?: Date; marginMm?: number };
+/** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"). */
+export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
 export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
@@ -130,13 +132,13 @@ function labelWarnings(shapes: readonly Shape[]): string[] {
  */
 export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): Drawing {
   const request = sheetRequestSchema.parse(input);
-  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, 6) };
+  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, MIN_MARGIN_MM) };
   const title = sheetTitle(request);
   const contentFor = (layout?: ScaleLayout): InfoContent => ({
     title,
     request,
     lines: titleBlockLines(request, {
-      date: isoDate(options.date ?? new Date()),
+      date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
       ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
       ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
     }),

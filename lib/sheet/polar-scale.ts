@@ -78,8 +78,9 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   const roomMm = o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f;
   // Radial labels need their length in depth; a narrow ring gets labels along the circle instead.
   const tangential = longestMm > roomMm && roomMm >= labelSize * 1.1;
-  const radial = tangential ? undefined : radialLabeller(o, labelled, longestMm, roomMm, radius, angle, at);
-  const radialLabel = radial ?? tangentialLabeller(o, labelled, longestMm, roomMm, radius, angle);
+  const plan: LabelPlan = { o, marks: labelled, longestMm, roomMm, radius, angle, at };
+  const radial = tangential ? undefined : radialLabeller(plan);
+  const radialLabel = radial ?? tangentialLabeller(plan);
   const busyAlongDeg = [...labelled.map((m) => m.alongDeg), ...(radial?.labelAlongDeg ?? [])];
 
   for (const mark of o.marks.advance) {
@@ -126,6 +127,17 @@ function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, a
 }
 type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
 
+/** What either labeller needs: the labelled marks, the longest label, the depth it may use and the polar mapping. */
+type LabelPlan = {
+  o: PolarScaleOptions;
+  marks: readonly PlacedMark[];
+  longestMm: number;
+  roomMm: number;
+  radius: (depthMm: number) => number;
+  angle: (alongDeg: number) => number;
+  at: At;
+};
+
 const MAX_FAN_MM = 15;
 
 /**
@@ -133,15 +145,7 @@ const MAX_FAN_MM = 15;
  * than a label is thick fan their labels out (label-fan.ts) past a fan zone deep enough for
  * leaders no flatter than 2 across : 1 down, each leader joining a label to its own mark.
  */
-function radialLabeller(
-  o: PolarScaleOptions,
-  marks: readonly PlacedMark[],
-  longestMm: number,
-  roomMm: number,
-  radius: (depthMm: number) => number,
-  angle: (alongDeg: number) => number,
-  at: At,
-): Labeller & { labelAlongDeg: number[] } {
+function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: LabelPlan): Labeller & { labelAlongDeg: number[] } {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
   const labelSize = POLAR_DEPTH_MM.labelSize * f;
@@ -191,14 +195,7 @@ function radialLabeller(
 }
 
 /** Labels along the circle, centred on their mark, in as many rings of text as the depth holds. */
-function tangentialLabeller(
-  o: PolarScaleOptions,
-  marks: readonly PlacedMark[],
-  longestMm: number,
-  roomMm: number,
-  radius: (depthMm: number) => number,
-  angle: (alongDeg: number) => number,
-): Labeller {
+function tangentialLabeller({ o, marks, longestMm, roomMm, radius, angle }: LabelPlan): Labeller {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
   const labelSize = POLAR_DEPTH_MM.labelSize * f;

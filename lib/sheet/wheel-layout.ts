@@ -1,5 +1,6 @@
 import type { GraduationLevel, Shape } from './drawing';
-import { arcPitchMm, chooseLevels } from './graduations';
+import { arcLengthMm } from '../engine/arc-chord';
+import { chooseLevels } from './graduations';
 import { polarScaleShapes, POLAR_DEPTH_MM, TICK_DEPTH_MM } from './polar-scale';
 import { numberStrideFor, scaleMarks } from './scale-marks';
 import type { SheetRequest } from './sheet-request';
@@ -18,11 +19,11 @@ function clampScale(value: number): number {
 }
 
 function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string, maxDepthMm: number) {
-  const choice = chooseLevels(arcPitchMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
+  const choice = chooseLevels(arcLengthMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
   const numeralRadius = edgeRadiusMm + (towards === 'centre' ? -1 : 1) * (TICK_DEPTH_MM[10] + 2.4) * depthScale;
   const numeralWidthMm = textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale);
-  const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), numeralWidthMm);
-  const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcPitchMm(2 * numeralRadius, 1), 1e-6));
+  const stride = numberStrideFor(arcLengthMm(2 * numeralRadius, 10), numeralWidthMm);
+  const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcLengthMm(2 * numeralRadius, 1), 1e-6));
   const drawPorts = req.numbering === 'full';
   const warnings = [...choice.warnings];
   if (req.portEvents.length && !drawPorts) warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');

@@ -61,6 +61,8 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
       res.writeHead(status, { 'content-type': 'application/json' });
       res.end(JSON.stringify(body));
     };
+    // The caught mail holds password-reset links: only this machine may read it, whatever `host` it listens on.
+    if (!isLoopbackPeer(req.socket.remoteAddress)) return send(403, { error: 'The mail fake answers this machine only' });
     if (url.pathname === '/health') return send(200, { ok: true, count: messages.length });
     if (url.pathname !== '/messages') return send(404, { error: 'Try GET /messages' });
     if (req.method === 'DELETE') {
@@ -83,6 +85,12 @@ export async function startMailFake(options: MailFakeOptions = {}): Promise<Mail
         web.close(() => smtp.close(() => resolve()));
       }),
   };
+}
+
+/** 127.0.0.0/8 and ::1 (RFC 1122 §3.2.1.3, RFC 4291 §2.5.3), also written IPv4-mapped. */
+export function isLoopbackPeer(address: string | undefined): boolean {
+  const bare = address?.startsWith('::ffff:') ? address.slice(7) : address;
+  return bare === '::1' || /^127\.\d+\.\d+\.\d+$/.test(bare ?? '');
 }
 
 function loadStored(dataFile: string | undefined): StoredMessage[] {

@@ -4,7 +4,7 @@ import path from 'node:path';
 import nodemailer from 'nodemailer';
 import { afterEach, describe, expect, it } from 'vitest';
 import { decodeQuotedPrintable } from '@/scripts/mail-fake/parse-message';
-import { startMailFake, type MailFake } from '@/scripts/mail-fake/start-mail-fake';
+import { isLoopbackPeer, startMailFake, type MailFake } from '@/scripts/mail-fake/start-mail-fake';
 
 const started: MailFake[] = [];
 afterEach(async () => {
@@ -65,5 +65,25 @@ describe('the local SMTP fake', () => {
 describe('decodeQuotedPrintable', () => {
   it('joins soft line breaks and decodes =XX octets as UTF-8 (RFC 2045 §6.7)', () => {
     expect(decodeQuotedPrintable('caf=C3=A9 is=\r\n one word=3D')).toBe('café is one word=');
+  });
+});
+
+describe('the mail fake HTTP API', () => {
+  it('answers loopback peers only, even when listening on every interface', async () => {
+    const f = await startMailFake({ host: '0.0.0.0' });
+    started.push(f);
+    expect((await fetch(`http://127.0.0.1:${f.httpPort}/messages`)).status).toBe(200);
+    // Reach it through this machine's own network address: the socket peer is then that address, not loopback.
+    const external = Object.values(os.networkInterfaces()).flat().find((i) => i && !i.internal && i.family === 'IPv4');
+    if (external) {
+      const res = await fetch(`http://${external.address}:${f.httpPort}/messages`);
+      expect(res.status).toBe(403);
+    }
+    expect(isLoopbackPeer('::ffff:127.0.0.1')).toBe(true);
+    expect(isLoopbackPeer('127.8.9.10')).toBe(true);
+    expect(isLoopbackPeer('::1')).toBe(true);
+    expect(isLoopbackPeer('192.0.2.2')).toBe(false);
+    expect(isLoopbackPeer('::ffff:10.0.0.1')).toBe(false);
+    expect(isLoopbackPeer(undefined)).toBe(false);
   });
 });

@@ -20,6 +20,8 @@ export type RouteCall = {
   /** Values of the route's dynamic segments; `workspace` defaults to the world's shop. */
   params?: Record<string, string>;
   body?: unknown;
+  /** A body that is not JSON, sent as is with its Content-Type. */
+  raw?: { type: string; body: string };
   /** Appended to the URL, e.g. '?q=50'. */
   search?: string;
 };
@@ -81,6 +83,11 @@ export const ROUTE_MATRIX: RouteCase[] = [
     file: `${V1}/account/verify-email/resend/route.ts`,
     method: 'POST',
     expected: { signedOut: 401, viewer: 202, technician: 202, owner: 202, outsider: 202 },
+  },
+  {
+    file: `${V1}/account/sign-out-everywhere/route.ts`,
+    method: 'POST',
+    expected: { signedOut: 401, viewer: 200, technician: 200, owner: 200, outsider: 200 },
   },
   {
     file: `${V1}/account/password-reset/route.ts`,

@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
+import { formatDate } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
 import { WorkspaceProfiles } from '@/components/printer-check/workspace-profiles';
 import { ShopNameForm } from '@/components/workspace/create-shop-form';
@@ -34,11 +36,13 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
     settings: can(role, 'workspace.settings'),
     audit: can(role, 'workspace.audit'),
   };
-  const [members, invitations, audit] = await Promise.all([
+  const [members, pending, audit, dateFormat] = await Promise.all([
     membersOf(workspace.id),
     may.invite ? pendingInvitations(workspace.id) : Promise.resolve([]),
     may.audit ? workspaceActivity(workspace.id, 200) : Promise.resolve([]),
+    requestDateFormat(),
   ]);
+  const invitations = pending.map(({ expiresAt, ...invitation }) => ({ ...invitation, expiresOn: formatDate(expiresAt, dateFormat) }));
   return (
     <section className="space-y-8">
       <div>
@@ -90,8 +94,9 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
             <div id="activity" className="space-y-2">
               <h3 className="font-medium">Recent activity</h3>
               <ActivityList
-                lines={audit.map((record) => activityLine(record, workspace.slug)).slice(0, 200)}
+                lines={audit.map((record) => activityLine(record, workspace.slug))}
                 group={group}
+                dateFormat={dateFormat}
                 hrefFor={(g) => (g === 'all' ? `/w/${workspace.slug}#activity` : `/w/${workspace.slug}?activity=${g}#activity`)}
               />
             </div>

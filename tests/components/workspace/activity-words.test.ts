@@ -63,7 +63,7 @@ describe('workspace activity in words', () => {
     const all = await lines();
     const texts = all.map((line) => line.text);
     expect(texts).toContain('World owner deleted the template Test single 50');
-    expect(texts).toContain('World technician imported 2 templates from a CSV file');
+    expect(texts).toContain('World technician imported 2 new templates from a CSV file');
     expect(texts).toContain('World technician added a photo to Test single 50');
     expect(texts).toContain('World technician deleted a photo of Test single 50');
     expect(texts.indexOf('World owner deleted the template Test single 50')).toBeLessThan(texts.indexOf('World technician added a photo to Test single 50'));

@@ -1,7 +1,7 @@
 // Source under test: label placement in lib/sheet/polar-scale.ts (side labels, mark labels) and
 // lib/sheet/strip-layout.ts, checked on the SVG output read back with @xmldom/xmldom. Text boxes are
 // estimated in ./text-boxes.ts (size × characters × 0.6 wide). BTDC = 360 − crank angle, ATDC =
-// crank angle (PRODUCT.md §2, the trade's convention).
+// crank angle (DEVELOPERS.md, "Angles", the trade's convention).
 import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';

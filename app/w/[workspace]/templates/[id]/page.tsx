@@ -2,9 +2,11 @@ import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
+import { formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
-import { FIELD_LABELS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
+import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue } from '@/components/templates/field-labels';
 import { PhotoUpload } from '@/components/templates/photo-upload';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
@@ -12,25 +14,12 @@ import { TemplateHistory } from '@/components/templates/template-history';
 import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos } from '@/db/templates/photos';
 import { listRevisions } from '@/db/templates/revisions';
-import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
 
-const FIGURES: TemplateFieldName[] = [
-  'boreMm',
-  'strokeMm',
-  'rodMm',
-  'rotation',
-  'rimDiameterMm',
-  'faceDiameterMm',
-  'flangeDiameterMm',
-  'hubHoleMm',
-  'staticAdvanceDeg',
-  'advanceMarksDeg',
-];
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
@@ -38,7 +27,7 @@ export default async function TemplatePage({ params }: Props) {
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
-  const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
+  const [photos, revisions, dateFormat] = await Promise.all([listPhotos(template.id), listRevisions(template.id), requestDateFormat()]);
   const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
 
@@ -56,7 +45,7 @@ export default async function TemplatePage({ params }: Props) {
           </h1>
           <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
           <p className="text-xs text-steel-500">
-            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatWhen(template.updatedAt)}
+            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
           </p>
         </div>
         {canEdit ? (
@@ -104,7 +93,7 @@ export default async function TemplatePage({ params }: Props) {
           Figures
         </h2>
         <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
-          {FIGURES.map((field) => (
+          {FIGURE_FIELDS.map((field) => (
             <div key={field} className="contents">
               <dt className="text-steel-600 dark:text-steel-300">{FIELD_LABELS[field]}</dt>
               <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field])}</dd>
@@ -161,7 +150,7 @@ export default async function TemplatePage({ params }: Props) {
         <h2 id="history-heading" className="text-lg font-semibold">
           History
         </h2>
-        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} />
+        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} dateFormat={dateFormat} />
       </section>
     </article>
   );

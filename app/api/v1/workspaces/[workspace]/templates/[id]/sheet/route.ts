@@ -1,8 +1,9 @@
 import { z } from 'zod';
 import { jsonError } from '@/app/lib/api';
+import { dateFormatOf } from '@/app/lib/date-format';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
-import { availableSheetKinds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
+import { availableSheetKinds, sheetNeeds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
 import { guarded } from '@/app/lib/route-handler';
 import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
@@ -11,16 +12,11 @@ export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
 
 const querySchema = z.object({
-  kind: z.enum(TEMPLATE_SHEET_KINDS, { error: `Sheet kind (kind) must be one of: ${TEMPLATE_SHEET_KINDS.join(', ')}` }).optional(),
-  format: z.enum(['pdf', 'svg'], { error: 'Format (format) must be one of: pdf, svg' }).default('pdf'),
-  numbering: z.enum(['split', 'full'], { error: 'Numbering (numbering) must be one of: split, full' }).default('split'),
+  kind: z.enum(TEMPLATE_SHEET_KINDS, { error: `Sheet kind must be one of: ${TEMPLATE_SHEET_KINDS.join(', ')}` }).optional(),
+  format: z.enum(['pdf', 'svg'], { error: 'Format must be one of: pdf, svg' }).default('pdf'),
+  numbering: z.enum(['split', 'full'], { error: 'Numbering must be one of: split, full' }).default('split'),
 });
 
-const NEEDS: Record<(typeof TEMPLATE_SHEET_KINDS)[number], string> = {
-  wheel: 'a flywheel face diameter (faceDiameterMm)',
-  ring: 'a rim diameter (rimDiameterMm) and a flange diameter (flangeDiameterMm)',
-  strip: 'a rim diameter (rimDiameterMm)',
-};
 
 /**
  * GET …/templates/[id]/sheet?kind=wheel|ring|strip&format=pdf|svg&numbering=split|full — a sheet
@@ -37,10 +33,10 @@ export async function GET(request: Request, { params }: TemplateParams): Promise
     const kind = query.data.kind ?? kinds[0];
     if (!kind) return jsonError(400, 'This template has no diameters to draw a sheet from', [{ path: 'kind', message: 'Add a face or rim diameter to the template' }]);
     const input = templateSheetRequest(template, kind, { numbering: query.data.numbering });
-    if (!input) return jsonError(400, `A ${kind} sheet needs ${NEEDS[kind]} in the template`, [{ path: 'kind', message: `This template can print: ${kinds.join(', ') || 'nothing yet'}` }]);
+    if (!input) return jsonError(400, `A ${kind} sheet needs ${sheetNeeds(kind)} in the template`, [{ path: 'kind', message: `This template can print: ${kinds.join(', ') || 'nothing yet'}` }]);
     const sheet = sheetRequestSchema.safeParse({ ...input, format: query.data.format });
     if (!sheet.success) return jsonError(400, 'The template’s figures do not make a valid sheet', toFieldIssues(sheet.error));
 
-    return sheetDownloadResponse(sheet.data);
+    return sheetDownloadResponse(sheet.data, dateFormatOf(request));
   });
 }
