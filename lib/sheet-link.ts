@@ -37,7 +37,7 @@ export function resolveSheetLink(link: URLSearchParams, stored: URLSearchParams 
   const params = keep ? withoutInstructions(stored) : new URLSearchParams();
   const linked = withoutInstructions(link);
   for (const [name, value] of linked) params.set(name, value);
-  if (keep && [...linked.keys()].length > 0) notices.push('The link’s values were added to your last sheet; everything else is as you left it.');
+  if (keep) notices.push('The link’s values were added to your last sheet; everything else is as you left it.');
 
   addAdvanceMark(params, link.get(ADD_MARK_PARAM), notices);
   if (params.has('portEvents') && !KINDS_WITH_SCALE.includes(params.get('kind') ?? 'wheel')) params.set('kind', 'wheel');

@@ -12,7 +12,7 @@ export function SignOutEverywhere() {
     <div className="space-y-2">
       <button
         type="button"
-        className="rounded-md border border-steel-300 px-3 py-1.5 text-sm hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
+        className="min-h-11 rounded-md border border-steel-300 px-3 text-sm hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
         onClick={async () => {
           const result = await submitJson('/api/v1/account/sign-out-everywhere', 'POST');
           if (!result.ok) return setMessage(String(result.body.error));

@@ -170,15 +170,18 @@ function queryValue(values: GeneratorFormValues, field: RequestField): string | 
 
 /**
  * The whole form as the sheet maker's query string (read back by `formValuesFromQuery`): lengths in mm (as the
- * form holds them) with the unit on screen beside them, values left at their defaults left out, except the kind and carrier (a flange ring's
- * carrier defaults differently), blank fields left out.
+ * form holds them) with the unit on screen beside them, values left at their defaults left out, except the kind, its
+ * diameters (the figure a reader of the link looks for) and the carrier (a flange ring's defaults differently);
+ * blank fields left out.
  */
+const DIAMETER_FIELDS: RequestField[] = ['diameterMm', 'innerDiameterMm', 'outerDiameterMm'];
+
 export function sheetQuery(values: GeneratorFormValues): string {
   const params = new URLSearchParams();
   for (const field of QUERY_ORDER) {
     const text = queryValue(values, field);
     if (text === null) continue;
-    const always = field === 'kind' || field === 'carrier';
+    const always = field === 'kind' || field === 'carrier' || (DIAMETER_FIELDS.includes(field) && usesField(values.kind, field));
     if (!always && text === queryValue(DEFAULT_FORM_VALUES, field)) continue;
     params.set(field, text);
   }

@@ -10,7 +10,7 @@ export function ResendVerification() {
     <div className="space-y-2">
       <button
         type="button"
-        className="rounded-md border border-steel-300 px-3 py-1.5 text-sm hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
+        className="min-h-11 rounded-md border border-steel-300 px-3 text-sm hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
         onClick={async () => {
           const result = await submitJson('/api/v1/account/verify-email/resend', 'POST');
           setMessage(result.ok ? 'A new confirmation link is on its way (valid for 24 hours).' : String(result.body.error));

@@ -77,8 +77,9 @@ describe('sheetQuery and formValuesFromQuery (the form in the URL)', () => {
     expect(sheetQuery(back.values)).toBe(query);
   });
 
-  it('leaves defaults and blank fields out but always names the kind and carrier', () => {
-    expect(sheetQuery(DEFAULT_FORM_VALUES)).toBe('kind=wheel&carrier=rotating');
+  it('leaves defaults and blank fields out but always names the kind, its diameter and the carrier', () => {
+    expect(sheetQuery(DEFAULT_FORM_VALUES)).toBe('kind=wheel&diameterMm=120&carrier=rotating');
+    expect(sheetQuery({ ...DEFAULT_FORM_VALUES, kind: 'ring' })).toBe('kind=ring&innerDiameterMm=112&outerDiameterMm=150&carrier=rotating');
     expect(sheetQuery({ ...DEFAULT_FORM_VALUES, diameterMm: Number.NaN, title: '  ' })).toBe('kind=wheel&carrier=rotating');
     // A flange ring read against the flywheel’s mark defaults to stationary; a rotating one must survive a reload.
     const ring = formValuesFromQuery(new URLSearchParams(sheetQuery({ ...DEFAULT_FORM_VALUES, kind: 'ring', carrier: 'rotating' }))).values;
