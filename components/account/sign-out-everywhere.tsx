@@ -1,9 +1,9 @@
 'use client';
 
-import { signOut } from 'next-auth/react';
 import { useState } from 'react';
 import { FormMessage } from '@/components/account/form-controls';
 import { submitJson } from '@/components/account/submit-json';
+import { signOutTo } from './sign-out';
 
 /** Ends the account's sessions on every device (a lost phone, a shared shop computer), then this one. */
 export function SignOutEverywhere() {
@@ -16,7 +16,7 @@ export function SignOutEverywhere() {
         onClick={async () => {
           const result = await submitJson('/api/v1/account/sign-out-everywhere', 'POST');
           if (!result.ok) return setMessage(String(result.body.error));
-          await signOut({ callbackUrl: '/sign-in' });
+          await signOutTo('/sign-in');
         }}
       >
         Sign out everywhere
