@@ -62,3 +62,17 @@ test('a role change needs a confirm step that names it; an arrow key in the menu
   expect(writes).toHaveLength(2);
   await context.close();
 });
+
+test('an arrow key in the workspace menu does not leave the page; Open does', async ({ browser }) => {
+  const { context, page } = await contextAs(browser, 'owner');
+  const menu = page.getByRole('combobox', { name: 'Workspace' });
+  await expect(menu).toHaveValue(DEMO_SHOP_SLUG);
+  await menu.focus();
+  await page.keyboard.press('ArrowDown');
+  await expect(menu).not.toHaveValue(DEMO_SHOP_SLUG);
+  await expect(page).toHaveURL(new RegExp(`${shop}$`));
+  const picked = await menu.inputValue();
+  await page.getByRole('button', { name: 'Open' }).click();
+  await expect(page).toHaveURL(new RegExp(`/w/${picked}$`));
+  await context.close();
+});
