@@ -21,7 +21,7 @@ function parseDetail(text: string): Record<string, unknown> {
 
 /** A workspace's activity, newest first (lib/activity-record.ts): the audit log and the template revisions together. */
 export async function workspaceActivity(workspaceId: number, limit = 200, knex: Knex = db()): Promise<ActivityRecord[]> {
-  const [audits, revisions] = await Promise.all([
+  const [audits, revisions, buildRevisions] = await Promise.all([
     knex(`${TABLES.auditLog} as a`)
       .leftJoin(`${TABLES.users} as u`, 'u.id', 'a.actor_user_id')
       .where('a.workspace_id', workspaceId)
@@ -46,6 +46,15 @@ export async function workspaceActivity(workspaceId: number, limit = 200, knex: 
         template_name: string;
         actor_name: string | null;
       }>
+    >,
+    knex(`${TABLES.buildRevisions} as r`)
+      .join(`${TABLES.builds} as b`, 'b.id', 'r.build_id')
+      .leftJoin(`${TABLES.users} as u`, 'u.id', 'r.user_id')
+      .where('b.workspace_id', workspaceId)
+      .select('r.id', 'r.action', 'r.changes_json', 'r.created_at', 'r.build_id', 'b.customer_name', 'b.engine_description', 'u.name as actor_name')
+      .orderBy('r.id', 'desc')
+      .limit(limit) as Promise<
+      Array<{ id: number; action: 'create' | 'update'; changes_json: string; created_at: string; build_id: number; customer_name: string; engine_description: string; actor_name: string | null }>
     >,
   ]);
   const details = audits.map((row) => parseDetail(row.detail));
@@ -77,6 +86,18 @@ export async function workspaceActivity(workspaceId: number, limit = 200, knex: 
         templateName: row.template_name,
         version: row.version,
         restoredFromVersion: row.restored_from_version,
+        changes: JSON.parse(row.changes_json) as FieldChange[],
+      }),
+    ),
+    ...buildRevisions.map(
+      (row): ActivityRecord => ({
+        source: 'build-revision',
+        id: row.id,
+        at: isoUtc(row.created_at),
+        actorName: row.actor_name,
+        action: row.action,
+        buildId: row.build_id,
+        buildName: [row.customer_name, row.engine_description].filter(Boolean).join(', '),
         changes: JSON.parse(row.changes_json) as FieldChange[],
       }),
     ),

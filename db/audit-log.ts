@@ -19,7 +19,8 @@ export type AuditAction =
   | 'template-deleted'
   | 'templates-imported'
   | 'photo-added'
-  | 'photo-deleted';
+  | 'photo-deleted'
+  | 'build-sent';
 
 export type AuditEntry = {
   action: AuditAction;
@@ -36,4 +37,18 @@ export async function recordAudit(entry: AuditEntry, knex: Knex = db()): Promise
     workspace_id: entry.workspaceId ?? null,
     detail: JSON.stringify(entry.detail ?? {}),
   });
+}
+export async function auditOf(workspaceId: number, limit = 50, knex: Knex = db()) {
+  return knex(TABLES.auditLog)
+    .leftJoin(TABLES.users, `${TABLES.users}.id`, `${TABLES.auditLog}.actor_user_id`)
+    .where(`${TABLES.auditLog}.workspace_id`, workspaceId)
+    .select(
+      `${TABLES.auditLog}.id`,
+      `${TABLES.auditLog}.action`,
+      `${TABLES.auditLog}.detail`,
+      `${TABLES.auditLog}.created_at as createdAt`,
+      `${TABLES.users}.name as actorName`,
+    )
+    .orderBy(`${TABLES.auditLog}.id`, 'desc')
+    .limit(limit);
 }

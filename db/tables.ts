@@ -11,4 +11,7 @@ export const TABLES = {
   templatePhotos: 'template_photos',
   templateRevisions: 'template_revisions',
   importReceipts: 'import_receipts',
+  builds: 'builds',
+  buildRevisions: 'build_revisions',
+  buildSends: 'build_sends',
 } as const;

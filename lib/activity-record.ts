@@ -27,4 +27,15 @@ export type ActivityRecord =
       version: number;
       restoredFromVersion: number | null;
       changes: FieldChange[];
+    }
+  | {
+      source: 'build-revision';
+      id: number;
+      at: string;
+      actorName: string | null;
+      action: 'create' | 'update';
+      buildId: number;
+      /** The customer and engine the record is about: "Jo Harker, 125 scooter". */
+      buildName: string;
+      changes: FieldChange[];
     };

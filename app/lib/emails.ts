@@ -1,7 +1,7 @@
 import 'server-only';
 import { formatDateTime, type DateFormat } from '@/lib/format/date-format';
 import { mailName } from '@/lib/text/mail-name';
-import type { OutgoingMail } from './mailer';
+import type { MailAttachment, OutgoingMail } from './mailer';
 
 /** The words of each e-mail the app sends. Links carry the one-time token, nothing else secret. */
 
@@ -35,5 +35,14 @@ export function invitationMail(
     to,
     subject: `${inviter} invites you to ${workspace} on Rimscale`,
     text: `${inviter} invites you to join ${workspace} on Rimscale as ${role}.\n\nOpen this link to accept (valid for 7 days, until ${formatDateTime(expiresAt, dateFormat)}, once). If you have no account yet, you can create one with this address on the way:\n\n${link}\n`,
+  };
+}
+
+export function customerCopyMail(to: string, copy: { shopName: string; customerName: string; engine: string; technician: string }, pdf: MailAttachment): OutgoingMail {
+  return {
+    to,
+    subject: `${copy.shopName}: the timing record of your engine`,
+    text: `Hello ${copy.customerName},\n\nAttached is the timing record of your engine (${copy.engine}) from ${copy.shopName}: top dead centre, the ignition timing as set and the port timing as measured${copy.technician ? `, by ${copy.technician}` : ''}.\n\nKeep it with the engine's papers. The engine maker's manual and local regulations come first.\n\n${copy.shopName}\n`,
+    attachments: [pdf],
   };
 }

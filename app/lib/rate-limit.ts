@@ -30,6 +30,8 @@ const LIMITS = {
   invitePerTarget: { points: 3, duration: DAY },
   // Sign-up says when an address already has an account, so it is limited like a guess.
   signUpPerAddress: { points: 20, duration: HOUR },
+  // A shop mails customers their copies; more than this an hour looks like a loop or abuse of the mailer.
+  buildSendPerWorkspace: { points: 30, duration: HOUR },
 } as const;
 
 export type LimitName = keyof typeof LIMITS;

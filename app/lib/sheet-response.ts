@@ -25,6 +25,8 @@ export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: Dat
       'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
       'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
+      // What the layout could not draw as asked, and why (also printed on the sheet): percent-encoded JSON list.
+      'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(drawing.warnings)),
     },
   });
 }

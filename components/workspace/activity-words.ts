@@ -2,6 +2,7 @@ import type { ActivityRecord } from '@/lib/activity-record';
 import { FIELD_LABELS, formatFieldValue } from '@/components/templates/field-labels';
 import type { FieldChange } from '@/lib/templates/template';
 import type { TemplateFieldName } from '@/lib/templates/template-schema';
+import { buildFields } from '@/lib/builds/build-fields';
 
 /** The activity filter's groups. */
 export const ACTIVITY_GROUPS = ['all', 'members', 'templates', 'photos', 'builds'] as const;
@@ -68,6 +69,8 @@ function auditWords(record: ActivityRecord & { source: 'audit' }, who: string): 
       return `${who} added a photo to ${text(d.name, 'a template')}`;
     case 'photo-deleted':
       return `${who} deleted a photo of ${text(d.name, 'a template')}`;
+    case 'build-sent':
+      return `${who} sent the customer’s copy of a build record to ${text(d.to, 'the customer')}`;
     default: {
       // Entries this page has no words for yet (new kinds of records) still read as words, never as JSON.
       const about = text(d.name, text(d.title, ''));
@@ -76,9 +79,38 @@ function auditWords(record: ActivityRecord & { source: 'audit' }, who: string): 
   }
 }
 
+function buildValue(value: unknown): string {
+  if (value === null || value === undefined || value === '' || (Array.isArray(value) && value.length === 0)) return '—';
+  if (Array.isArray(value) || typeof value === 'object') return 'changed';
+  return String(value);
+}
+
+function buildChangeWords(changes: FieldChange[]): string {
+  const labels = buildFields as unknown as Record<string, { label?: string } | undefined>;
+  const shown = changes.slice(0, SHOWN_CHANGES).map((c) => {
+    const label = (labels[c.field]?.label ?? c.field).toLowerCase();
+    const from = buildValue(c.from);
+    const to = buildValue(c.to);
+    return to === 'changed' ? `${label} changed` : `${label} ${from} → ${to}`;
+  });
+  const more = changes.length - shown.length;
+  return `${shown.join(', ')}${more > 0 ? ` and ${plural(more, 'more change', 'more changes')}` : ''}`;
+}
+
 /** One line of activity in words, with a link to the template it is about when that still exists. */
 export function activityLine(record: ActivityRecord, workspaceSlug: string): ActivityLine {
   const who = record.actorName ?? 'Someone';
+  if (record.source === 'build-revision')
+    return {
+      key: `b${record.id}`,
+      at: record.at,
+      group: 'builds',
+      text:
+        record.action === 'create'
+          ? `${who} opened the build record ${record.buildName}`
+          : `${who} edited the build record ${record.buildName}: ${buildChangeWords(record.changes) || 'nothing changed'}`,
+      href: `/w/${workspaceSlug}/builds/${record.buildId}`,
+    };
   if (record.source === 'revision')
     return {
       key: `r${record.id}`,
@@ -94,5 +126,6 @@ export function activityLine(record: ActivityRecord, workspaceSlug: string): Act
     group: groupOf(record.action),
     text: auditWords(record, who),
     ...(record.action.startsWith('photo-') && typeof templateId === 'number' ? { href: `/w/${workspaceSlug}/templates/${templateId}` } : {}),
+    ...(record.action === 'build-sent' && typeof record.detail.buildId === 'number' ? { href: `/w/${workspaceSlug}/builds/${record.detail.buildId}` } : {}),
   };
 }

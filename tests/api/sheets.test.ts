@@ -177,6 +177,15 @@ describe('POST /api/v1/sheets answers sheets', () => {
     expect(svg).not.toContain('NaN');
   });
 
+  it('says in its answer what it could not draw and why (X-Sheet-Layout-Notes), and nothing when all is drawn', async () => {
+    const response = await post({ kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10], advanceMarksDeg: [18, 55], format: 'svg' });
+    expect(response.status).toBe(200);
+    const notes = JSON.parse(decodeURIComponent(response.headers.get('x-sheet-layout-notes') ?? '')) as string[];
+    expect(notes.find((note) => note.startsWith('Not drawn, outside the window'))).toContain('advance mark 55° BTDC');
+    const plain = await post({ kind: 'wheel', diameterMm: 150, advanceMarksDeg: [18], portEvents: [{ name: 'EX', opensCrankDeg: 98, closesCrankDeg: 262 }], format: 'svg' });
+    expect(JSON.parse(decodeURIComponent(plain.headers.get('x-sheet-layout-notes') ?? ''))).toEqual([]);
+  });
+
   it('a check sheet has no diameter in its file name', async () => {
     const response = await post({ kind: 'check', format: 'svg' });
     expect(response.status).toBe(200);

@@ -87,3 +87,33 @@ describe('the mail fake HTTP API', () => {
     expect(isLoopbackPeer(undefined)).toBe(false);
   });
 });
+
+describe('the local SMTP fake with attachments', () => {
+  it('lists each attachment as { filename, contentType, size } and serves its bytes', async () => {
+    const f = await fake();
+    // nodemailer writes the MIME multipart message (RFC 2046) with a base64 part; the fake reads it back.
+    const bytes = Buffer.concat([Buffer.from('%PDF-1.3\n'), Buffer.alloc(5000, 0xa7)]);
+    await nodemailer.createTransport(`smtp://127.0.0.1:${f.smtpPort}`).sendMail({
+      from: 'app@rimscale.test',
+      to: 'c@example.test',
+      subject: 'With a file',
+      text: 'See the attached record.',
+      attachments: [{ filename: 'timing-record-7.pdf', content: bytes, contentType: 'application/pdf' }],
+    });
+    const base = `http://127.0.0.1:${f.httpPort}`;
+    const [message] = (await (await fetch(`${base}/messages`)).json()) as Array<{ id: number; text: string; attachments: unknown[] }>;
+    expect(message!.text.trim()).toBe('See the attached record.');
+    expect(message!.attachments).toEqual([{ filename: 'timing-record-7.pdf', contentType: 'application/pdf', size: bytes.length }]);
+    const served = await fetch(`${base}/messages/${message!.id}/attachments/0`);
+    expect(served.headers.get('content-type')).toBe('application/pdf');
+    expect(Buffer.from(await served.arrayBuffer()).equals(bytes)).toBe(true);
+    expect((await fetch(`${base}/messages/${message!.id}/attachments/1`)).status).toBe(404);
+  });
+
+  it('lists no attachments for a plain text message', async () => {
+    const f = await fake();
+    await send(f, { to: 'd@example.test', subject: 'plain', text: 'just text' });
+    const [message] = (await (await fetch(`http://127.0.0.1:${f.httpPort}/messages`)).json()) as Array<{ attachments: unknown[] }>;
+    expect(message!.attachments).toEqual([]);
+  });
+});

@@ -12,6 +12,7 @@ import { HOLDING_ROLE, type Action } from '@/lib/access-policy';
 import type { AccessWorld } from './access-world';
 import { guardedBy, type Actor } from './policy-expectations';
 import { TEMPLATE_ROUTE_CASES } from '../api/templates-route-cases';
+import { BUILD_ROUTE_CASES } from '../api/builds-route-cases';
 
 export { ACTORS, type Actor } from './policy-expectations';
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -187,9 +188,19 @@ export const ROUTE_MATRIX: RouteCase[] = [
     },
     ...guardedBy('printer-profile.edit', 204),
   },
+  { file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`, method: 'GET', ...guardedBy('printer-profile.read', 200) },
+  {
+    file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`,
+    method: 'PUT',
+    call: () => ({ body: { profileId: null } }),
+    ...guardedBy('printer-profile.set-default', 200),
+  },
 
   // Template library (issue 6).
   ...TEMPLATE_ROUTE_CASES,
+
+  // Build records (issue 9).
+  ...BUILD_ROUTE_CASES,
 ];
 
 /** Server actions that check the session; empty while every write goes through a route handler. */

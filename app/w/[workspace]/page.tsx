@@ -54,6 +54,9 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
           <Link href={`/w/${workspace.slug}/templates`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
             Engine templates
           </Link>
+          <Link href={`/w/${workspace.slug}/builds`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
+            Build records
+          </Link>
           <Link href="/printer-check" className="font-medium text-gauge-700 underline dark:text-gauge-300">
             Printer check
           </Link>
@@ -67,7 +70,7 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
 
       <div className="space-y-2">
         <h2 className="text-lg font-semibold">Printer profiles</h2>
-        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} />
+        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} canSetDefault={can(role, 'printer-profile.set-default')} />
       </div>
 
       {may.settings || may.invite || may.audit ? (

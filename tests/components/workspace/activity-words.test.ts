@@ -84,3 +84,13 @@ describe('workspace activity in words', () => {
     ]);
   });
 });
+
+describe('build records in the activity', () => {
+  it('says who opened and who edited which record, old → new, and links to it', () => {
+    const base = { source: 'build-revision' as const, at: '2026-12-03T08:00:00.000Z', actorName: 'Teo Lindqvist', buildId: 7, buildName: 'Jo Harker, 125 scooter' };
+    const opened = activityLine({ ...base, id: 1, action: 'create', changes: [] }, 'harbour-lane');
+    expect(opened).toMatchObject({ group: 'builds', text: 'Teo Lindqvist opened the build record Jo Harker, 125 scooter', href: '/w/harbour-lane/builds/7' });
+    const edited = activityLine({ ...base, id: 2, action: 'update', changes: [{ field: 'customerPhone', from: '', to: '0400 000' }] }, 'harbour-lane');
+    expect(edited.text).toBe('Teo Lindqvist edited the build record Jo Harker, 125 scooter: customer phone — → 0400 000');
+  });
+});

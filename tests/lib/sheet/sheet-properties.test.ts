@@ -107,5 +107,6 @@ describe('any valid request', () => {
       }),
       { numRuns: 120, seed: 20261201 },
     );
-  });
+    // 120 whole sheets: well over the default 30 s on a shared, loaded machine.
+  }, 240_000);
 });

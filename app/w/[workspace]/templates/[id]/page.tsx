@@ -14,6 +14,9 @@ import { TemplateHistory } from '@/components/templates/template-history';
 import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos } from '@/db/templates/photos';
 import { listRevisions } from '@/db/templates/revisions';
+import { TemplateBuilds } from '@/components/builds/template-builds';
+import { defaultProfileOf } from '@/db/printer-profiles';
+import { listBuilds } from '@/db/builds/list-builds';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };
@@ -27,7 +30,15 @@ export default async function TemplatePage({ params }: Props) {
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
-  const [photos, revisions, dateFormat] = await Promise.all([listPhotos(template.id), listRevisions(template.id), requestDateFormat()]);
+  const [photos, revisions, builds, profile, dateFormat] = await Promise.all([
+    listPhotos(template.id),
+    listRevisions(template.id),
+    can(access.role, 'build.read')
+      ? listBuilds(access.workspace.id, { q: '', status: 'all', template: template.id, sort: 'updatedAt', dir: 'desc', page: 1, pageSize: 20 })
+      : Promise.resolve(null),
+    defaultProfileOf(access.workspace.id),
+    requestDateFormat(),
+  ]);
   const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
 
@@ -84,9 +95,14 @@ export default async function TemplatePage({ params }: Props) {
         </h2>
         <PrintLinks template={template} sheetUrl={`${api}/sheet`} />
         <p className="text-xs text-steel-500">
+          {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
+        </p>
+        <p className="text-xs text-steel-500">
           Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
         </p>
       </section>
+
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">
