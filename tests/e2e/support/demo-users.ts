@@ -34,13 +34,23 @@ export async function firstTemplateId(page: Page): Promise<number> {
   return ((await response.json()) as { items: Array<{ id: number }> }).items[0]!.id;
 }
 
+/** The first build record of the demo shop, or null when the seed has none. */
+async function firstBuildId(page: Page): Promise<number | null> {
+  const response = await page.request.get(`/api/v1/workspaces/${DEMO_SHOP_SLUG}/builds?pageSize=1`);
+  if (!response.ok()) return null;
+  return ((await response.json()) as { items: Array<{ id: number }> }).items[0]?.id ?? null;
+}
+
 /** Every page of the app a role can reach, for the phone and accessibility sweeps. */
 export async function pagesFor(page: Page, role: DemoRole | null): Promise<string[]> {
   const publicPages = ['/', '/printer-check', '/calculators', '/calculators/tdc', '/calculators/piston-drop', '/calculators/port-events', '/calculators/arc-chord', '/sign-in', '/sign-up', '/reset-password', '/not-here'];
   if (!role) return publicPages;
   const id = await firstTemplateId(page);
   const shop = `/w/${DEMO_SHOP_SLUG}`;
-  const pages = ['/', '/printer-check', '/calculators/port-events', '/account', shop, `${shop}/templates`, `${shop}/templates/${id}`];
-  if (role !== 'viewer') pages.push(`${shop}/templates/new`, `${shop}/templates/${id}/edit`, `${shop}/templates/import`);
+  const pages = ['/', '/printer-check', '/calculators/port-events', '/account', shop, `${shop}/templates`, `${shop}/templates/${id}`, `${shop}/builds`];
+  const buildId = await firstBuildId(page);
+  if (buildId) pages.push(`${shop}/builds/${buildId}`);
+  if (role !== 'viewer') pages.push(`${shop}/templates/new`, `${shop}/templates/${id}/edit`, `${shop}/templates/import`, `${shop}/builds/new`);
+  if (role !== 'viewer' && buildId) pages.push(`${shop}/builds/${buildId}/edit`);
   return pages;
 }
