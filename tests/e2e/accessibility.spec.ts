@@ -77,3 +77,19 @@ test('a whole sheet by keyboard alone: kind, diameter, numbering, title, downloa
   // The file name says kind and size: the download carried what was typed.
   expect((await download).suggestedFilename()).toBe('rimscale-strip-128.4mm-keyboard-sheet.pdf');
 });
+
+test('a whole build record by keyboard alone: customer, engine number, create', async ({ browser }) => {
+  const { context, page } = await contextAs(browser, 'technician');
+  await page.goto(`/w/${DEMO_SHOP_SLUG}/builds/new`);
+  const customer = page.getByLabel('Customer name');
+  await expect(customer).toBeEnabled();
+  await page.keyboard.press('Tab');
+  await tabTo(page, 'the customer name', customer, 120);
+  await page.keyboard.type('Keyboard Customer');
+  await tabTo(page, 'the engine number', page.getByLabel('Engine number'));
+  await page.keyboard.type('KB-001');
+  await tabTo(page, 'the create button', page.getByRole('button', { name: 'Create record' }), 200);
+  await page.keyboard.press('Enter');
+  await expect(page.getByRole('heading', { level: 1, name: /Keyboard Customer/ })).toBeVisible();
+  await context.close();
+});
