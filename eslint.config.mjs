@@ -11,7 +11,7 @@ const SERVER_PACKAGES = ['knex', 'better-sqlite3', 'sharp', 'nodemailer', 'smtp-
 const zone = (target, from, message) => ({ target, from, message });
 
 export default defineConfig([
-  globalIgnores(['.next/**', '.next-*/**', 'out/**', 'data/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts']),
+  globalIgnores(['build/**', '.next/**', '.next-*/**', 'out/**', 'data/**', 'test-results/**', 'playwright-report/**', 'next-env.d.ts']),
   ...nextCoreWebVitals,
   ...nextTypescript,
   ...tseslint.configs.recommended,

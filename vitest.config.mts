@@ -14,6 +14,8 @@ export default defineConfig({
     exclude: ['tests/e2e/**', 'node_modules/**'],
     environment: 'node',
     pool: 'forks',
+    // PDFs render in worker threads that load build/pdf-worker.mjs (app/lib/pdf-pool.ts).
+    globalSetup: ['tests/support/build-pdf-worker.ts'],
     testTimeout: 30_000,
     hookTimeout: 60_000,
   },

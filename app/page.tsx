@@ -1,6 +1,7 @@
 import { cookies } from 'next/headers';
 import { GeneratorForm } from '@/components/generator/generator-form';
 import { formValuesFromQuery } from '@/components/generator/form-values';
+import { generatorWorkspaceProfiles } from '@/app/lib/generator-workspace';
 import { resolveSheetLink } from '@/lib/sheet-link';
 import { SHEET_COOKIE } from '@/lib/sheet-link-params';
 
@@ -27,11 +28,13 @@ function storedSheet(text: string | undefined): URLSearchParams | null {
 /**
  * The sheet generator: public, no sign-in. The form lives in the query string (a reload or a shared link shows
  * the same sheet); links from the calculators and templates add to the browser's last sheet (lib/sheet-link.ts).
+ * A signed-in member is offered their workspace's printer profiles (`?workspace=`), its default chosen first.
  */
 export default async function HomePage({ searchParams }: { searchParams: SearchParams }) {
   const link = toSearchParams(await searchParams);
   const { params, notices } = resolveSheetLink(link, storedSheet((await cookies()).get(SHEET_COOKIE)?.value));
   const { values, ignored } = formValuesFromQuery(params);
+  const workspace = await generatorWorkspaceProfiles(params.get('workspace') ?? undefined);
   return (
     <div className="space-y-6">
       <header className="max-w-3xl space-y-2">
@@ -41,7 +44,7 @@ export default async function HomePage({ searchParams }: { searchParams: SearchP
           your figures as you type; check your printer once and every sheet is corrected for it.
         </p>
       </header>
-      <GeneratorForm key={params.toString()} defaultValues={values} ignored={ignored} notices={notices} />
+      <GeneratorForm key={params.toString()} defaultValues={values} ignored={ignored} notices={notices} workspace={workspace} />
     </div>
   );
 }

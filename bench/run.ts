@@ -5,7 +5,7 @@
  * Optional: BENCH_URL=http://localhost:PORT also times POST /api/v1/sheets on a
  * running `next start`.
  */
-import { writeFileSync } from 'node:fs';
+import { readFileSync, writeFileSync } from 'node:fs';
 import os from 'node:os';
 import path from 'node:path';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
@@ -140,7 +140,14 @@ async function main(): Promise<void> {
     rows: rows.map((row) => ({ ...row, result: verdict(row) || undefined })),
   };
   const file = path.join(process.cwd(), 'bench', 'results.json');
-  writeFileSync(file, JSON.stringify(results, null, 2) + '\n');
+  // Keep the load benchmark's figures (`npm run bench:load` writes them under "load").
+  let serverLoad: unknown;
+  try {
+    serverLoad = (JSON.parse(readFileSync(file, 'utf8')) as { load?: unknown }).load;
+  } catch {
+    serverLoad = undefined;
+  }
+  writeFileSync(file, JSON.stringify({ ...results, load: serverLoad }, null, 2) + '\n');
   console.log(`written ${path.relative(process.cwd(), file)}`);
   const missed = rows.filter((row) => verdict(row) === 'MISS');
   if (missed.length) {

@@ -8,14 +8,14 @@ import type { Painter } from './painter';
 export const PDF_AUTHOR = 'Rimscale';
 export const PDF_SUBJECT = 'True-scale sheet: print at 100 % / actual size, fit-to-page off';
 
-type SheetDocumentProps = { drawing: Drawing; fonts: SheetFonts };
+type SheetDocumentProps = { drawing: Drawing; fonts: SheetFonts; createdAt?: Date };
 
 /**
  * A react-pdf document of one Drawing: a page per `drawing.pages` entry, drawn in
  * one `<Canvas>` through react-pdf's pdfkit painter (react-pdf's `<Svg>` primitives
  * cost ~20× more per line). Same layout as the SVG; only the renderer differs.
  */
-export function SheetDocument({ drawing, fonts }: SheetDocumentProps) {
+export function SheetDocument({ drawing, fonts, createdAt }: SheetDocumentProps) {
   return (
     <Document
       title={drawing.title || 'Rimscale sheet'}
@@ -24,6 +24,7 @@ export function SheetDocument({ drawing, fonts }: SheetDocumentProps) {
       keywords="degree wheel, timing, true scale"
       creator={PDF_AUTHOR}
       producer={PDF_AUTHOR}
+      {...(createdAt ? { creationDate: createdAt, modificationDate: createdAt } : {})}
     >
       {drawing.pages.map((page, index) => (
         <SheetPage key={index} drawing={drawing} page={page} fonts={fonts} />

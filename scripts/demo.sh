@@ -6,7 +6,7 @@ cd "$(dirname "$0")/.."
 export NEXTAUTH_SECRET="${NEXTAUTH_SECRET:-$(node -e "console.log(require('node:crypto').randomBytes(32).toString('base64'))")}"
 bash scripts/db.sh migrate:latest
 bash scripts/db.sh seed:run
-npx next build
+node scripts/build-pdf-worker.mjs && npx next build
 
 # Stopping the demo (Ctrl-C, a signal or an error) stops the server and the mail fake with it.
 mail_fake_pid="" server_pid=""

@@ -24,5 +24,6 @@ export MAIL_FAKE_URL="http://127.0.0.1:$MAIL_FAKE_HTTP_PORT"
 
 bash scripts/db.sh migrate:latest >/dev/null
 bash scripts/db.sh seed:run >/dev/null
+node scripts/build-pdf-worker.mjs # the PDF pool's worker bundle, beside the Next build
 npx next build >"$work/build.log" 2>&1 || { cat "$work/build.log"; exit 1; }
 npx playwright test "$@"

@@ -4,7 +4,9 @@ import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetFileName } from '@/lib/sheet/sheet-file-name';
 import type { SheetRequest } from '@/lib/sheet/sheet-request';
-import { renderSheetPdf } from '@/pdf/render-sheet-pdf';
+import { dayFormat, dayStart } from '@/pdf/pdf-job';
+import { pdfPoolBusyResponse, renderPdf } from './pdf-pool';
+import { cachedSheet, matchesIfNoneMatch, sheetCacheKey, type DrawnSheet } from './sheet-cache';
 
 const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
   svg: 'image/svg+xml; charset=utf-8',
@@ -12,21 +14,67 @@ const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
 };
 
 /**
- * A validated sheet request drawn and answered as a PDF or SVG download (the public and the template routes alike),
- * its date written in the reader's `dateFormat`.
+ * Browsers may keep a sheet but must ask again before using it (RFC 9111 §5.2.2.4):
+ * the answer is a 304 while it is unchanged. `private`: template and build sheets
+ * belong to a signed-in member, so no shared cache keeps them.
  */
-export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: DateFormat): Promise<Response> {
-  const drawing = buildDrawing(sheet, { dateFormat });
-  const body = sheet.format === 'svg' ? renderSvg(drawing) : new Uint8Array(await renderSheetPdf(drawing));
-  return new Response(body, {
+const CACHE_CONTROL = 'private, no-cache';
+
+/** Today (YYYY-MM-DD) in the reader's time zone: the date a sheet drawn now carries in its title block. */
+export function sheetDay(dateFormat: DateFormat, now = new Date()): string {
+  // en-CA writes the calendar date as YYYY-MM-DD.
+  return new Intl.DateTimeFormat('en-CA', { timeZone: dateFormat.timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+}
+
+/** A sheet drawn for a day: SVG here (a millisecond or two), PDF in the worker pool. */
+export async function drawSheet(sheet: SheetRequest, day: string, locale: string): Promise<DrawnSheet> {
+  if (sheet.format === 'svg') {
+    const drawing = buildDrawing(sheet, { date: dayStart(day), dateFormat: dayFormat(locale) });
+    return { body: renderSvg(drawing), notes: drawing.warnings };
+  }
+  const { bytes, notes } = await renderPdf({ kind: 'sheet', props: { request: sheet, day, locale } });
+  return { body: bytes, notes };
+}
+
+type DownloadOptions = {
+  /** The incoming request, for its If-None-Match. */
+  request?: Request;
+  /** The stored records the sheet is drawn from, with their versions ('template:12@v3'): part of the cache key. */
+  record?: string;
+  /** The sheet's date (YYYY-MM-DD); today in the reader's time zone unless given. */
+  day?: string;
+};
+
+/**
+ * A validated sheet request answered as a PDF or SVG download (the public, template and build
+ * routes alike), its date written in the reader's `dateFormat`: from the cache when the same sheet
+ * was drawn before, with a strong ETag, and as 304 Not Modified without a body when the caller
+ * already holds those bytes.
+ */
+export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: DateFormat, options: DownloadOptions = {}): Promise<Response> {
+  const day = options.day ?? sheetDay(dateFormat);
+  const { locale } = dateFormat;
+  const key = sheetCacheKey({ request: sheet, day, locale, ...(options.record ? { record: options.record } : {}) });
+  let entry;
+  try {
+    entry = await cachedSheet(key, () => drawSheet(sheet, day, locale));
+  } catch (error) {
+    const busy = pdfPoolBusyResponse(error);
+    if (busy) return busy;
+    throw error;
+  }
+  const validators = { ETag: entry.etag, 'Cache-Control': CACHE_CONTROL };
+  if (matchesIfNoneMatch(options.request?.headers.get('if-none-match') ?? null, entry.etag))
+    return new Response(null, { status: 304, headers: validators });
+  return new Response(entry.body as Uint8Array<ArrayBuffer>, {
     status: 200,
     headers: {
+      ...validators,
       'Content-Type': CONTENT_TYPE[sheet.format],
       'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
-      'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
       // What the layout could not draw as asked, and why (also printed on the sheet): percent-encoded JSON list.
-      'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(drawing.warnings)),
+      'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(entry.notes)),
     },
   });
 }

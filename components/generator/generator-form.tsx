@@ -13,7 +13,7 @@ import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId,
 import { toSheetRequestInput, usesField, DEFAULT_FORM_VALUES, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
 import { forgetSheet, useSheetUrl } from './use-sheet-url';
-import { DownloadPanel } from './download-panel';
+import { DownloadPanel, type WorkspacePrinterProfiles } from './download-panel';
 import { PortEventsField } from './port-events-field';
 import { SheetPreview } from './sheet-preview';
 import { PrintAtActualSize, SafetyPanel } from './safety-panel';
@@ -46,11 +46,13 @@ export function GeneratorForm({
   defaultValues,
   ignored,
   notices = [],
+  workspace = null,
 }: {
   defaultValues: GeneratorFormValues;
   ignored: IgnoredParam[];
   /** What the link did to the sheet (lib/sheet-link.ts): restored, added to, a note rewritten. */
   notices?: string[];
+  workspace?: WorkspacePrinterProfiles | null;
 }) {
   const form = useForm<GeneratorFormValues, unknown, SheetRequest>({
     defaultValues,
@@ -101,7 +103,7 @@ export function GeneratorForm({
         <div id="sheet-preview-pane" className={`min-w-0 space-y-4 lg:sticky lg:top-4 lg:self-start ${pane === 'settings' ? 'hidden lg:block' : ''}`}>
           <SheetPreview request={request} describeIssue={(issue) => issueInUnit(issue, { ...defaultValues, ...values }, values.lengthUnit)} />
           <PrintAtActualSize />
-          <DownloadPanel validate={validate} />
+          <DownloadPanel validate={validate} workspace={workspace} />
           <SafetyPanel />
         </div>
       </div>

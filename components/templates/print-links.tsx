@@ -20,7 +20,7 @@ const NUMBERING_LABELS: Record<Numbering, string> = {
  * One row per sheet the template's diameters allow: open it in the sheet maker, or download PDF / SVG directly.
  * Port targets only show on a full-circle scale, so a template that has them gets that row as well.
  */
-export function PrintLinks({ template, sheetUrl }: { template: Template; sheetUrl: string }) {
+export function PrintLinks({ template, sheetUrl, workspaceSlug }: { template: Template; sheetUrl: string; workspaceSlug?: string }) {
   const kinds = availableSheetKinds(template);
   if (kinds.length === 0)
     return <p className="text-sm text-steel-600">Add a flywheel face or rim diameter to print from this template.</p>;
@@ -34,7 +34,7 @@ export function PrintLinks({ template, sheetUrl }: { template: Template; sheetUr
         return (
           <li key={`${kind}-${numbering}`} className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
             <Link
-              href={generatorHref(templateSheetRequest(template, kind, { numbering })!)}
+              href={`${generatorHref(templateSheetRequest(template, kind, { numbering })!)}${workspaceSlug ? `&workspace=${workspaceSlug}` : ''}`}
               className="inline-flex min-h-11 items-center rounded-md bg-spark-500 px-3 font-semibold text-steel-950 hover:bg-spark-400"
             >
               Print a {what}

@@ -1,4 +1,5 @@
 import 'server-only';
+import type { Knex } from 'knex';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
 import { TEMPLATE_SEARCH_FIELDS, type TemplateListQuery } from '@/lib/templates/list-query';
@@ -9,9 +10,17 @@ import type { TemplateFields } from '@/lib/templates/template-schema';
 import { selectTemplates } from './select-templates';
 import { rowToFields, rowToTemplate, SORT_COLUMNS, type TemplateRow } from './template-row';
 
+/** Sort keys that may hold NULL: fields whose schema takes null (unknown measurements); version and the times never do. */
+const NULLABLE_SORT_KEYS: ReadonlySet<string> = new Set(TEMPLATE_FIELD_LIST.filter((field) => field.schema.safeParse(null).success).map((field) => field.key));
+
 /** LIKE pattern for a search term, with the wildcards in the term escaped. */
 function likePattern(term: string): string {
   return `%${term.replace(/[\\%_]/g, (c) => `\\${c}`)}%`;
+}
+
+async function countOf(query: Knex.QueryBuilder): Promise<number> {
+  const [counted] = (await query.count({ total: '*' })) as Array<{ total: number }>;
+  return Number(counted?.total ?? 0);
 }
 
 /** One page of a workspace's templates: filtered, searched and sorted in SQL (limit/offset). */
@@ -28,17 +37,19 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
     }
     return q;
   };
-  const [counted] = (await filtered().count({ total: '*' })) as Array<{ total: number }>;
-  const total = counted?.total ?? 0;
   const column = `t.${SORT_COLUMNS[query.sort]}`;
   const text = TEMPLATE_FIELD_LIST.some((field) => field.key === query.sort && field.kind === 'text');
-  const idRows: Array<{ id: number }> = await filtered()
-    .select('t.id')
-    .orderByRaw(`${column} IS NULL`) // unknown measurements last in either direction
+  const ids = filtered().select('t.id');
+  // A search scans every row of the workspace: count the matches in the same scan (a window over the filtered rows).
+  if (query.q) ids.select(knex.raw('count(*) over () as total'));
+  // Unknown measurements last in either direction; columns that are never NULL skip the term, so an index can give the order.
+  if (NULLABLE_SORT_KEYS.has(query.sort)) ids.orderByRaw(`${column} IS NULL`);
+  const idRows: Array<{ id: number; total?: number }> = await ids
     .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
     .orderBy('t.id', query.dir)
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);
+  const total = idRows[0]?.total ?? (await countOf(filtered()));
   const rows: TemplateRow[] = await selectTemplates(knex, workspaceId).whereIn(
     't.id',
     idRows.map((r) => r.id),

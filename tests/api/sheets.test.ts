@@ -154,12 +154,14 @@ describe('POST /api/v1/sheets draws every valid request (fast-check)', () => {
 });
 
 describe('POST /api/v1/sheets answers sheets', () => {
-  it('a PDF by default, as an attachment named after kind, diameter and title, not cached', async () => {
+  it('a PDF by default, as an attachment named after kind, diameter and title, revalidated before reuse', async () => {
     const response = await post({ kind: 'wheel', diameterMm: 100, advanceMarksDeg: [18], title: 'Büro Rad "7" <b>' });
     expect(response.status).toBe(200);
     expect(response.headers.get('content-type')).toBe('application/pdf');
     expect(response.headers.get('content-disposition')).toBe('attachment; filename="rimscale-wheel-100mm-buro-rad-7-b.pdf"');
-    expect(response.headers.get('cache-control')).toBe('no-store');
+    // RFC 9111 §5.2.2.4: a browser may keep it but asks again (a 304 while unchanged); no shared cache keeps it.
+    expect(response.headers.get('cache-control')).toBe('private, no-cache');
+    expect(response.headers.get('etag')).toMatch(/^"[A-Za-z0-9_-]+"$/);
     const bytes = new Uint8Array(await response.arrayBuffer());
     expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-'); // ISO 32000-1 §7.5.2 file header
     const { text } = await readPdfText(bytes);

@@ -14,6 +14,9 @@ import { workspaceActivity } from '@/db/activity';
 import { ActivityList } from '@/components/workspace/activity-list';
 import { ACTIVITY_GROUPS, activityLine, type ActivityGroup } from '@/components/workspace/activity-words';
 import { pendingInvitations } from '@/db/invitations';
+import { BuildSettingsForm } from '@/components/builds/build-settings-form';
+import { workspaceToleranceDeg } from '@/db/builds/references';
+import { db } from '@/db/knex';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Workspace' };
@@ -36,11 +39,12 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
     settings: can(role, 'workspace.settings'),
     audit: can(role, 'workspace.audit'),
   };
-  const [members, pending, audit, dateFormat] = await Promise.all([
+  const [members, pending, audit, dateFormat, toleranceDeg] = await Promise.all([
     membersOf(workspace.id),
     may.invite ? pendingInvitations(workspace.id) : Promise.resolve([]),
     may.audit ? workspaceActivity(workspace.id, 200) : Promise.resolve([]),
     requestDateFormat(),
+    workspaceToleranceDeg(db(), workspace.id),
   ]);
   const invitations = pending.map(({ expiresAt, ...invitation }) => ({ ...invitation, expiresOn: formatDate(expiresAt, dateFormat) }));
   return (
@@ -91,6 +95,8 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
             <div className="space-y-2">
               <h3 className="font-medium">Name</h3>
               <ShopNameForm renameSlug={workspace.slug} currentName={workspace.name} />
+              <h3 className="pt-2 font-medium">Build records</h3>
+              <BuildSettingsForm slug={workspace.slug} settings={{ toleranceDeg }} />
             </div>
           ) : null}
           {may.audit ? (

@@ -10,7 +10,8 @@ export const dynamic = 'force-dynamic';
 
 /**
  * POST /api/v1/sheets: a sheet request (JSON, lib/sheet/sheet-request.ts) in, the
- * drawing as a PDF (default) or SVG download out.
+ * drawing as a PDF (default) or SVG download out; a repeat comes from the sheet cache,
+ * and a repeat with the ETag in If-None-Match is a 304 without a body.
  * Public on purpose, so no session or role check: the generator serves visitors
  * without an account (DEVELOPERS.md, "Public pages"), and it reads and writes no stored data.
  */
@@ -19,7 +20,7 @@ export async function POST(incoming: Request): Promise<Response> {
     const parsed = await parseJsonBody(request, sheetRequestSchema);
     if (!parsed.ok) return parsed.response;
     try {
-      return await sheetDownloadResponse(parsed.data, dateFormatOf(request));
+      return await sheetDownloadResponse(parsed.data, dateFormatOf(request), { request });
     } catch (error) {
       // Never a stack trace to the caller; the message stays in the server log.
       console.error('POST /api/v1/sheets failed:', error instanceof Error ? error.message : String(error));

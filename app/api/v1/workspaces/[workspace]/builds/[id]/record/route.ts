@@ -1,10 +1,11 @@
 import { jsonError } from '@/app/lib/api';
 import { customerCopyFileName } from '@/app/lib/customer-copy-service';
+import { pdfPoolBusyResponse, renderPdf } from '@/app/lib/pdf-pool';
 import { guarded } from '@/app/lib/route-handler';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
-import { renderBuildRecordPdf } from '@/pdf/render-build-record-pdf';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 import { copyQuerySchema } from '../../_shared/copy-query';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -15,8 +16,15 @@ export async function GET(request: Request, { params }: BuildParams): Promise<Re
     const { access, build } = await buildFor(params, 'build.read');
     const query = copyQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
-    const pdf = await renderBuildRecordPdf(build, access.workspace.name, query.data.paper);
-    return new Response(new Uint8Array(pdf), {
+    let pdf;
+    try {
+      pdf = await renderPdf({ kind: 'buildRecord', props: { build, shopName: access.workspace.name, paper: query.data.paper, dateFormat: dateFormatOf(request) } });
+    } catch (error) {
+      const busy = pdfPoolBusyResponse(error);
+      if (busy) return busy;
+      throw error;
+    }
+    return new Response(pdf.bytes as Uint8Array<ArrayBuffer>, {
       headers: {
         'Content-Type': 'application/pdf',
         'Content-Disposition': `attachment; filename="${customerCopyFileName(build)}"`,

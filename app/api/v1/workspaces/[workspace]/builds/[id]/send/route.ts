@@ -1,11 +1,13 @@
 import { jsonError } from '@/app/lib/api';
 import { sendCustomerCopy } from '@/app/lib/customer-copy-service';
+import { pdfPoolBusyResponse } from '@/app/lib/pdf-pool';
 import { consumePoint, RateLimitedError } from '@/app/lib/rate-limit';
 import { guarded } from '@/app/lib/route-handler';
 import { buildFields } from '@/lib/builds/build-fields';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 import { copyQuerySchema } from '../../_shared/copy-query';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -30,6 +32,12 @@ export async function POST(incoming: Request, { params }: BuildParams): Promise<
       if (err instanceof RateLimitedError) return jsonError(429, `Too many copies sent from this workspace: ${err.message}`);
       throw err;
     }
-    return Response.json({ build: await sendCustomerCopy(access, build, query.data.paper) }, { status: 202 });
+    try {
+      return Response.json({ build: await sendCustomerCopy(access, build, query.data.paper, dateFormatOf(request)) }, { status: 202 });
+    } catch (err) {
+      const busy = pdfPoolBusyResponse(err); // nothing was sent: the copy could not be drawn yet
+      if (busy) return busy;
+      throw err;
+    }
   });
 }

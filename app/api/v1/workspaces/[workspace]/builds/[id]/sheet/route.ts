@@ -38,6 +38,8 @@ export async function GET(request: Request, { params }: BuildParams): Promise<Re
     if (!correction) return jsonError(400, 'No such printer profile in this workspace', [{ path: 'profile', message: 'Use default, none or the id of one of this workspace’s profiles' }]);
     const sheet = sheetRequestSchema.safeParse({ ...input, ...correction, format: query.data.format });
     if (!sheet.success) return jsonError(400, 'The record’s figures do not make a valid sheet', toFieldIssues(sheet.error));
-    return sheetDownloadResponse(sheet.data, dateFormatOf(request));
+    // The record's and the template's versions are part of the cache key: an edit of either draws afresh.
+    const record = `build:${build.id}@v${build.version}/template:${template.id}@v${template.version}`;
+    return sheetDownloadResponse(sheet.data, dateFormatOf(request), { request, record });
   });
 }

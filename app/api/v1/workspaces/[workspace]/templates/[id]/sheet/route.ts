@@ -42,6 +42,7 @@ export async function GET(request: Request, { params }: TemplateParams): Promise
     const sheet = sheetRequestSchema.safeParse({ ...input, ...correction, format: query.data.format });
     if (!sheet.success) return jsonError(400, 'The template’s figures do not make a valid sheet', toFieldIssues(sheet.error));
 
-    return sheetDownloadResponse(sheet.data, dateFormatOf(request));
+    // The template's version is part of the cache key: an edit draws afresh.
+    return sheetDownloadResponse(sheet.data, dateFormatOf(request), { request, record: `template:${template.id}@v${template.version}` });
   });
 }

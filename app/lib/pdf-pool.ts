@@ -1,0 +1,86 @@
+import 'server-only';
+import { existsSync } from 'node:fs';
+import os from 'node:os';
+import path from 'node:path';
+import { pathToFileURL } from 'node:url';
+import Piscina from 'piscina';
+import { jsonError } from './api';
+import type { PdfJob, RenderedPdf } from '@/pdf/pdf-job';
+
+/**
+ * PDF rendering on every core: a pool of worker threads (piscina), one per core,
+ * each with its own react-pdf and fonts. The queue in front of them is bounded;
+ * when it is full `renderPdf` throws PdfPoolBusy and the route answers 503 with
+ * Retry-After instead of letting every caller's wait grow.
+ */
+
+/** The worker bundle scripts/build-pdf-worker.mjs writes (`npm run build` and `npm run dev` run it). */
+export const PDF_WORKER_FILE = path.join(process.cwd(), 'build', 'pdf-worker.mjs');
+
+const THREADS = Math.max(1, Number(process.env.RIMSCALE_PDF_THREADS) || os.availableParallelism());
+/** Jobs that may wait for a free worker: about a second of work for the pool at ~20 ms a page. */
+const MAX_QUEUE = Math.max(1, Number(process.env.RIMSCALE_PDF_QUEUE) || 16 * THREADS);
+
+const WORKER_HEAP_MB = Math.max(64, Number(process.env.RIMSCALE_PDF_WORKER_HEAP_MB) || 192);
+
+export class PdfPoolBusy extends Error {
+  constructor(readonly retryAfterS: number) {
+    super('Every PDF worker is busy and the queue is full');
+  }
+}
+
+// One pool per process, wherever Next has loaded this module from.
+const POOL = Symbol.for('rimscale.pdf.pool');
+type PoolGlobal = typeof globalThis & { [POOL]?: Piscina<PdfJob, RenderedPdf> };
+
+function pool(): Piscina<PdfJob, RenderedPdf> {
+  const global = globalThis as PoolGlobal;
+  if (global[POOL]) return global[POOL];
+  if (!existsSync(PDF_WORKER_FILE)) throw new Error(`PDF worker bundle missing at ${PDF_WORKER_FILE}: run \`node scripts/build-pdf-worker.mjs\` (npm run build does)`);
+  global[POOL] = new Piscina<PdfJob, RenderedPdf>({
+    filename: pathToFileURL(PDF_WORKER_FILE).href,
+    minThreads: THREADS,
+    maxThreads: THREADS,
+    maxQueue: MAX_QUEUE,
+    idleTimeout: 60_000,
+    // A ceiling on each worker's heap: the largest sheet (a 600 mm wheel at 0.2 mm pitch, tiled) needs ~80 MB.
+    // A worker that passes it is ended and replaced, its memory returned, instead of the process growing.
+    resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB },
+  });
+  return global[POOL];
+}
+
+/** Seconds until the queue ahead of a new job should have drained, from the pool's own mean run time. */
+function retryAfterS(workers: Piscina): number {
+  const { mean } = workers.histogram.runTime; // milliseconds
+  const meanMs = Number.isFinite(mean) && mean > 0 ? mean : 50;
+  return Math.min(30, Math.max(1, Math.ceil((workers.queueSize * meanMs) / THREADS / 1000)));
+}
+
+/** The PDF of a job, rendered in a worker thread. */
+export async function renderPdf(job: PdfJob): Promise<RenderedPdf> {
+  const workers = pool();
+  if (workers.queueSize >= MAX_QUEUE) throw new PdfPoolBusy(retryAfterS(workers));
+  try {
+    return await workers.run(job);
+  } catch (error) {
+    if (error instanceof Error && error.message === 'Task queue is at limit') throw new PdfPoolBusy(retryAfterS(workers));
+    throw error;
+  }
+}
+
+/** The API's answer when `error` is a full queue: 503 with Retry-After; null for any other error. */
+export function pdfPoolBusyResponse(error: unknown): Response | null {
+  if (!(error instanceof PdfPoolBusy)) return null;
+  const busy = jsonError(503, 'The server is busy drawing other documents. Try again in a moment.');
+  busy.headers.set('Retry-After', String(error.retryAfterS));
+  return busy;
+}
+
+/** Stops the workers (tests; a server just exits). */
+export async function closePdfPool(): Promise<void> {
+  const global = globalThis as PoolGlobal;
+  const workers = global[POOL];
+  global[POOL] = undefined;
+  await workers?.close();
+}
