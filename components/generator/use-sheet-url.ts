@@ -37,7 +37,10 @@ export function useSheetUrl(values: GeneratorFormValues, defaultValues: Generato
 
   useEffect(() => {
     const timer = setTimeout(() => {
-      const href = query ? `${window.location.pathname}?${query}` : window.location.pathname;
+      // The workspace whose printer profiles are offered is not part of the form but of the page: it stays.
+      const workspace = new URLSearchParams(window.location.search).get('workspace');
+      const full = workspace ? `${query}${query ? '&' : ''}${new URLSearchParams({ workspace })}` : query;
+      const href = full ? `${window.location.pathname}?${full}` : window.location.pathname;
       if (`${window.location.pathname}${window.location.search}` !== href) window.history.replaceState(window.history.state, '', href);
       rememberSheet(query);
     }, WRITE_DELAY_MS);
