@@ -22,6 +22,7 @@ async function audit(page: Page, path: string): Promise<string[]> {
 
 for (const role of [null, 'owner', 'technician', 'viewer'] as Array<DemoRole | null>) {
   test(`axe finds nothing serious on any page, ${role ?? 'signed out'}, desktop and phone`, async ({ browser }) => {
+    test.setTimeout(360_000); // a sweep of every page, not one interaction
     const found: string[] = [];
     for (const viewport of [{ width: 1280, height: 900 }, { width: 390, height: 844 }]) {
       const { context, page } = await contextAs(browser, role, { viewport });

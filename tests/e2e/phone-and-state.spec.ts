@@ -10,6 +10,7 @@ async function sidewaysOverflowPx(page: Page): Promise<number> {
 
 for (const role of [null, 'owner', 'technician', 'viewer'] as Array<DemoRole | null>) {
   test(`no page scrolls sideways on a 390 px phone, ${role ?? 'signed out'}`, async ({ browser }) => {
+    test.setTimeout(360_000); // a sweep of every page, not one interaction
     const { context, page } = await contextAs(browser, role, { viewport: PHONE, hasTouch: true, isMobile: true });
     for (const path of await pagesFor(page, role)) {
       await page.goto(path);
