@@ -39,11 +39,11 @@ export function PrintLinks({ template, sheetUrl, workspaceSlug }: { template: Te
             >
               Print a {what}
             </Link>
-            <a href={`${sheetUrl}?${query}&format=pdf`} className="inline-flex min-h-11 items-center text-gauge-700 underline dark:text-gauge-300">
-              PDF<span className="sr-only">: {what}</span>
+            <a href={`${sheetUrl}?${query}&format=pdf`} aria-label={`PDF: ${what}`} className="inline-flex min-h-11 items-center text-gauge-700 underline dark:text-gauge-300">
+              PDF
             </a>
-            <a href={`${sheetUrl}?${query}&format=svg`} className="inline-flex min-h-11 items-center text-gauge-700 underline dark:text-gauge-300">
-              SVG<span className="sr-only">: {what}</span>
+            <a href={`${sheetUrl}?${query}&format=svg`} aria-label={`SVG: ${what}`} className="inline-flex min-h-11 items-center text-gauge-700 underline dark:text-gauge-300">
+              SVG
             </a>
           </li>
         );
