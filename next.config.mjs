@@ -24,6 +24,8 @@ const nextConfig = {
   },
   experimental: {
     serverActions: { bodySizeLimit: '1mb' },
+    // forbidden() in pages answers 403 with app/forbidden.tsx (app/lib/page-access.ts).
+    authInterrupts: true,
   },
 };
 

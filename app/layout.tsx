@@ -1,4 +1,4 @@
-import type { Metadata } from 'next';
+import type { Metadata, Viewport } from 'next';
 import { signedInMember } from '@/app/lib/signed-in-member';
 import { AccountMenu } from '@/components/account/account-menu';
 import { SiteHeader } from '@/components/shell/site-header';
@@ -9,7 +9,18 @@ export const metadata: Metadata = {
   title: { default: 'Rimscale — true-scale degree wheels and timing strips', template: '%s · Rimscale' },
   description:
     'Print true-scale degree wheels, flange rings and rim timing strips for small two-stroke engines, and keep a shop’s engine templates and build records.',
+  // Files in public/, drawn by scripts/make-icons.mjs from public/icon.svg.
+  manifest: '/manifest.webmanifest',
+  icons: {
+    icon: [
+      { url: '/favicon.ico', sizes: '32x32' },
+      { url: '/icon.svg', type: 'image/svg+xml' },
+    ],
+    apple: '/apple-touch-icon.png',
+  },
 };
+
+export const viewport: Viewport = { themeColor: '#1c2226', width: 'device-width', initialScale: 1 };
 
 export default async function RootLayout({ children }: { children: React.ReactNode }) {
   const member = await signedInMember();

@@ -1,18 +1,40 @@
+import { cookies } from 'next/headers';
 import { GeneratorForm } from '@/components/generator/generator-form';
-import { formValuesFromPrefill } from '@/components/generator/form-values';
-import { prefillFromSearchParams } from '@/lib/generator-prefill';
+import { formValuesFromQuery } from '@/components/generator/form-values';
 import { generatorWorkspaceProfiles } from '@/app/lib/generator-workspace';
+import { resolveSheetLink } from '@/lib/sheet-link';
+import { SHEET_COOKIE } from '@/lib/sheet-link-params';
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
+function toSearchParams(raw: Record<string, string | string[] | undefined>): URLSearchParams {
+  const params = new URLSearchParams();
+  for (const [name, value] of Object.entries(raw)) {
+    const first = Array.isArray(value) ? value[0] : value;
+    if (first !== undefined) params.set(name, first);
+  }
+  return params;
+}
+
+function storedSheet(text: string | undefined): URLSearchParams | null {
+  if (!text) return null;
+  try {
+    return new URLSearchParams(decodeURIComponent(text));
+  } catch {
+    return null;
+  }
+}
+
 /**
- * The sheet generator: public, no sign-in. Links may prefill it through the query string; a signed-in
- * member is offered their workspace's printer profiles, its default chosen first.
+ * The sheet generator: public, no sign-in. The form lives in the query string (a reload or a shared link shows
+ * the same sheet); links from the calculators and templates add to the browser's last sheet (lib/sheet-link.ts).
+ * A signed-in member is offered their workspace's printer profiles (`?workspace=`), its default chosen first.
  */
 export default async function HomePage({ searchParams }: { searchParams: SearchParams }) {
-  const params = await searchParams;
-  const prefill = prefillFromSearchParams(params);
-  const workspace = await generatorWorkspaceProfiles(typeof params.workspace === 'string' ? params.workspace : undefined);
+  const link = toSearchParams(await searchParams);
+  const { params, notices } = resolveSheetLink(link, storedSheet((await cookies()).get(SHEET_COOKIE)?.value));
+  const { values, ignored } = formValuesFromQuery(params);
+  const workspace = await generatorWorkspaceProfiles(params.get('workspace') ?? undefined);
   return (
     <div className="space-y-6">
       <header className="max-w-3xl space-y-2">
@@ -22,7 +44,7 @@ export default async function HomePage({ searchParams }: { searchParams: SearchP
           your figures as you type; check your printer once and every sheet is corrected for it.
         </p>
       </header>
-      <GeneratorForm defaultValues={formValuesFromPrefill(prefill.values)} ignored={prefill.ignored} workspace={workspace} />
+      <GeneratorForm key={params.toString()} defaultValues={values} ignored={ignored} notices={notices} workspace={workspace} />
     </div>
   );
 }

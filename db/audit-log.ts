@@ -16,6 +16,10 @@ export type AuditAction =
   | 'role-changed'
   | 'member-removed'
   | 'member-left'
+  | 'template-deleted'
+  | 'templates-imported'
+  | 'photo-added'
+  | 'photo-deleted'
   | 'build-sent';
 
 export type AuditEntry = {
@@ -34,7 +38,6 @@ export async function recordAudit(entry: AuditEntry, knex: Knex = db()): Promise
     detail: JSON.stringify(entry.detail ?? {}),
   });
 }
-
 export async function auditOf(workspaceId: number, limit = 50, knex: Knex = db()) {
   return knex(TABLES.auditLog)
     .leftJoin(TABLES.users, `${TABLES.users}.id`, `${TABLES.auditLog}.actor_user_id`)

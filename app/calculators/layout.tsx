@@ -1,4 +1,4 @@
-import Link from 'next/link';
+import { NavLink } from '@/components/shell/nav-link';
 import { CALCULATORS } from './calculator-list';
 
 // Public section (DEVELOPERS.md, "Public pages"): no sign-in, nothing stored; every answer is computed in the browser.
@@ -6,13 +6,11 @@ export default function CalculatorsLayout({ children }: { children: React.ReactN
   return (
     <div className="space-y-6">
       <nav aria-label="Calculators" className="flex flex-wrap gap-2 border-b border-steel-200 pb-3 text-sm dark:border-steel-800">
-        <Link href="/calculators" className="rounded px-2 py-1 font-semibold hover:bg-steel-100 dark:hover:bg-steel-800">
-          All calculators
-        </Link>
+        <NavLink href="/calculators">All calculators</NavLink>
         {CALCULATORS.map((calculator) => (
-          <Link key={calculator.href} href={calculator.href} className="rounded px-2 py-1 hover:bg-steel-100 dark:hover:bg-steel-800">
+          <NavLink key={calculator.href} href={calculator.href}>
             {calculator.title}
-          </Link>
+          </NavLink>
         ))}
       </nav>
       {children}

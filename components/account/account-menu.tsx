@@ -13,11 +13,11 @@ type Props = {
 export function AccountMenu({ member }: Props) {
   if (!member) {
     return (
-      <div className="flex items-center gap-2 text-sm">
-        <Link href="/sign-in" className="rounded px-2 py-1 hover:bg-steel-100 dark:hover:bg-steel-800">
+      <div className="flex flex-wrap items-center gap-2 text-sm">
+        <Link href="/sign-in" className="inline-flex min-h-11 items-center rounded px-2 hover:bg-steel-100 dark:hover:bg-steel-800">
           Sign in
         </Link>
-        <Link href="/sign-up" className="rounded bg-gauge-600 px-2 py-1 font-semibold text-white hover:bg-gauge-700">
+        <Link href="/sign-up" className="inline-flex min-h-11 items-center rounded bg-gauge-600 px-3 font-semibold text-white hover:bg-gauge-700">
           Create account
         </Link>
       </div>
@@ -25,11 +25,11 @@ export function AccountMenu({ member }: Props) {
   }
   const { user, workspaces } = member;
   return (
-    <div className="flex items-center gap-2">
+    <div className="flex flex-wrap items-center gap-2">
       <TemplatesNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
       <BuildsNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
       <WorkspaceSwitcher workspaces={workspaces.map(({ slug, name, kind }) => ({ slug, name, kind }))} />
-      <Link href="/account" className="rounded px-2 py-1 text-sm hover:bg-steel-100 dark:hover:bg-steel-800" aria-label={`Account of ${user.name}`}>
+      <Link href="/account" className="inline-flex min-h-11 items-center rounded px-2 text-sm hover:bg-steel-100 dark:hover:bg-steel-800" aria-label={`Account of ${user.name}`}>
         {user.name}
       </Link>
       <SignOutButton />

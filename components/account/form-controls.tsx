@@ -32,7 +32,7 @@ export function SubmitButton({ children, busy }: { children: React.ReactNode; bu
     <button
       type="submit"
       disabled={busy}
-      className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
+      className="min-h-11 rounded-md bg-gauge-600 px-4 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
     >
       {children}
     </button>

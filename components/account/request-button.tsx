@@ -18,7 +18,7 @@ export function RequestButton({ url, label, outcome }: RequestButtonProps) {
     <div className="space-y-2">
       <button
         type="button"
-        className="rounded-md border border-steel-300 px-3 py-1.5 text-sm hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
+        className="min-h-11 rounded-md border border-steel-300 px-3 text-sm hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
         onClick={async () => setMessage(await outcome(await submitJson(url, 'POST')))}
       >
         {label}

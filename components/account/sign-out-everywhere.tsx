@@ -1,7 +1,7 @@
 'use client';
 
-import { signOut } from 'next-auth/react';
 import { RequestButton } from '@/components/account/request-button';
+import { signOutTo } from './sign-out';
 
 /** Ends the account's sessions on every device (a lost phone, a shared shop computer), then this one. */
 export function SignOutEverywhere() {
@@ -11,7 +11,7 @@ export function SignOutEverywhere() {
       label="Sign out everywhere"
       outcome={async (result) => {
         if (!result.ok) return String(result.body.error);
-        await signOut({ callbackUrl: '/sign-in' });
+        await signOutTo('/sign-in');
         return undefined;
       }}
     />

@@ -43,7 +43,7 @@ export function TokenAction({ endpoint, token, label, next }: Props) {
           type="button"
           onClick={run}
           disabled={busy}
-          className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
+          className="min-h-11 rounded-md bg-gauge-600 px-4 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
         >
           {label}
         </button>

@@ -185,7 +185,7 @@ function PortTargets() {
       <summary className="cursor-pointer">Port targets ({fields.length}), from the template: crank degrees after TDC</summary>
       <div className="mt-2 space-y-2">
         {fields.map((field, index) => (
-          <div key={field.id} className="grid grid-cols-[1fr_6rem_6rem_auto] items-end gap-2">
+          <div key={field.id} className="grid grid-cols-[minmax(0,1fr)_minmax(0,5rem)_minmax(0,5rem)_auto] items-end gap-2 sm:grid-cols-[minmax(0,1fr)_6rem_6rem_auto]">
             <input aria-label={`Target ${index + 1} name`} className={inputClass} {...register(`portTargets.${index}.name`)} />
             <input aria-label={`Target ${index + 1} opens`} className={`${inputClass} font-mono`} {...register(`portTargets.${index}.opensCrankDeg`, { setValueAs: (v) => (v === '' ? Number.NaN : Number(v)) })} />
             <input aria-label={`Target ${index + 1} closes`} className={`${inputClass} font-mono`} {...register(`portTargets.${index}.closesCrankDeg`, { setValueAs: (v) => (v === '' ? Number.NaN : Number(v)) })} />
@@ -208,7 +208,7 @@ function OtherMeasurements() {
   return (
     <div className="space-y-2">
       {fields.map((field, index) => (
-        <div key={field.id} className="grid grid-cols-[1fr_8rem_5rem_auto] items-end gap-2">
+        <div key={field.id} className="grid grid-cols-[minmax(0,1fr)_minmax(0,6rem)_minmax(0,4rem)_auto] items-end gap-2 sm:grid-cols-[minmax(0,1fr)_8rem_5rem_auto]">
           <input aria-label={`Measurement ${index + 1} name`} placeholder="What" className={inputClass} {...register(`otherMeasurements.${index}.name`)} />
           <input aria-label={`Measurement ${index + 1} value`} placeholder="Value" className={`${inputClass} font-mono`} {...register(`otherMeasurements.${index}.value`)} />
           <input aria-label={`Measurement ${index + 1} unit`} placeholder="Unit" className={inputClass} {...register(`otherMeasurements.${index}.unit`)} />

@@ -6,6 +6,7 @@ import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import { inputClass } from '@/components/generator/fields';
+import { ScrollRegion } from '@/components/shell/scroll-region';
 import type { Build, BuildPage } from '@/lib/builds/build';
 import { BUILD_FIELD_LIST, BUILD_STATUSES } from '@/lib/builds/build-fields';
 import { buildListViewFromParams, buildListViewHref, buildListViewToParams, type BuildListView } from '@/lib/builds/list-view';
@@ -115,7 +116,7 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
           <label htmlFor="build-search" className="block text-sm font-medium">
             Search customer, engine number, engine
           </label>
-          <input id="build-search" type="search" value={text} onChange={(e) => setText(e.target.value)} className={`${inputClass} w-72`} />
+          <input id="build-search" type="search" value={text} onChange={(e) => setText(e.target.value)} className={`${inputClass} w-72 max-w-full`} />
         </div>
         <div className="space-y-1">
           <label htmlFor="build-status" className="block text-sm font-medium">
@@ -160,7 +161,7 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
           {error ? `Could not load build records: ${error.message}` : isLoading ? 'Loading…' : `${total} record${total === 1 ? '' : 's'}`}
         </p>
       </div>
-      <div className="overflow-x-auto rounded-lg border border-steel-200 dark:border-steel-800">
+      <ScrollRegion label="Build records" className="rounded-lg border border-steel-200 dark:border-steel-800">
         <table className="min-w-full text-sm">
           <thead className="bg-steel-50 text-left dark:bg-steel-900">
             {table.getHeaderGroups().map((group) => (
@@ -198,7 +199,7 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       <nav aria-label="Build record pages" className="flex items-center gap-3 text-sm">
         <button type="button" disabled={view.page <= 1} onClick={() => show({ page: view.page - 1 })} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
           Previous

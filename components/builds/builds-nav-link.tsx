@@ -10,7 +10,7 @@ export function BuildsNavLink({ workspaces }: { workspaces: Array<{ slug: string
   const slug = workspaces.find((w) => w.slug === current)?.slug ?? workspaces.find((w) => w.kind === 'shop')?.slug ?? workspaces[0]?.slug;
   if (!slug) return null;
   return (
-    <Link href={`/w/${slug}/builds`} className="rounded px-2 py-1 text-sm hover:bg-steel-100 dark:hover:bg-steel-800">
+    <Link href={`/w/${slug}/builds`} className="inline-flex min-h-11 items-center rounded px-2 text-sm hover:bg-steel-100 dark:hover:bg-steel-800">
       Builds
     </Link>
   );

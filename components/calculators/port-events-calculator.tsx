@@ -100,7 +100,7 @@ export function PortEventsCalculator() {
               type="button"
               onClick={() => ports.append({ name: `Port ${ports.fields.length + 1}`, kind: 'other', heightMm: 30 })}
               disabled={ports.fields.length >= MAX_CALC_PORTS}
-              className="rounded-md border border-gauge-600 px-3 py-1.5 text-sm font-medium text-gauge-700 hover:bg-gauge-500/10 disabled:opacity-40 dark:text-gauge-500"
+              className="min-h-11 rounded-md border border-gauge-600 px-3 text-sm font-medium text-gauge-700 hover:bg-gauge-500/10 disabled:opacity-40 dark:text-gauge-500"
             >
               Add a port
             </button>

@@ -98,7 +98,7 @@ export function DownloadPanel({
       </div>
       <div className="flex flex-wrap gap-2">
         {FORMATS.map(({ format, className }) => (
-          <button key={format} type="button" onClick={() => download(format)} disabled={status.kind === 'busy'} className={`rounded-md px-4 py-2 text-sm font-semibold disabled:opacity-60 ${className}`}>
+          <button key={format} type="button" onClick={() => download(format)} disabled={status.kind === 'busy'} className={`min-h-11 rounded-md px-4 text-sm font-semibold disabled:opacity-60 ${className}`}>
             Download {format.toUpperCase()}
           </button>
         ))}

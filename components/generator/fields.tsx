@@ -10,7 +10,7 @@ export function fieldId(name: string): string {
 }
 
 export const inputClass =
-  'block w-full rounded-md border border-steel-300 bg-white px-3 py-2 text-sm text-steel-900 shadow-inner shadow-steel-100 ' +
+  'block min-h-11 w-full rounded-md border border-steel-300 bg-white px-3 py-2 text-sm text-steel-900 shadow-inner shadow-steel-100 ' +
   'focus:border-gauge-500 focus:outline-none focus:ring-2 focus:ring-gauge-500/30 aria-[invalid=true]:border-red-600 ' +
   'dark:border-steel-600 dark:bg-steel-900 dark:text-steel-100 dark:shadow-none';
 

@@ -1,4 +1,5 @@
-import { parseNumberList } from '@/lib/generator-prefill';
+import { parseNumberList, prefillFromSearchParams, type IgnoredParam } from '@/lib/generator-prefill';
+import { UNIT_PARAM } from '@/lib/sheet-link-params';
 import type { PaperName } from '@/lib/sheet/paper';
 import type { PortEvent, SheetKind, SheetRequestInput } from '@/lib/sheet/sheet-request';
 import type { LengthUnit } from '@/lib/fields/length';
@@ -106,7 +107,7 @@ export function toSheetRequestInput(values: GeneratorFormValues): SheetRequestIn
   return request as SheetRequestInput;
 }
 
-/** Form values from the URL prefill (already validated field by field). */
+/** Form values from the URL prefill (already validated field by field); lengths arrive in mm. */
 export function formValuesFromPrefill(prefill: Partial<SheetRequestInput>): GeneratorFormValues {
   const { advanceMarksDeg, windowCrankDeg, advanceBandDeg, portEvents, ...rest } = prefill;
   const values = { ...DEFAULT_FORM_VALUES };
@@ -119,4 +120,71 @@ export function formValuesFromPrefill(prefill: Partial<SheetRequestInput>): Gene
   if (portEvents) values.portEvents = portEvents.map((event) => ({ ...event }));
   if (prefill.kind === 'ring' && prefill.carrier === undefined) values.carrier = 'stationary';
   return values;
+}
+
+/** The form for a sheet maker query string: every value checked on its own, the bad ones reported, lengths shown in the unit the query names. */
+export function formValuesFromQuery(params: URLSearchParams): { values: GeneratorFormValues; ignored: IgnoredParam[] } {
+  const prefill = prefillFromSearchParams(params);
+  const values = formValuesFromPrefill(prefill.values);
+  if (params.get(UNIT_PARAM) === 'in') values.lengthUnit = 'in';
+  return { values, ignored: prefill.ignored };
+}
+
+const QUERY_ORDER: RequestField[] = [
+  'kind',
+  'diameterMm',
+  'hubHoleMm',
+  'innerDiameterMm',
+  'outerDiameterMm',
+  'paperThicknessMm',
+  'stripWidthMm',
+  'seamCrankDeg',
+  'windowCrankDeg',
+  'fromDeg',
+  'toDeg',
+  'stepDeg',
+  'carrier',
+  'rotation',
+  'numbering',
+  'advanceMarksDeg',
+  'advanceBandDeg',
+  'portEvents',
+  'minPitchMm',
+  'paper',
+  'orientation',
+  'title',
+  'note',
+];
+
+function queryValue(values: GeneratorFormValues, field: RequestField): string | null {
+  const value = values[field];
+  if (typeof value === 'number') return Number.isFinite(value) ? String(value) : null;
+  if (field === 'windowCrankDeg' || field === 'advanceBandDeg') {
+    const pair = pairOrNone(value as [number, number]);
+    return pair && pair.every(Number.isFinite) ? pair.join(',') : null;
+  }
+  if (field === 'portEvents') return (value as PortEvent[]).length > 0 ? JSON.stringify(value) : null;
+  const text = String(value ?? '').trim();
+  return text === '' ? null : text;
+}
+
+/**
+ * The whole form as the sheet maker's query string (read back by `formValuesFromQuery`): lengths in mm (as the
+ * form holds them) with the unit on screen beside them, values left at their defaults left out, except the kind, its
+ * diameters (the figure a reader of the link looks for) and the carrier (a flange ring's defaults differently);
+ * blank fields left out.
+ */
+const DIAMETER_FIELDS: RequestField[] = ['diameterMm', 'innerDiameterMm', 'outerDiameterMm'];
+
+export function sheetQuery(values: GeneratorFormValues): string {
+  const params = new URLSearchParams();
+  for (const field of QUERY_ORDER) {
+    const text = queryValue(values, field);
+    if (text === null) continue;
+    const always = field === 'kind' || field === 'carrier' || (DIAMETER_FIELDS.includes(field) && usesField(values.kind, field));
+    if (!always && text === queryValue(DEFAULT_FORM_VALUES, field)) continue;
+    params.set(field, text);
+  }
+  if (values.lengthUnit === 'in') params.set(UNIT_PARAM, 'in');
+  return params.toString();
 }

@@ -3,15 +3,16 @@
 import { HydratedForm } from '@/components/hydrated-form';
 import { LengthField } from '@/components/calculators/length-field';
 import { UnitSwitch } from '@/components/calculators/unit-switch';
-import { useEffect, useRef } from 'react';
+import { useEffect, useRef, useState } from 'react';
 import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
 import { PAPER_NAMES } from '@/lib/sheet/paper';
 import type { IgnoredParam } from '@/lib/generator-prefill';
 import { issueInUnit, LENGTH_KEYS, type SheetKind, type SheetRequest } from '@/lib/sheet/sheet-request';
 import { sheetRequestFields as fields } from '@/lib/sheet/sheet-request-fields';
 import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
-import { toSheetRequestInput, usesField, type GeneratorFormValues, type LengthUnit } from './form-values';
+import { toSheetRequestInput, usesField, DEFAULT_FORM_VALUES, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
+import { forgetSheet, useSheetUrl } from './use-sheet-url';
 import { DownloadPanel, type WorkspacePrinterProfiles } from './download-panel';
 import { PortEventsField } from './port-events-field';
 import { SheetPreview } from './sheet-preview';
@@ -44,10 +45,13 @@ const DIAMETER_HELP: Partial<Record<SheetKind, React.ReactNode>> = {
 export function GeneratorForm({
   defaultValues,
   ignored,
+  notices = [],
   workspace = null,
 }: {
   defaultValues: GeneratorFormValues;
   ignored: IgnoredParam[];
+  /** What the link did to the sheet (lib/sheet-link.ts): restored, added to, a note rewritten. */
+  notices?: string[];
   workspace?: WorkspacePrinterProfiles | null;
 }) {
   const form = useForm<GeneratorFormValues, unknown, SheetRequest>({
@@ -58,13 +62,25 @@ export function GeneratorForm({
   const values = useWatch({ control: form.control }) as GeneratorFormValues;
   const request = toSheetRequestInput({ ...defaultValues, ...values });
   useCarrierFollowsKind(form, values.kind);
+  useSheetUrl({ ...defaultValues, ...values }, defaultValues, form.reset);
+  const [shownNotices, setShownNotices] = useState(notices);
+  const startOver = () => {
+    forgetSheet();
+    setShownNotices([]);
+    form.reset(DEFAULT_FORM_VALUES);
+  };
 
   const validate = (onValid: (request: SheetRequest) => void, onInvalid: () => void) => form.handleSubmit(onValid, onInvalid)();
+  // Below the lg breakpoint the form and the preview share the screen in turns; the bar that switches them stays on top.
+  const [pane, setPane] = useState<Pane>('settings');
 
   return (
     <FormProvider {...form}>
+      <PaneSwitch pane={pane} onChange={setPane} />
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,1.05fr)]">
+        <div className={`min-w-0 ${pane === 'preview' ? 'hidden lg:block' : ''}`}>
         <HydratedForm noValidate onSubmit={(e) => e.preventDefault()} aria-label="Sheet settings" className="space-y-4">
+          <LinkNotices notices={shownNotices} onStartOver={startOver} />
           {ignored.length > 0 ? <IgnoredParams ignored={ignored} /> : null}
           <FormSection title="Sheet">
             <ChoiceGroup<GeneratorFormValues> name="kind" legend="What to print" options={KIND_OPTIONS} />
@@ -74,9 +90,17 @@ export function GeneratorForm({
           {usesField(values.kind, 'advanceMarksDeg') ? <AdvanceSection /> : null}
           {values.kind === 'scribe' ? <ScribeSection /> : null}
           <PaperSection kind={values.kind} />
+          <button
+            type="button"
+            onClick={startOver}
+            className="min-h-11 rounded-md border border-steel-300 px-4 text-sm font-medium hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
+          >
+            Start a new sheet
+          </button>
         </HydratedForm>
+        </div>
 
-        <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
+        <div id="sheet-preview-pane" className={`min-w-0 space-y-4 lg:sticky lg:top-4 lg:self-start ${pane === 'settings' ? 'hidden lg:block' : ''}`}>
           <SheetPreview request={request} describeIssue={(issue) => issueInUnit(issue, { ...defaultValues, ...values }, values.lengthUnit)} />
           <PrintAtActualSize />
           <DownloadPanel validate={validate} workspace={workspace} />
@@ -84,6 +108,35 @@ export function GeneratorForm({
         </div>
       </div>
     </FormProvider>
+  );
+}
+
+type Pane = 'settings' | 'preview';
+
+/** The phone's two-way switch between the settings and the preview, pinned to the top of the screen. */
+function PaneSwitch({ pane, onChange }: { pane: Pane; onChange: (pane: Pane) => void }) {
+  const button = (value: Pane, label: string) => (
+    <button
+      type="button"
+      aria-pressed={pane === value}
+      onClick={() => {
+        onChange(value);
+        window.scrollTo({ top: 0 });
+      }}
+      className="min-h-11 flex-1 rounded-md px-3 text-sm font-semibold aria-pressed:bg-gauge-600 aria-pressed:text-white"
+    >
+      {label}
+    </button>
+  );
+  return (
+    <div
+      role="group"
+      aria-label="Show"
+      className="sticky top-0 z-20 -mx-4 mb-4 flex gap-2 border-b border-steel-200 bg-steel-50/95 px-4 py-2 backdrop-blur lg:hidden dark:border-steel-800 dark:bg-steel-950/95"
+    >
+      {button('settings', 'Settings')}
+      {button('preview', 'Preview and download')}
+    </div>
   );
 }
 
@@ -96,6 +149,22 @@ function useCarrierFollowsKind(form: ReturnType<typeof useForm<GeneratorFormValu
     if (kind === 'wheel') form.setValue('carrier', 'rotating');
     if (kind === 'ring') form.setValue('carrier', 'stationary');
   }, [form, kind]);
+}
+
+function LinkNotices({ notices, onStartOver }: { notices: string[]; onStartOver: () => void }) {
+  if (notices.length === 0) return null;
+  return (
+    <div role="status" className="rounded-md border border-gauge-500/40 bg-gauge-500/5 p-3 text-sm text-steel-800 dark:text-steel-200">
+      <ul className="space-y-0.5">
+        {notices.map((notice) => (
+          <li key={notice}>{notice}</li>
+        ))}
+      </ul>
+      <button type="button" onClick={onStartOver} className="mt-1 min-h-11 text-sm font-medium text-gauge-700 underline dark:text-gauge-300">
+        Start a new sheet instead
+      </button>
+    </div>
+  );
 }
 
 function IgnoredParams({ ignored }: { ignored: IgnoredParam[] }) {
@@ -318,6 +387,7 @@ function PairField({
               <input
                 id={`${id}-${index}`}
                 type="number"
+                inputMode="decimal"
                 step="any"
                 aria-invalid={error ? true : undefined}
                 aria-describedby={`${id}-help ${id}-error`}

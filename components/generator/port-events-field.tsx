@@ -74,6 +74,7 @@ function PortEventRow({
               aria-label={`Port ${index + 1} ${event} angle`}
               aria-describedby={errorId}
               type="number"
+              inputMode="decimal"
               step="any"
               className={`${inputClass} font-mono`}
               {...register(event === 'opening' ? names.opens : names.closes, { valueAsNumber: true })}

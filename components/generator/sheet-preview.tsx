@@ -8,7 +8,7 @@ const DEBOUNCE_MS = 250;
 
 /** A field issue; `code` is the zod issue code when the browser found it (the server's answer has none). */
 type PreviewIssue = FieldIssue & { code?: string };
-type ReadyPreview = { svg: string; warnings: string[]; pageCount: number; widthMm: number; heightMm: number };
+type ReadyPreview = { svg: string; warnings: string[]; pageCount: number; joinPieces: boolean; widthMm: number; heightMm: number };
 type PreviewState =
   | { status: 'idle' }
   | ({ status: 'ready' } & ReadyPreview)
@@ -24,9 +24,18 @@ export function svgSizeMm(svg: string): { widthMm: number; heightMm: number } {
   return Number.isFinite(widthMm) && Number.isFinite(heightMm) && widthMm > 0 && heightMm > 0 ? { widthMm, heightMm } : { widthMm: 210, heightMm: 297 };
 }
 
-function describePages(pageCount: number, paper: string, orientation: string): string {
-  if (pageCount <= 1) return `Prints on one page of ${paper} ${orientation}.`;
-  return `Prints on ${pageCount} pages of ${paper} ${orientation}; join the pieces at the marks.`;
+function describePages(pageCount: number, paper: string, orientation: string, joinPieces: boolean): string {
+  if (pageCount <= 1) return `Prints on one page of ${paper} ${orientation}.${joinPieces ? ' Cut out the pieces and join them at the marks.' : ''}`;
+  return `Prints on ${pageCount} pages of ${paper} ${orientation}${joinPieces ? '; join the pieces at the marks' : ''}.`;
+}
+
+const KIND_NAMES: Record<string, string> = { wheel: 'degree wheel', ring: 'flange ring', strip: 'rim strip', scribe: 'scribe chart', check: 'scale check' };
+
+/** The preview's accessible name: what the drawing is, its size and its pages, since the SVG itself says nothing to a screen reader. */
+function previewName(request: SheetRequestInput, preview: ReadyPreview): string {
+  const what = KIND_NAMES[request.kind ?? 'wheel'] ?? 'sheet';
+  const title = request.title?.trim() ? ` “${request.title.trim()}”` : '';
+  return `Preview of the ${what}${title}, ${preview.widthMm.toFixed(1)} by ${preview.heightMm.toFixed(1)} mm, ${preview.pageCount === 1 ? 'one page' : `${preview.pageCount} pages`}`;
 }
 
 /**
@@ -64,7 +73,7 @@ export function SheetPreview({
         const answer = await previewSheet({ ...input, format: 'svg' });
         if (ticket !== sequence.current) return;
         if (answer.ok) {
-          const ready = { svg: answer.svg, warnings: answer.warnings, pageCount: answer.pageCount, ...svgSizeMm(answer.svg) };
+          const ready = { svg: answer.svg, warnings: answer.warnings, pageCount: answer.pageCount, joinPieces: answer.joinPieces, ...svgSizeMm(answer.svg) };
           setState({ status: 'ready', ...ready });
           setLastGood(ready);
         } else setState({ status: 'invalid', issues: answer.issues });
@@ -92,12 +101,12 @@ export function SheetPreview({
         </span>
       </div>
 
-      <PaperBox preview={state.status === 'ready' ? state : lastGood} stale={state.status !== 'ready'} />
+      <PaperBox preview={state.status === 'ready' ? state : lastGood} stale={state.status !== 'ready'} request={request} />
 
       <div aria-live="polite" className="space-y-2 text-sm">
         {state.status === 'ready' ? (
           <p data-testid="page-count" className="font-medium text-steel-800 dark:text-steel-200">
-            {describePages(state.pageCount, paper, orientation)}
+            {describePages(state.pageCount, paper, orientation, state.joinPieces)}
           </p>
         ) : null}
         {state.status === 'invalid' ? (
@@ -126,7 +135,7 @@ export function SheetPreview({
   );
 }
 
-function PaperBox({ preview, stale }: { preview?: ReadyPreview; stale: boolean }) {
+function PaperBox({ preview, stale, request }: { preview?: ReadyPreview; stale: boolean; request: SheetRequestInput }) {
   if (!preview)
     return (
       <div className="sheet-paper flex aspect-[210/297] max-h-[70vh] w-full items-center justify-center rounded-sm border border-steel-300 text-sm text-steel-400 shadow-sm">
@@ -138,6 +147,8 @@ function PaperBox({ preview, stale }: { preview?: ReadyPreview; stale: boolean }
     <div className="flex justify-center">
       <div
         data-testid="sheet-preview"
+        role="img"
+        aria-label={`${previewName(request, preview)}${stale ? ' (out of date while the fields are corrected)' : ''}`}
         data-stale={stale ? 'true' : undefined}
         className={`sheet-paper overflow-hidden rounded-sm border border-steel-300 shadow-[0_1px_0_#cfd6da,0_8px_24px_-12px_rgba(16,20,23,0.35)] transition-opacity [&>svg]:block [&>svg]:h-auto [&>svg]:w-full ${stale ? 'opacity-35' : ''}`}
         style={{ width: `min(100%, calc(70vh * ${ratio.toFixed(5)}))` }}

@@ -29,7 +29,14 @@ export function PrinterProfileForm() {
 
   return (
     <FormProvider {...form}>
-      <HydratedForm noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Printer profile" className="space-y-4">
+      {/* A "Saved …" line belongs to the last save only: any edit or a refused save clears it. */}
+      <HydratedForm
+        noValidate
+        onSubmit={form.handleSubmit(onValid, () => setSaved(undefined))}
+        onChange={() => setSaved(undefined)}
+        aria-label="Printer profile"
+        className="space-y-4"
+      >
         <TextField<MeasurementForm> name="name" label={fields.name.label} placeholder="e.g. Workshop laser, plain paper" maxLength={fields.name.maxLength} />
         <div className="grid gap-4 sm:grid-cols-2">
           <NumberField<MeasurementForm>
@@ -49,7 +56,7 @@ export function PrinterProfileForm() {
             help={fields.measuredYMm.help}
           />
         </div>
-        <button type="submit" className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700">
+        <button type="submit" className="min-h-11 rounded-md bg-gauge-600 px-4 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700">
           Save profile
         </button>
         <p aria-live="polite" className="text-sm text-steel-700 dark:text-steel-200">

@@ -71,7 +71,7 @@ export function ImportForm({ slug }: { slug: string }) {
           </label>
           <input id="import-file" name="file" type="file" accept=".csv,.tsv,.txt,text/csv" required className="text-sm" onChange={() => setChecked(undefined)} />
         </div>
-        <button type="submit" disabled={busy} className="rounded-md border border-gauge-600 px-4 py-2 text-sm font-semibold text-gauge-700 disabled:opacity-60 dark:text-gauge-300">
+        <button type="submit" disabled={busy} className="min-h-11 rounded-md border border-gauge-600 px-4 text-sm font-semibold text-gauge-700 disabled:opacity-60 dark:text-gauge-300">
           {busy && !checked ? 'Checking…' : 'Check file'}
         </button>
       </form>
@@ -88,7 +88,7 @@ export function ImportForm({ slug }: { slug: string }) {
               </label>
             </fieldset>
           ) : null}
-          <button type="button" onClick={onImport} disabled={busy} className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white disabled:opacity-60">
+          <button type="button" onClick={onImport} disabled={busy} className="min-h-11 rounded-md bg-gauge-600 px-4 text-sm font-semibold text-white disabled:opacity-60">
             {busy ? 'Importing…' : 'Import'}
           </button>
         </div>

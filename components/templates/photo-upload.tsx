@@ -43,7 +43,7 @@ export function PhotoUpload({ url }: { url: string }) {
         </label>
         <input id="photo-caption" name="caption" maxLength={200} className={`${inputClass} w-64`} />
       </div>
-      <button type="submit" disabled={busy} className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white disabled:opacity-60">
+      <button type="submit" disabled={busy} className="min-h-11 rounded-md bg-gauge-600 px-4 text-sm font-semibold text-white disabled:opacity-60">
         {busy ? 'Uploading…' : 'Upload'}
       </button>
       <p role={message?.tone === 'error' ? 'alert' : 'status'} aria-live="polite" className={`w-full text-sm empty:hidden ${message?.tone === 'error' ? 'text-red-700' : 'text-steel-700'}`}>

@@ -9,29 +9,45 @@ const KIND_LABELS: Record<TemplateSheetKind, string> = {
   strip: 'rim strip',
 };
 
-/** One row per sheet the template's diameters allow: open it in the sheet maker, or download PDF / SVG directly. */
+type Numbering = 'split' | 'full';
+
+const NUMBERING_LABELS: Record<Numbering, string> = {
+  split: 'numbered from TDC both ways (ignition)',
+  full: 'full circle 0–359 with the port targets',
+};
+
+/**
+ * One row per sheet the template's diameters allow: open it in the sheet maker, or download PDF / SVG directly.
+ * Port targets only show on a full-circle scale, so a template that has them gets that row as well.
+ */
 export function PrintLinks({ template, sheetUrl, workspaceSlug }: { template: Template; sheetUrl: string; workspaceSlug?: string }) {
   const kinds = availableSheetKinds(template);
   if (kinds.length === 0)
     return <p className="text-sm text-steel-600">Add a flywheel face or rim diameter to print from this template.</p>;
+  const numberings: Numbering[] = template.portTargets.length > 0 ? ['split', 'full'] : ['split'];
+  const rows = kinds.flatMap((kind) => numberings.map((numbering) => ({ kind, numbering })));
   return (
-    <ul className="space-y-2">
-      {kinds.map((kind) => (
-        <li key={kind} className="flex flex-wrap items-center gap-3 text-sm">
-          <Link
-            href={`${generatorHref(templateSheetRequest(template, kind)!)}${workspaceSlug ? `&workspace=${workspaceSlug}` : ''}`}
-            className="rounded-md bg-spark-500 px-3 py-1.5 font-semibold text-steel-950 hover:bg-spark-400"
-          >
-            Print a {KIND_LABELS[kind]}
-          </Link>
-          <a href={`${sheetUrl}?kind=${kind}&format=pdf`} className="text-gauge-700 underline dark:text-gauge-300">
-            {KIND_LABELS[kind]} PDF
-          </a>
-          <a href={`${sheetUrl}?kind=${kind}&format=svg`} className="text-gauge-700 underline dark:text-gauge-300">
-            {KIND_LABELS[kind]} SVG
-          </a>
-        </li>
-      ))}
+    <ul className="space-y-3">
+      {rows.map(({ kind, numbering }) => {
+        const what = `${KIND_LABELS[kind]}, ${NUMBERING_LABELS[numbering]}`;
+        const query = `kind=${kind}${numbering === 'full' ? '&numbering=full' : ''}`;
+        return (
+          <li key={`${kind}-${numbering}`} className="flex flex-wrap items-center gap-x-3 gap-y-1 text-sm">
+            <Link
+              href={`${generatorHref(templateSheetRequest(template, kind, { numbering })!)}${workspaceSlug ? `&workspace=${workspaceSlug}` : ''}`}
+              className="inline-flex min-h-11 items-center rounded-md bg-spark-500 px-3 font-semibold text-steel-950 hover:bg-spark-400"
+            >
+              Print a {what}
+            </Link>
+            <a href={`${sheetUrl}?${query}&format=pdf`} aria-label={`PDF: ${what}`} className="inline-flex min-h-11 items-center text-gauge-700 underline dark:text-gauge-300">
+              PDF
+            </a>
+            <a href={`${sheetUrl}?${query}&format=svg`} aria-label={`SVG: ${what}`} className="inline-flex min-h-11 items-center text-gauge-700 underline dark:text-gauge-300">
+              SVG
+            </a>
+          </li>
+        );
+      })}
     </ul>
   );
 }

@@ -1,6 +1,7 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
+import Link from 'next/link';
 import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm, useFormContext, type UseFormRegister } from 'react-hook-form';
@@ -114,16 +115,16 @@ function PortTargets() {
     <div className="space-y-2">
       <p className="text-xs text-steel-500">{templateFields.portTargets.help}</p>
       {fields.map((field, index) => (
-        <div key={field.id} className="grid grid-cols-[1fr_7rem_7rem_auto] items-end gap-2">
+        <div key={field.id} className="grid grid-cols-[minmax(0,1fr)_minmax(0,5rem)_minmax(0,5rem)_auto] items-end gap-2 sm:grid-cols-[minmax(0,1fr)_7rem_7rem_auto]">
           <PortCell index={index} part="name" label="Port" register={register} />
           <PortCell index={index} part="opensCrankDeg" label="Opens (°)" register={register} />
           <PortCell index={index} part="closesCrankDeg" label="Closes (°)" register={register} />
-          <button type="button" onClick={() => remove(index)} className="rounded border border-steel-300 px-2 py-2 text-xs">
+          <button type="button" onClick={() => remove(index)} className="min-h-11 rounded border border-steel-300 px-2 text-xs">
             Remove <span className="sr-only">port {index + 1}</span>
           </button>
         </div>
       ))}
-      <button type="button" onClick={() => append({ name: '', opensCrankDeg: 90, closesCrankDeg: 270 })} className="rounded border border-steel-300 px-3 py-1 text-sm">
+      <button type="button" onClick={() => append({ name: '', opensCrankDeg: 90, closesCrankDeg: 270 })} className="min-h-11 rounded border border-steel-300 px-3 text-sm">
         Add a port
       </button>
       <FieldErrorText id="field-portTargets-error" message={fields.length ? undefined : error} />
@@ -144,6 +145,7 @@ function PortCell({ index, part, label, register }: { index: number; part: 'name
         id={id}
         aria-invalid={error ? true : undefined}
         aria-describedby={`${id}-error`}
+        inputMode={part === 'name' ? undefined : 'decimal'}
         className={`${inputClass} ${part === 'name' ? '' : 'font-mono'}`}
         {...register(name, part === 'name' ? {} : { setValueAs: (v: unknown) => (v === '' ? Number.NaN : Number(v)) })}
       />
@@ -193,8 +195,14 @@ export function TemplateForm({ slug, template }: { slug: string; template: Templ
             )}
           </FormSection>
         ))}
-        <div className="flex items-center gap-3">
+        <div className="flex flex-wrap items-center gap-3">
           <SubmitButton busy={form.formState.isSubmitting}>{template ? 'Save changes' : 'Create template'}</SubmitButton>
+          <Link
+            href={template ? `/w/${slug}/templates/${template.id}` : `/w/${slug}/templates`}
+            className="inline-flex min-h-11 items-center rounded-md border border-steel-300 px-4 text-sm font-medium hover:bg-steel-100 dark:border-steel-600 dark:hover:bg-steel-800"
+          >
+            Cancel
+          </Link>
           {outcome?.conflict ? (
             <a href={`/w/${slug}/templates/${template?.id}`} target="_blank" rel="noreferrer" className="text-sm text-gauge-700 underline">
               Open the current version (your edits stay here)

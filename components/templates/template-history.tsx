@@ -31,7 +31,11 @@ export function TemplateHistory({ revisions, currentVersion, restoreUrl, canEdit
                 body={{ version: currentVersion }}
                 label={`Restore version ${r.version}`}
                 busyLabel="Restoring…"
-                confirm={`Bring back the template as it was at version ${r.version}? This is saved as a new version.`}
+                confirm={{
+                  title: `Restore version ${r.version}?`,
+                  message: `The template’s figures go back to how they were at version ${r.version}. This is saved as a new version ${currentVersion + 1}; the versions in between stay in the history.`,
+                  confirmLabel: `Restore version ${r.version}`,
+                }}
               />
             ) : null}
           </div>

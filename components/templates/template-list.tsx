@@ -10,6 +10,7 @@ import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/templates/list-view';
 import type { Template, TemplatePage } from '@/lib/templates/template';
 import { inputClass } from '@/components/generator/fields';
+import { ScrollRegion } from '@/components/shell/scroll-region';
 import { formatDate, type DateFormat } from '@/lib/format/date-format';
 import { formatFieldValue } from './field-labels';
 
@@ -112,7 +113,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
             if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation)}>{row.rotation.toUpperCase()}</abbr>;
             if (c.key === 'description')
               return (
-                <span className="block max-w-72 truncate font-sans" title={row.description}>
+                <span className="block max-w-40 truncate font-sans xl:max-w-56" title={row.description}>
                   {row.description}
                 </span>
               );
@@ -137,7 +138,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
           <label htmlFor="template-search" className="block text-sm font-medium">
             Search name and engine
           </label>
-          <input ref={searchInput} id="template-search" type="search" value={q} onChange={(e) => setQ(e.target.value)} className={`${inputClass} w-72`} />
+          <input ref={searchInput} id="template-search" type="search" value={q} onChange={(e) => setQ(e.target.value)} className={`${inputClass} w-72 max-w-full`} />
         </div>
         <div className="space-y-1">
           <label htmlFor="template-archived" className="block text-sm font-medium">
@@ -153,7 +154,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
           {error ? `Could not load templates: ${error.message}` : isLoading ? 'Loading…' : `${total} template${total === 1 ? '' : 's'}`}
         </p>
       </div>
-      <div className="overflow-x-auto rounded-lg border border-steel-200 dark:border-steel-800">
+      <ScrollRegion label="Templates" className="rounded-lg border border-steel-200 dark:border-steel-800">
         <table className="min-w-full text-sm">
           <thead className="bg-steel-50 text-left dark:bg-steel-900">
             {table.getHeaderGroups().map((group) => (
@@ -162,8 +163,8 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
                   const key = header.column.id as TemplateSortKey;
                   const active = sort === key;
                   return (
-                    <th key={header.id} scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'} className="whitespace-nowrap px-3 py-2 font-semibold">
-                      <button type="button" onClick={() => toggleSort(key)} className="inline-flex items-center gap-1 hover:underline">
+                    <th key={header.id} scope="col" aria-sort={active ? (dir === 'asc' ? 'ascending' : 'descending') : 'none'} className="whitespace-nowrap px-2 py-2 font-semibold">
+                      <button type="button" onClick={() => toggleSort(key)} className="inline-flex min-h-11 items-center gap-1 hover:underline">
                         <table.FlexRender header={header} />
                         <span aria-hidden="true" className="text-xs text-steel-400">
                           {active ? (dir === 'asc' ? '▲' : '▼') : '↕'}
@@ -179,7 +180,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
             {table.getRowModel().rows.map((row) => (
               <tr key={row.id} className="border-t border-steel-100 dark:border-steel-800">
                 {row.getAllCells().map((cell) => (
-                  <td key={cell.id} className="whitespace-nowrap px-3 py-2 font-mono text-xs tabular-nums first:font-sans first:text-sm">
+                  <td key={cell.id} className="whitespace-nowrap px-2 py-2 font-mono text-xs tabular-nums first:font-sans first:text-sm">
                     <table.FlexRender cell={cell} />
                   </td>
                 ))}
@@ -187,15 +188,15 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
             ))}
           </tbody>
         </table>
-      </div>
+      </ScrollRegion>
       <nav aria-label="Template pages" className="flex items-center gap-3 text-sm">
-        <button type="button" disabled={page <= 1} onClick={() => show({ page: page - 1 })} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
+        <button type="button" disabled={page <= 1} onClick={() => show({ page: page - 1 })} className="min-h-11 rounded border border-steel-300 px-3 disabled:opacity-50">
           Previous
         </button>
         <span>
           Page {page} of {pages}
         </span>
-        <button type="button" disabled={page >= pages} onClick={() => show({ page: page + 1 })} className="rounded border border-steel-300 px-3 py-1 disabled:opacity-50">
+        <button type="button" disabled={page >= pages} onClick={() => show({ page: page + 1 })} className="min-h-11 rounded border border-steel-300 px-3 disabled:opacity-50">
           Next
         </button>
       </nav>

@@ -11,7 +11,7 @@ export function TemplatesNavLink({ workspaces }: { workspaces: Array<{ slug: str
     workspaces.find((w) => w.slug === current)?.slug ?? workspaces.find((w) => w.kind === 'shop')?.slug ?? workspaces[0]?.slug;
   if (!slug) return null;
   return (
-    <Link href={`/w/${slug}/templates`} className="rounded px-2 py-1 text-sm hover:bg-steel-100 dark:hover:bg-steel-800">
+    <Link href={`/w/${slug}/templates`} className="inline-flex min-h-11 items-center rounded px-2 text-sm hover:bg-steel-100 dark:hover:bg-steel-800">
       Templates
     </Link>
   );

@@ -3,6 +3,7 @@ import type { Knex } from 'knex';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
 import { TEMPLATE_SEARCH_FIELDS, type TemplateListQuery } from '@/lib/templates/list-query';
+import { searchWords } from '@/lib/templates/search-words';
 import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import type { TemplatePage } from '@/lib/templates/template';
 import type { TemplateFields } from '@/lib/templates/template-schema';
@@ -28,8 +29,8 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   const filtered = () => {
     const q = knex(`${TABLES.templates} as t`).where('t.workspace_id', workspaceId);
     if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true' ? 1 : 0);
-    if (query.q) {
-      const pattern = likePattern(query.q);
+    for (const word of searchWords(query.q ?? '')) {
+      const pattern = likePattern(word);
       q.andWhere((w) => {
         for (const field of TEMPLATE_SEARCH_FIELDS) w.orWhereRaw(`t.${field.column} LIKE ? ESCAPE '\\'`, [pattern]);
       });

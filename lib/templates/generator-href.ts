@@ -1,3 +1,4 @@
+import { KEEP_PARAM } from '@/lib/sheet-link-params';
 import type { SheetRequestInput } from '@/lib/sheet/sheet-request';
 
 /** Fields the generator on `/` reads from its query string (see lib/generator-prefill.ts), in a stable order. */
@@ -25,9 +26,12 @@ function encodeValue(field: (typeof PREFILL_FIELDS)[number], value: unknown): st
   return String(value);
 }
 
-/** A link to the generator filled in from a sheet request: `/?kind=strip&diameterMm=…`. */
+/**
+ * A link to the generator filled in from a sheet request: `/?keep=1&kind=strip&diameterMm=…`. `keep` adds these
+ * fields to the user's last sheet (paper, orientation, pitch and unit stay as they were; lib/sheet-link.ts).
+ */
 export function generatorHref(request: SheetRequestInput): string {
-  const params = new URLSearchParams();
+  const params = new URLSearchParams({ [KEEP_PARAM]: '1' });
   for (const field of PREFILL_FIELDS) {
     const encoded = encodeValue(field, request[field]);
     if (encoded !== null) params.set(field, encoded);

@@ -144,9 +144,11 @@ test('an owner invites by e-mail; the invitee signs up through the link and join
   await page.reload();
   await expect(page.getByRole('cell', { name: invitee })).toBeVisible();
 
-  // The only owner cannot demote themselves: the page says why and keeps the role.
+  // The only owner cannot demote themselves: after the confirm step the page says why and keeps the role.
   const ownRole = page.getByRole('combobox', { name: 'Role of Maren Ostby' });
   await ownRole.selectOption('viewer');
+  await page.getByRole('button', { name: 'Change role of Maren Ostby' }).click();
+  await page.getByRole('dialog', { name: 'Make Maren Ostby a viewer?' }).getByRole('button', { name: 'Make viewer' }).click();
   await expect(page.getByRole('alert').filter({ hasText: 'last owner of Harbour Lane Motor Works' })).toBeVisible();
   await expect(ownRole).toHaveValue('owner');
 });

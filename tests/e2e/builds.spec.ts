@@ -68,8 +68,8 @@ test('a technician runs an engine from template to the customer’s inbox; a vie
   await tech.getByRole('button', { name: 'Mark done' }).click();
   await expect(tech.getByRole('heading', { level: 1 })).toContainText('done');
 
-  tech.once('dialog', (dialog) => dialog.accept());
   await tech.getByRole('button', { name: `Send to ${CUSTOMER.email}` }).click();
+  await tech.getByRole('dialog', { name: `Mail the customer’s copy to ${CUSTOMER.email}?` }).getByRole('button', { name: 'Send' }).click();
   await expect(tech.getByRole('list', { name: 'Sent copies' })).toContainText(`Sent to ${CUSTOMER.email}`);
   await expect(tech.getByRole('list', { name: 'Sent copies' })).toContainText('by Teo Lindqvist');
 

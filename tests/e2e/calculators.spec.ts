@@ -32,7 +32,7 @@ test('piston drop back to angle, and the advance mark link into the sheet maker'
   // cos θ = (130.2² + 27² − 105²) / (2 · 27 · 130.2) = 6656.04 / 7030.8 = 0.946697…, θ = 18.79°.
   await expect(page.getByTestId('angle-value')).toHaveText('18.79°');
   const link = page.getByRole('link', { name: /Mark 18\.8° BTDC on a wheel/ });
-  await expect(link).toHaveAttribute('href', '/?advanceMarksDeg=18.8');
+  await expect(link).toHaveAttribute('href', '/?keep=1&addAdvanceMarkDeg=18.8');
 
   // Half-stroke drop: cos θ = a / 2l = 27/210, θ = 82.61°: beyond the sheet's 0–60° BTDC, so no mark link.
   await page.getByLabel('Piston drop below TDC').fill('27');
@@ -70,11 +70,12 @@ test('TDC from stops across the 0/360 seam on a full wheel', async ({ page }) =>
   await expect(page.getByTestId('tdc-reading')).toHaveText('5.0°');
   await expect(page.getByTestId('tdc-correction')).toHaveText('−5.0°');
   await expect(page.getByTestId('tdc-stop-angle')).toHaveText('25.0° either side');
-  await expect(page.getByRole('link', { name: /note/ })).toHaveAttribute('href', /note=True\+TDC\+reads\+5%C2%B0/);
+  await expect(page.getByRole('link', { name: /note/ })).toHaveAttribute('href', /tdcCrankDeg=5&tdcStopDeg=25/);
 
+  // A fresh browser's sheet is split (0–180): the note speaks that numbering, not the full wheel's 5°.
   await page.getByRole('link', { name: /note/ }).click();
   await expect(page.getByLabel('Note (optional)')).toHaveValue(
-    'True TDC reads 5° on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side',
+    'True TDC reads 5° ATDC on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side',
   );
 });
 
@@ -89,11 +90,11 @@ test('port events: durations, blowdown and the ring', async ({ page }) => {
   // Transfer at 40 mm opens at 111.64°; blowdown 111.64 − 82.61 = 29.0°.
   await expect(page.getByTestId('blowdown')).toHaveText('29.0°');
   await expect(page.getByRole('img', { name: /Port timing ring: Exhaust open 82\.6° to 277\.4°/ })).toBeVisible();
-  await expect(page.getByRole('link', { name: /Use on a wheel/ })).toHaveAttribute('href', /kind=wheel&numbering=full&portEvents=/);
+  await expect(page.getByRole('link', { name: /Use on a wheel/ })).toHaveAttribute('href', /keep=1&numbering=full&portEvents=/);
 
   // The link opens the sheet maker with the port events filled in, nothing dropped.
   await page.getByRole('link', { name: /Use on a wheel/ }).click();
-  await expect(page).toHaveURL(/\/\?kind=wheel&numbering=full&portEvents=/);
+  await expect(page).toHaveURL(/\/\?kind=wheel&carrier=rotating&numbering=full&portEvents=/);
   await expect(page.getByLabel('Port 1 name')).toHaveValue('Exhaust');
   await expect(page.getByLabel('Port 1 opening angle')).toHaveValue('82.6');
   await expect(page.getByLabel('Port 1 closing angle')).toHaveValue('277.4');
@@ -113,7 +114,7 @@ test('divider distances by keyboard alone, and the scribe chart link', async ({ 
   await expect(page.getByTestId('arc-0')).toHaveText('15.71');
   await expect(page.getByTestId('chord-0')).toHaveText('15.64');
   await expect(page.getByTestId('chord-1')).toHaveText('50.00');
-  await expect(page.getByRole('link', { name: /scribe chart/ })).toHaveAttribute('href', '/?kind=scribe&diameterMm=100&fromDeg=18&toDeg=60');
+  await expect(page.getByRole('link', { name: /scribe chart/ })).toHaveAttribute('href', '/?keep=1&kind=scribe&diameterMm=100&fromDeg=18&toDeg=60');
   // A bad entry answers its own message.
   await page.getByLabel('Angles from TDC').fill('18, 400');
   await expect(page.getByText('Angle must be at most 360° (allowed 0–360°)')).toBeVisible();

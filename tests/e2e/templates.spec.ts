@@ -76,7 +76,7 @@ test('a technician creates a template and prints a strip from it; a viewer can p
   await expect(viewer.getByRole('button', { name: 'Archive' })).toHaveCount(0);
   await expect(viewer.getByRole('form', { name: 'Add a photo' })).toHaveCount(0);
 
-  const sheet = await downloadFrom(viewer, () => viewer.getByRole('link', { name: 'rim strip PDF' }).click());
+  const sheet = await downloadFrom(viewer, () => viewer.getByRole('link', { name: 'PDF: rim strip, numbered from TDC both ways (ignition)' }).click());
   expect(sheet.file.subarray(0, 5).toString('latin1')).toBe('%PDF-');
   expect(await pdfText(sheet.file)).toContain(name);
   await expect(viewer.getByRole('link', { name: 'Print a rim strip' })).toBeVisible();
@@ -84,8 +84,10 @@ test('a technician creates a template and prints a strip from it; a viewer can p
   const id = templateUrl.split('/').pop();
   const patch = await viewer.request.patch(`/api/v1/workspaces/harbour-lane/templates/${id}`, { data: { version: 1, name: 'Viewer was here' } });
   expect(patch.status()).toBe(403);
-  await viewer.goto(`${templateUrl}/edit`);
-  await expect(viewer.getByRole('alert').filter({ hasText: /needs the technician role/ })).toBeVisible();
+  const refused = await viewer.goto(`${templateUrl}/edit`);
+  expect(refused?.status()).toBe(403);
+  await expect(viewer.getByRole('heading', { level: 1, name: 'Your role does not open this page' })).toBeVisible();
+  await expect(viewer.getByText(/needs the technician role/)).toBeVisible();
   await viewer.goto(templateUrl);
   await expect(viewer.getByRole('heading', { level: 1, name })).toBeVisible();
   await viewerContext.close();

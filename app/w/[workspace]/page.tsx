@@ -2,7 +2,7 @@ import type { Metadata } from 'next';
 import Link from 'next/link';
 import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
-import { formatDate, formatDateTime } from '@/lib/format/date-format';
+import { formatDate } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
 import { WorkspaceProfiles } from '@/components/printer-check/workspace-profiles';
 import { ShopNameForm } from '@/components/workspace/create-shop-form';
@@ -10,7 +10,9 @@ import { InviteForm } from '@/components/workspace/invite-form';
 import { MembersPanel } from '@/components/workspace/members-panel';
 import { PendingInvitations } from '@/components/workspace/pending-invitations';
 import { membersOf } from '@/db/accounts';
-import { auditOf } from '@/db/audit-log';
+import { workspaceActivity } from '@/db/activity';
+import { ActivityList } from '@/components/workspace/activity-list';
+import { ACTIVITY_GROUPS, activityLine, type ActivityGroup } from '@/components/workspace/activity-words';
 import { pendingInvitations } from '@/db/invitations';
 import { BuildSettingsForm } from '@/components/builds/build-settings-form';
 import { workspaceToleranceDeg } from '@/db/builds/references';
@@ -19,12 +21,17 @@ import { db } from '@/db/knex';
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Workspace' };
 
-type Props = { params: Promise<{ workspace: string }> };
+type Props = { params: Promise<{ workspace: string }>; searchParams: Promise<{ activity?: string | string[] }> };
 
-export default async function WorkspaceHomePage({ params }: Props) {
+function activityGroup(value: string | string[] | undefined): ActivityGroup {
+  const first = Array.isArray(value) ? value[0] : value;
+  return (ACTIVITY_GROUPS as readonly string[]).includes(first ?? '') ? (first as ActivityGroup) : 'all';
+}
+
+export default async function WorkspaceHomePage({ params, searchParams }: Props) {
   const { workspace: slug } = await params;
+  const group = activityGroup((await searchParams).activity);
   const access = await pageAction(slug, 'workspace.read', `/w/${slug}`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const { workspace, role, user } = access;
   const may = {
     manageMembers: can(role, 'members.manage'),
@@ -35,7 +42,7 @@ export default async function WorkspaceHomePage({ params }: Props) {
   const [members, pending, audit, dateFormat, toleranceDeg] = await Promise.all([
     membersOf(workspace.id),
     may.invite ? pendingInvitations(workspace.id) : Promise.resolve([]),
-    may.audit ? auditOf(workspace.id, 20) : Promise.resolve([]),
+    may.audit ? workspaceActivity(workspace.id, 200) : Promise.resolve([]),
     requestDateFormat(),
     workspaceToleranceDeg(db(), workspace.id),
   ]);
@@ -93,16 +100,14 @@ export default async function WorkspaceHomePage({ params }: Props) {
             </div>
           ) : null}
           {may.audit ? (
-            <div className="space-y-2">
+            <div id="activity" className="space-y-2">
               <h3 className="font-medium">Recent activity</h3>
-              {audit.length === 0 ? <p className="text-sm text-steel-500">Nothing recorded yet.</p> : null}
-              <ul className="space-y-1 text-xs text-steel-600 dark:text-steel-300">
-                {audit.map((entry) => (
-                  <li key={entry.id}>
-                    <time dateTime={entry.createdAt}>{formatDateTime(entry.createdAt, dateFormat)}</time> · {entry.actorName ?? 'someone'} · {entry.action} {entry.detail === '{}' ? '' : entry.detail}
-                  </li>
-                ))}
-              </ul>
+              <ActivityList
+                lines={audit.map((record) => activityLine(record, workspace.slug))}
+                group={group}
+                dateFormat={dateFormat}
+                hrefFor={(g) => (g === 'all' ? `/w/${workspace.slug}#activity` : `/w/${workspace.slug}?activity=${g}#activity`)}
+              />
             </div>
           ) : null}
         </div>

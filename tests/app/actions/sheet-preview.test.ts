@@ -15,12 +15,20 @@ describe('previewSheet', () => {
     expect(root.getAttribute('width')).toMatch(/^[\d.]+mm$/);
     expect(result.svg).not.toContain('NaN');
     expect(result.pageCount).toBe(1);
+    expect(result.joinPieces).toBe(false);
     expect(result.warnings.some((w) => /0\.5° graduations left out/.test(w))).toBe(true); // 0.44 mm < 0.6 mm at 100 mm
   });
 
-  it('counts the pages of a tiled sheet', async () => {
+  it('counts the pages of a tiled sheet and says its pieces are to be joined', async () => {
     const result = await previewSheet({ kind: 'wheel', diameterMm: 400, paper: 'A4' });
     expect(result.ok && result.pageCount).toBeGreaterThan(1);
+    expect(result.ok && result.joinPieces).toBe(true);
+  });
+
+  it('does not ask to join a whole wheel whose info panel takes a page of its own', async () => {
+    const result = await previewSheet({ kind: 'wheel', diameterMm: 190, paper: 'A4' });
+    expect(result.ok && result.pageCount).toBe(2);
+    expect(result.ok && result.joinPieces).toBe(false);
   });
 
   it('refuses bad input with the field named and its range, not a throw', async () => {

@@ -18,7 +18,6 @@ describe('links into the sheet maker use the sheet request fields', () => {
       ports: [{ name: 'Exhaust', heightMm: 27 }, { name: 'Transfer', heightMm: 40 }, { name: 'Dead', heightMm: 80 }],
     });
     const params = query(portEventsWheelHref(ports) as string);
-    expect(params.get('kind')).toBe('wheel');
     expect(params.get('numbering')).toBe('full');
     const events = JSON.parse(params.get('portEvents') as string);
     // 82.6129515636983° rounds to 82.6; 360 − 82.6129… = 277.387… rounds to 277.4.
@@ -34,17 +33,30 @@ describe('links into the sheet maker use the sheet request fields', () => {
     expect(portEventsWheelHref(ports)).toBeNull();
   });
 
-  it('carries an advance angle as one mark, within the sheet’s 0–60° BTDC', () => {
-    expect(query(advanceMarkHref(18.04) as string).get('advanceMarksDeg')).toBe('18');
+  it('carries an advance angle as one mark to add, within the sheet’s 0–60° BTDC, keeping the sheet there is', () => {
+    const params = query(advanceMarkHref(18.04) as string);
+    expect(params.get('addAdvanceMarkDeg')).toBe('18');
+    expect(params.get('keep')).toBe('1');
     expect(advanceMarkHref(75)).toBeNull();
   });
 
-  it('carries the TDC correction as a note the sheet accepts', () => {
+  it('writes the TDC note for the numbering of the sheet it goes on', () => {
+    // Stops read 340 and 30 on a full wheel: midway on the short arc is 5° (common practice: halve the sweep).
     const result = tdcFromStops({ numbering: 'full', readingADeg: 340, readingBDeg: 30 });
-    expect(tdcNoteText(result)).toBe('True TDC reads 5° on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side');
-    const note = query(tdcNoteHref(result)).get('note') as string;
-    expect(note).toBe('True TDC reads 5° on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side');
-    expect(sheetRequestSchema.shape.note.safeParse(note).success).toBe(true);
+    expect(tdcNoteText(result, 'full')).toBe('True TDC reads 5° on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side');
+    expect(tdcNoteText(result, 'split')).toBe('True TDC reads 5° ATDC on this wheel (stop 25° either side): move the pointer 5° toward the BTDC side');
+    // 359.8 in crank order is 0.2° before TDC: a split (0–180) wheel never shows "359.8°".
+    const early = tdcFromStops({ numbering: 'full', readingADeg: 334.8, readingBDeg: 24.8 });
+    expect(tdcNoteText(early, 'split')).toBe('True TDC reads 0.2° BTDC on this wheel (stop 25° either side): move the pointer 0.2° toward the ATDC side');
+    expect(tdcNoteText(early, 'full')).toContain('reads 359.8° on this wheel');
+    for (const numbering of ['full', 'split'] as const) expect(sheetRequestSchema.shape.note.safeParse(tdcNoteText(early, numbering)).success).toBe(true);
+  });
+
+  it('carries the TDC check as figures, not a finished note', () => {
+    const params = query(tdcNoteHref(tdcFromStops({ numbering: 'full', readingADeg: 334.8, readingBDeg: 24.8 })));
+    expect(params.get('tdcCrankDeg')).toBe('359.8');
+    expect(params.get('tdcStopDeg')).toBe('25');
+    expect(params.get('note')).toBeNull();
   });
 
   it('carries the diameter and angle span into a scribe chart', () => {

@@ -58,7 +58,7 @@ describe('generatorHref', () => {
   it('links to the generator with the fields it prefills, read back by lib/generator-prefill', () => {
     const request = templateSheetRequest({ ...base, advanceMarksDeg: [16, 17.5] }, 'strip')!;
     const href = generatorHref(request);
-    expect(href.startsWith('/?kind=strip&diameterMm=128&')).toBe(true);
+    expect(href.startsWith('/?keep=1&kind=strip&diameterMm=128&')).toBe(true);
     const params = new URL(href, 'http://x').searchParams;
     expect(params.get('advanceMarksDeg')).toBe('16,17.5');
     expect(JSON.parse(params.get('portEvents')!)).toEqual(base.portTargets);
@@ -79,6 +79,6 @@ describe('generatorHref', () => {
 
   it('leaves out empty lists and a zero hub hole', () => {
     const href = generatorHref({ kind: 'wheel', diameterMm: 100, hubHoleMm: 0, advanceMarksDeg: [], portEvents: [], title: '' });
-    expect(href).toBe('/?kind=wheel&diameterMm=100');
+    expect(href).toBe('/?keep=1&kind=wheel&diameterMm=100');
   });
 });

@@ -13,7 +13,6 @@ type Props = { params: Promise<{ workspace: string }> };
 export default async function TemplatesPage({ params }: Props) {
   const { workspace: slug } = await params;
   const access = await pageAction(slug, 'template.read', `/w/${slug}/templates`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const canEdit = can(access.role, 'template.edit');
   const canImport = can(access.role, 'template.import');
   return (

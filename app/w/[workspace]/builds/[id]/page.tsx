@@ -36,7 +36,6 @@ const F = buildFields;
 export default async function BuildPage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageAction(slug, 'build.read', `/w/${slug}/builds/${id}`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const buildId = parsePathId(id);
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();
@@ -97,7 +96,12 @@ export default async function BuildPage({ params }: Props) {
               ))
             : null}
           {can(access.role, 'build.delete') ? (
-            <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={`Delete the record of ${build.customerName} with its history? This cannot be undone.`} after={`/w/${slug}/builds`} />
+            <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={{
+                title: `Delete the record of ${build.customerName}?`,
+                message: `The build record of ${build.customerName} is deleted with its history and sends. This cannot be undone.`,
+                confirmLabel: 'Delete record',
+                danger: true,
+              }} after={`/w/${slug}/builds`} />
           ) : null}
         </div>
       </header>
@@ -115,7 +119,11 @@ export default async function BuildPage({ params }: Props) {
           </a>
           {canSend ? (
             build.customerEmail ? (
-              <ActionButton url={`${api}/send`} label={`Send to ${build.customerEmail}`} busyLabel="Sending…" confirm={`Mail the customer’s copy to ${build.customerEmail}?`} />
+              <ActionButton url={`${api}/send`} label={`Send to ${build.customerEmail}`} busyLabel="Sending…" confirm={{
+                title: `Mail the customer’s copy to ${build.customerEmail}?`,
+                message: `A PDF of this record goes to ${build.customerEmail} now, and the send is recorded on the record.`,
+                confirmLabel: 'Send',
+              }} />
             ) : (
               <span className="text-steel-600">Add the customer’s e-mail to send the copy.</span>
             )
@@ -227,7 +235,7 @@ export default async function BuildPage({ params }: Props) {
                 <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of the engine of ${build.customerName}`} className="h-40 rounded border border-steel-200 object-contain" />
               </a>
               <p className="max-w-60 text-xs">{photo.caption}</p>
-              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm="Delete this photo?" /> : null}
+              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm={{ title: 'Delete this photo?', message: `The photo is removed from the record of ${build.customerName} for everyone in the workspace.`, confirmLabel: 'Delete photo', danger: true }} /> : null}
             </li>
           ))}
         </ul>

@@ -15,7 +15,6 @@ type Props = { params: Promise<{ workspace: string }>; searchParams: Promise<{ t
 export default async function NewBuildPage({ params, searchParams }: Props) {
   const { workspace: slug } = await params;
   const access = await pageAction(slug, 'build.edit', `/w/${slug}/builds/new`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const data = await buildPageData(access.workspace.id);
   const templateId = parsePathId((await searchParams).template ?? '');
   const template = data.templates.find((t) => t.id === templateId);

@@ -26,7 +26,6 @@ type Props = { params: Promise<{ workspace: string; id: string }> };
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageAction(slug, 'template.read', `/w/${slug}/templates/${id}`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
@@ -61,13 +60,13 @@ export default async function TemplatePage({ params }: Props) {
         </div>
         {canEdit ? (
           <div className="flex flex-wrap gap-2">
-            <Link href={`/w/${slug}/templates/${template.id}/edit`} className="rounded-md bg-gauge-600 px-3 py-1.5 text-sm font-semibold text-white">
+            <Link href={`/w/${slug}/templates/${template.id}/edit`} className="inline-flex min-h-11 items-center rounded-md bg-gauge-600 px-3 text-sm font-semibold text-white">
               Edit
             </Link>
             <ActionButton
               url={`${api}/archive`}
               body={{ version: template.version, archived: !template.archived }}
-              label={template.archived ? 'Return to the list' : 'Archive'}
+              label={template.archived ? 'Un-archive' : 'Archive'}
               busyLabel="Saving…"
             />
             {can(access.role, 'template.delete') ? (
@@ -76,7 +75,12 @@ export default async function TemplatePage({ params }: Props) {
                 method="DELETE"
                 label="Delete"
                 busyLabel="Deleting…"
-                confirm={`Delete ${template.name} with its photos and history? This cannot be undone; archiving keeps it.`}
+                confirm={{
+                  title: `Delete ${template.name}?`,
+                  message: `${template.name} is deleted with its photos and its history. This cannot be undone; Archive keeps it out of the list instead.`,
+                  confirmLabel: 'Delete template',
+                  danger: true,
+                }}
                 after={`/w/${slug}/templates`}
               />
             ) : null}
@@ -150,7 +154,7 @@ export default async function TemplatePage({ params }: Props) {
                 <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of ${template.name}`} className="h-40 rounded border border-steel-200 object-contain" />
               </a>
               <p className="max-w-60 text-xs">{photo.caption}</p>
-              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm="Delete this photo?" /> : null}
+              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm={{ title: 'Delete this photo?', message: `The photo is removed from ${template.name} for everyone in the workspace.`, confirmLabel: 'Delete photo', danger: true }} /> : null}
             </li>
           ))}
         </ul>

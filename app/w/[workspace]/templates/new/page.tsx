@@ -9,8 +9,7 @@ type Props = { params: Promise<{ workspace: string }> };
 
 export default async function NewTemplatePage({ params }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageAction(slug, 'template.edit', `/w/${slug}/templates/new`);
-  if ('denied' in access) return <p role="alert">{access.denied}</p>;
+  await pageAction(slug, 'template.edit', `/w/${slug}/templates/new`);
   return (
     <section className="max-w-3xl space-y-4">
       <h1 className="text-2xl font-bold">New engine template</h1>

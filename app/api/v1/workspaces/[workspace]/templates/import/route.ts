@@ -3,6 +3,7 @@ import { jsonError } from '@/app/lib/api';
 import { requireAction } from '@/app/lib/authz';
 import { readBodyBytes } from '@/app/lib/request-body';
 import { guarded } from '@/app/lib/route-handler';
+import { recordAudit } from '@/db/audit-log';
 import { findImportReceipt, saveImportReceipt, type ImportReceipt } from '@/db/import-receipts';
 import { importTemplates, planImport, type ImportCounts, type OnMatch } from '@/db/templates/import-templates';
 import { decodeCsvBytes } from '@/lib/csv/decode-csv-bytes';
@@ -154,7 +155,15 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
       if (receipt) return replay(receipt, bodySha256);
       throw err;
     }
-    if (outcome.ok) return Response.json(doneBody(outcome.counts), { status: 201 });
+    if (outcome.ok) {
+      await recordAudit({
+        action: 'templates-imported',
+        actorUserId: access.user.id,
+        workspaceId: access.workspace.id,
+        detail: { count: outcome.counts.created, updated: outcome.counts.updated },
+      });
+      return Response.json(doneBody(outcome.counts), { status: 201 });
+    }
     if (outcome.reason === 'invalid') return problemsResponse(outcome.problems);
     const names = outcome.conflicts.map((c) => `${c.name} (row ${c.row})`).join(', ');
     return Response.json(

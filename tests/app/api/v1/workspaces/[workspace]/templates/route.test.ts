@@ -247,6 +247,14 @@ describe('list: search, sort and server-side pages', () => {
     expect((await (await api.list(ws, '?q=%25')).json()).total).toBe(1);
   });
 
+  it('finds a hyphenated engine from words with a space and the other way round, every word required', async () => {
+    expect((await api.create(ws, { name: 'Echo', description: 'piston-port 80', rimDiameterMm: 110 })).status).toBe(201);
+    const names = async (q: string) => (await (await api.list(ws, `?q=${encodeURIComponent(q)}&sort=name`)).json()).items.map((t: { name: string }) => t.name);
+    expect(await names('piston port')).toEqual(['alpha moped', 'Charlie scooter', 'Echo']);
+    expect(await names('piston-port')).toEqual(['alpha moped', 'Charlie scooter', 'Echo']);
+    expect(await names('port 125')).toEqual(['Charlie scooter']);
+  });
+
   it('pages with limit/offset and reports the total', async () => {
     const page2 = await (await api.list(ws, '?sort=name&pageSize=3&page=2')).json();
     expect(page2).toMatchObject({ total: 4, page: 2, pageSize: 3 });

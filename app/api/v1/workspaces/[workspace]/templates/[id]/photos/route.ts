@@ -1,5 +1,6 @@
 import { randomUUID } from 'node:crypto';
 import { deleteObject, putObject } from '@/app/lib/storage';
+import { recordAudit } from '@/db/audit-log';
 import { insertPhoto, listPhotos, publicPhoto } from '@/db/templates/photos';
 import { PHOTO_EXTENSIONS, PHOTO_UPLOAD_OPTIONS, readPhotoUpload } from '@/app/lib/photo-upload';
 import { guarded } from '@/app/lib/route-handler';
@@ -42,6 +43,12 @@ export async function POST(incoming: Request, { params }: TemplateParams): Promi
         bytes: photo.data.length,
         caption,
         createdBy: access.user.id,
+      });
+      await recordAudit({
+        action: 'photo-added',
+        actorUserId: access.user.id,
+        workspaceId: access.workspace.id,
+        detail: { templateId: template.id, name: template.name },
       });
       return Response.json({ photo: publicPhoto(stored) }, { status: 201 });
     } catch (err) {
