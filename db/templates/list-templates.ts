@@ -1,5 +1,6 @@
 import 'server-only';
 import { db } from '@/db/knex';
+import { caseInsensitiveOrder, likeOperator } from '@/db/dialect';
 import { TABLES } from '@/db/tables';
 import type { TemplateListQuery } from '@/lib/templates/list-query';
 import type { TemplatePage } from '@/lib/templates/template';
@@ -17,10 +18,11 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   const knex = db();
   const filtered = () => {
     const q = knex(`${TABLES.templates} as t`).where('t.workspace_id', workspaceId);
-    if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true' ? 1 : 0);
+    if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true');
     if (query.q) {
       const pattern = likePattern(query.q);
-      q.andWhere((w) => w.whereRaw("t.name LIKE ? ESCAPE '\\'", [pattern]).orWhereRaw("t.description LIKE ? ESCAPE '\\'", [pattern]));
+      const like = likeOperator(knex);
+      q.andWhere((w) => w.whereRaw(`t.name ${like} ? ESCAPE '\\'`, [pattern]).orWhereRaw(`t.description ${like} ? ESCAPE '\\'`, [pattern]));
     }
     return q;
   };
@@ -31,7 +33,7 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   const idRows: Array<{ id: number }> = await filtered()
     .select('t.id')
     .orderByRaw(`${column} IS NULL`) // unknown measurements last in either direction
-    .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
+    .orderByRaw(`${text ? caseInsensitiveOrder(knex, column) : column} ${query.dir}`)
     .orderBy('t.id', query.dir)
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);

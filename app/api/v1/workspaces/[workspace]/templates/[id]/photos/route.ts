@@ -56,8 +56,8 @@ export async function POST(request: Request, { params }: TemplateParams): Promis
     const base = `templates/${template.id}/${randomUUID()}`;
     const storageKey = `${base}.${EXTENSIONS[photo.contentType]}`;
     const thumbKey = `${base}-thumb.webp`;
-    await putObject(storageKey, photo.data);
-    await putObject(thumbKey, photo.thumbnail);
+    await putObject(storageKey, photo.data, photo.contentType);
+    await putObject(thumbKey, photo.thumbnail, 'image/webp');
     try {
       const stored = await insertPhoto({
         templateId: template.id,
