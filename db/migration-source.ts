@@ -4,6 +4,7 @@ import * as createAccountRecords from './migrations/20261201000100_create_accoun
 import * as createPrinterProfiles from './migrations/20261201000200_create_printer_profiles';
 import * as createTemplates from './migrations/20261201000600_create_templates';
 import * as addSessionVersion from './migrations/20261201001500_add_session_version';
+import * as createRateLimits from './migrations/20261203071500_create_rate_limits';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
 
@@ -18,6 +19,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261201000200_create_printer_profiles.ts': createPrinterProfiles,
   '20261201000600_create_templates.ts': createTemplates,
   '20261201001500_add_session_version.ts': addSessionVersion,
+  '20261203071500_create_rate_limits.ts': createRateLimits,
 };
 
 export const staticMigrationSource: Knex.MigrationSource<string> = {

@@ -10,4 +10,5 @@ export const TABLES = {
   templates: 'templates',
   templatePhotos: 'template_photos',
   templateRevisions: 'template_revisions',
+  rateLimits: 'rate_limits',
 } as const;

@@ -1,7 +1,8 @@
 import 'server-only';
-import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+import { RateLimiterRes } from 'rate-limiter-flexible';
+import { clearAllLimits, databaseLimiter } from './rate-limit-store';
 
-/** In-memory limits of one server process (a restart clears them). */
+/** Limits shared by every app instance: the counters live in the database (rate-limit-store.ts). */
 const LIMITS = {
   signInPerAccount: { points: 5, duration: 15 * 60 },
   signInPerAddress: { points: 30, duration: 15 * 60 },
@@ -13,13 +14,9 @@ const LIMITS = {
 
 export type LimitName = keyof typeof LIMITS;
 
-const globalForLimits = globalThis as unknown as { rimscaleLimiters?: Record<LimitName, RateLimiterMemory> };
-
-function limiters(): Record<LimitName, RateLimiterMemory> {
-  globalForLimits.rimscaleLimiters ??= Object.fromEntries(
-    Object.entries(LIMITS).map(([name, opts]) => [name, new RateLimiterMemory({ keyPrefix: name, ...opts })]),
-  ) as Record<LimitName, RateLimiterMemory>;
-  return globalForLimits.rimscaleLimiters;
+function limiters(): Record<LimitName, ReturnType<typeof databaseLimiter>> {
+  const entries = Object.entries(LIMITS).map(([name, opts]) => [name, databaseLimiter({ keyPrefix: name, ...opts })]);
+  return Object.fromEntries(entries) as Record<LimitName, ReturnType<typeof databaseLimiter>>;
 }
 
 export class RateLimitedError extends Error {
@@ -54,8 +51,8 @@ export async function forgetKey(name: LimitName, key: string): Promise<void> {
 }
 
 /** Tests start each case with fresh limits. */
-export function resetAllLimits(): void {
-  globalForLimits.rimscaleLimiters = undefined;
+export async function resetAllLimits(): Promise<void> {
+  await clearAllLimits();
 }
 
 /**
