@@ -24,7 +24,7 @@ cluster() { pg_lsclusters -h | awk -v v="$version" '$1 == v && $2 == "main"'; }
 [ "$(cluster | awk '{print $4}')" = online ] || pg_ctlcluster "$version" main start >&2
 port=$(cluster | awk '{print $3}')
 
-psql_admin() { (cd /tmp && su postgres -c "psql -X -q -v ON_ERROR_STOP=1 -p $port -tA -c \"$1\"") ; }
+psql_admin() { (cd /tmp && PGOPTIONS="-c client_min_messages=warning" su postgres -c "psql -X -q -v ON_ERROR_STOP=1 -p $port -tA -c \"$1\"") ; }
 if [ -z "$(psql_admin "select 1 from pg_roles where rolname = '$role'")" ]; then
   psql_admin "create role $role login createdb password '$password'" >&2
 fi
