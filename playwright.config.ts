@@ -31,7 +31,8 @@ export default defineConfig({
   },
   webServer: [
     {
-      command: `node node_modules/next/dist/bin/next start -p ${port} -H 127.0.0.1`,
+      // The production server script (socket addresses for the rate limits), as `npm start` runs it.
+      command: `HOST=127.0.0.1 PORT=${port} node scripts/server.mjs`,
       url: `${baseURL}/api/health`,
       reuseExistingServer: false,
       timeout: 60_000,

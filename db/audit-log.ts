@@ -9,12 +9,14 @@ export type AuditAction =
   | 'sign-up'
   | 'email-verified'
   | 'password-reset'
+  | 'signed-out'
   | 'workspace-created'
   | 'invitation-sent'
   | 'invitation-accepted'
   | 'role-changed'
   | 'member-removed'
-  | 'member-left';
+  | 'member-left'
+  | 'build-sent';
 
 export type AuditEntry = {
   action: AuditAction;

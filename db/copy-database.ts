@@ -6,23 +6,51 @@ const BATCH_ROWS = 500;
 
 export type CopyReport = Array<{ table: string; rows: number }>;
 
-/** The tables of a SQLite database, parents before children (by their foreign keys). */
-async function tablesInCopyOrder(sqlite: Knex): Promise<string[]> {
-  const tables: Array<{ name: string }> = await sqlite.raw(
-    "select name from sqlite_master where type = 'table' and name not like 'sqlite\\_%' escape '\\' and name not like 'knex\\_%' escape '\\' order by name",
-  );
-  const parents = new Map<string, string[]>();
-  for (const { name } of tables) {
-    const keys: Array<{ table: string }> = await sqlite.raw(`PRAGMA foreign_key_list(${JSON.stringify(name)})`);
-    parents.set(name, keys.map((k) => k.table).filter((t) => t !== name));
+type CopyPlan = {
+  /** Parents before children. */
+  tables: string[];
+  /** Nullable foreign-key columns written after every table is copied, to break a cycle of references. */
+  later: Map<string, string[]>;
+};
+
+type ForeignKey = { table: string; from: string };
+type ColumnInfo = { name: string; notnull: number };
+
+/**
+ * The tables of a SQLite database in an order the foreign keys allow. Where two tables
+ * refer to each other (a workspace's default printer profile belongs to the workspace),
+ * the nullable reference of one of them is filled in after the copy.
+ */
+async function planCopy(sqlite: Knex): Promise<CopyPlan> {
+  const names: string[] = (
+    await sqlite.raw<Array<{ name: string }>>(
+      "select name from sqlite_master where type = 'table' and name not like 'sqlite\\_%' escape '\\' and name not like 'knex\\_%' escape '\\' order by name",
+    )
+  ).map((t) => t.name);
+  const keys = new Map<string, Array<ForeignKey & { nullable: boolean }>>();
+  for (const name of names) {
+    const columns: ColumnInfo[] = await sqlite.raw(`PRAGMA table_info(${JSON.stringify(name)})`);
+    const foreign: ForeignKey[] = await sqlite.raw(`PRAGMA foreign_key_list(${JSON.stringify(name)})`);
+    keys.set(
+      name,
+      foreign.filter((k) => k.table !== name).map((k) => ({ ...k, nullable: columns.find((c) => c.name === k.from)?.notnull === 0 })),
+    );
   }
-  const ordered: string[] = [];
-  while (ordered.length < tables.length) {
-    const ready = tables.map((t) => t.name).filter((t) => !ordered.includes(t) && parents.get(t)!.every((p) => ordered.includes(p)));
-    if (ready.length === 0) throw new Error('The foreign keys of the SQLite database form a cycle; cannot order the copy');
-    ordered.push(...ready);
+  const tables: string[] = [];
+  const later = new Map<string, string[]>();
+  const waitsFor = (name: string) => keys.get(name)!.filter((k) => !tables.includes(k.table) && !later.get(name)?.includes(k.from));
+  while (tables.length < names.length) {
+    const left = names.filter((t) => !tables.includes(t));
+    const ready = left.filter((t) => waitsFor(t).length === 0);
+    if (ready.length > 0) {
+      tables.push(...ready);
+      continue;
+    }
+    const breakable = left.find((t) => waitsFor(t).every((k) => k.nullable));
+    if (!breakable) throw new Error(`The foreign keys among ${left.join(', ')} form a cycle without a nullable column; cannot order the copy`);
+    later.set(breakable, waitsFor(breakable).map((k) => k.from));
   }
-  return ordered;
+  return { tables, later };
 }
 
 async function pendingMigrations(knex: Knex): Promise<number> {
@@ -39,7 +67,7 @@ async function pendingMigrations(knex: Knex): Promise<number> {
 export async function copySqliteToPostgres(sqlite: Knex, postgres: Knex): Promise<CopyReport> {
   if ((await pendingMigrations(sqlite)) > 0) throw new Error('The SQLite database has pending migrations: run npm run db:migrate on it first');
   await postgres.migrate.latest({ migrationSource: staticMigrationSource });
-  const tables = await tablesInCopyOrder(sqlite);
+  const { tables, later } = await planCopy(sqlite);
   const report: CopyReport = [];
   await postgres.transaction(async (trx) => {
     // SQLite's CURRENT_TIMESTAMP texts carry no zone and are UTC.
@@ -50,7 +78,9 @@ export async function copySqliteToPostgres(sqlite: Knex, postgres: Knex): Promis
     }
     for (const table of tables) {
       const rows: Array<Record<string, unknown>> = await sqlite(table).select('*').orderByRaw('rowid');
-      for (let start = 0; start < rows.length; start += BATCH_ROWS) await trx(table).insert(rows.slice(start, start + BATCH_ROWS));
+      const deferred = later.get(table) ?? [];
+      const firstPass = rows.map((row) => ({ ...row, ...Object.fromEntries(deferred.map((column) => [column, null])) }));
+      for (let start = 0; start < rows.length; start += BATCH_ROWS) await trx(table).insert(firstPass.slice(start, start + BATCH_ROWS));
       const columns: Array<{ name: string }> = await sqlite.raw(`PRAGMA table_info(${JSON.stringify(table)})`);
       if (columns.some((c) => c.name === 'id')) {
         const serial = await trx.raw<{ rows: Array<{ seq: string | null }> }>('select pg_get_serial_sequence(?, ?) as seq', [table, 'id']);
@@ -58,6 +88,12 @@ export async function copySqliteToPostgres(sqlite: Knex, postgres: Knex): Promis
         if (sequence) await trx.raw('select setval(?, coalesce((select max(id) from ??), 0) + 1, false)', [sequence, table]);
       }
       report.push({ table, rows: rows.length });
+    }
+    for (const [table, columns] of later) {
+      const rows: Array<Record<string, unknown>> = await sqlite(table).select('id', ...columns);
+      for (const row of rows.filter((r) => columns.some((c) => r[c] !== null))) {
+        await trx(table).where('id', row.id as number).update(Object.fromEntries(columns.map((c) => [c, row[c]])));
+      }
     }
   });
   return report;

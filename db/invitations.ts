@@ -20,8 +20,9 @@ export type InvitationView = {
 export async function createInvitation(
   input: { workspaceId: number; email: string; role: Role; invitedBy: number },
   knex: Knex = db(),
-): Promise<{ id: number; token: string }> {
+): Promise<{ id: number; token: string; expiresAt: string }> {
   const { token, tokenHash } = newToken();
+  const expires = expiresAt('invitation');
   const [row] = await knex(TABLES.invitations)
     .insert({
       workspace_id: input.workspaceId,
@@ -29,10 +30,10 @@ export async function createInvitation(
       role: input.role,
       invited_by: input.invitedBy,
       token_hash: tokenHash,
-      expires_at: expiresAt('invitation'),
+      expires_at: expires,
     })
     .returning('id');
-  return { id: row.id, token };
+  return { id: row.id, token, expiresAt: expires };
 }
 
 export async function pendingInvitations(workspaceId: number, knex: Knex = db()) {

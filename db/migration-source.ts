@@ -4,6 +4,9 @@ import * as createAccountRecords from './migrations/20261201000100_create_accoun
 import * as createPrinterProfiles from './migrations/20261201000200_create_printer_profiles';
 import * as createTemplates from './migrations/20261201000600_create_templates';
 import * as addSessionVersion from './migrations/20261201001500_add_session_version';
+import * as createBuilds from './migrations/20261203000900_create_builds';
+import * as addDefaultPrinterProfile from './migrations/20261203001000_add_default_printer_profile';
+import * as createImportReceipts from './migrations/20261203110000_create_import_receipts';
 import * as createRateLimits from './migrations/20261203071500_create_rate_limits';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
@@ -19,6 +22,9 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261201000200_create_printer_profiles.ts': createPrinterProfiles,
   '20261201000600_create_templates.ts': createTemplates,
   '20261201001500_add_session_version.ts': addSessionVersion,
+  '20261203000900_create_builds.ts': createBuilds,
+  '20261203001000_add_default_printer_profile.ts': addDefaultPrinterProfile,
+  '20261203110000_create_import_receipts.ts': createImportReceipts,
   '20261203071500_create_rate_limits.ts': createRateLimits,
 };
 

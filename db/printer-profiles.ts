@@ -45,3 +45,25 @@ export async function addProfile(
 export async function deleteProfile(workspaceId: number, id: number, knex: Knex = db()): Promise<boolean> {
   return (await knex(TABLES.printerProfiles).where({ workspace_id: workspaceId, id }).del()) === 1;
 }
+
+/** The workspace's default profile, or null when it has none. */
+export async function defaultProfileOf(workspaceId: number, knex: Knex = db()): Promise<PrinterProfile | null> {
+  const row: Row | undefined = await knex(`${TABLES.workspaces} as w`)
+    .join(`${TABLES.printerProfiles} as p`, 'p.id', 'w.default_printer_profile_id')
+    .where('w.id', workspaceId)
+    .first('p.id', 'p.name', 'p.scale_x', 'p.scale_y', 'p.created_at');
+  return row ? toProfile(row) : null;
+}
+
+/** A profile of the workspace by id, or null (another workspace's id reads as missing). */
+export async function findProfile(workspaceId: number, id: number, knex: Knex = db()): Promise<PrinterProfile | null> {
+  const row: Row | undefined = await knex(TABLES.printerProfiles).where({ workspace_id: workspaceId, id }).first('id', 'name', 'scale_x', 'scale_y', 'created_at');
+  return row ? toProfile(row) : null;
+}
+
+/** Makes one of the workspace's profiles its default (null: none); false when the profile is not the workspace's. */
+export async function setDefaultProfile(workspaceId: number, profileId: number | null, knex: Knex = db()): Promise<boolean> {
+  if (profileId !== null && !(await findProfile(workspaceId, profileId, knex))) return false;
+  await knex(TABLES.workspaces).where('id', workspaceId).update({ default_printer_profile_id: profileId });
+  return true;
+}

@@ -10,5 +10,9 @@ export const TABLES = {
   templates: 'templates',
   templatePhotos: 'template_photos',
   templateRevisions: 'template_revisions',
+  importReceipts: 'import_receipts',
+  builds: 'builds',
+  buildRevisions: 'build_revisions',
+  buildSends: 'build_sends',
   rateLimits: 'rate_limits',
 } as const;

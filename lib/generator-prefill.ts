@@ -1,4 +1,5 @@
 import type { z } from 'zod';
+import { fieldsOf, type Field, type FieldKind } from './fields/field';
 import {
   MAX_ADVANCE_MARKS,
   MAX_PORT_EVENTS,
@@ -7,6 +8,7 @@ import {
   type PortEvent,
   type SheetRequestInput,
 } from './sheet/sheet-request';
+import { sheetRequestFields } from './sheet/sheet-request-fields';
 
 /**
  * Reads generator defaults from a link's query string (the calculators and the
@@ -19,25 +21,20 @@ export type SearchParamsLike = URLSearchParams | Record<string, string | string[
 export type IgnoredParam = { param: string; message: string };
 export type Prefill = { values: Partial<SheetRequestInput>; ignored: IgnoredParam[] };
 
-const NUMBER_PARAMS = [
-  'diameterMm',
-  'hubHoleMm',
-  'innerDiameterMm',
-  'outerDiameterMm',
-  'paperThicknessMm',
-  'stripWidthMm',
-  'seamCrankDeg',
-  'fromDeg',
-  'toDeg',
-  'stepDeg',
-  'minPitchMm',
-] as const;
-const CHOICE_PARAMS = ['kind', 'rotation', 'carrier', 'numbering', 'paper', 'orientation'] as const;
-const TEXT_PARAMS = ['title', 'note'] as const;
-const PAIR_PARAMS = ['windowCrankDeg', 'advanceBandDeg'] as const;
+/** The printer's scale and profile and the file format are the download's business, never a link's. */
+const NOT_FROM_LINKS = new Set(['printerScaleX', 'printerScaleY', 'printerProfileName', 'format']);
+/** Lists with a reader of their own (each entry kept or reported on its own). */
+const OWN_READERS = new Set(['advanceMarksDeg', 'portEvents']);
+const LINK_FIELDS = fieldsOf(sheetRequestFields).filter((field) => !NOT_FROM_LINKS.has(field.key));
+const ofKind = (...kinds: FieldKind[]): Field[] => LINK_FIELDS.filter((field) => kinds.includes(field.kind) && !OWN_READERS.has(field.key));
+
+const NUMBER_FIELDS = ofKind('number', 'length');
+const CHOICE_FIELDS = ofKind('choice');
+const TEXT_FIELDS = ofKind('text');
+/** The window and the advance band: two numbers, "320,10". */
+const PAIR_FIELDS = ofKind('list');
 
 const MAX_PARAM_CHARS = 4000;
-const shape = sheetRequestSchema.shape;
 
 function readParam(params: SearchParamsLike, key: string): string | undefined {
   const raw = params instanceof URLSearchParams ? (params.get(key) ?? undefined) : params[key];
@@ -67,28 +64,19 @@ function firstMessage(error: z.ZodError): string {
 export function prefillFromSearchParams(params: SearchParamsLike): Prefill {
   const values: Record<string, unknown> = {};
   const ignored: IgnoredParam[] = [];
-  const accept = (param: string, schema: z.ZodType, candidate: unknown) => {
-    const result = schema.safeParse(candidate);
-    if (result.success) values[param] = result.data;
-    else ignored.push({ param, message: firstMessage(result.error) });
+  const accept = (fields: Field[], read: (text: string) => unknown) => {
+    for (const field of fields) {
+      const text = readParam(params, field.key);
+      if (text === undefined) continue;
+      const result = field.schema.safeParse(read(text));
+      if (result.success) values[field.key] = result.data;
+      else ignored.push({ param: field.key, message: firstMessage(result.error) });
+    }
   };
-
-  for (const param of NUMBER_PARAMS) {
-    const text = readParam(params, param);
-    if (text !== undefined) accept(param, shape[param], parseDecimal(text));
-  }
-  for (const param of CHOICE_PARAMS) {
-    const text = readParam(params, param);
-    if (text !== undefined) accept(param, shape[param], text.trim());
-  }
-  for (const param of TEXT_PARAMS) {
-    const text = readParam(params, param);
-    if (text !== undefined) accept(param, shape[param], text);
-  }
-  for (const param of PAIR_PARAMS) {
-    const text = readParam(params, param);
-    if (text !== undefined) accept(param, shape[param], parseNumberList(text));
-  }
+  accept(NUMBER_FIELDS, parseDecimal);
+  accept(CHOICE_FIELDS, (text) => text.trim());
+  accept(TEXT_FIELDS, (text) => text);
+  accept(PAIR_FIELDS, parseNumberList);
   readAdvanceMarks(params, values, ignored);
   readPortEvents(params, values, ignored);
   return { values: values as Partial<SheetRequestInput>, ignored };
@@ -98,7 +86,7 @@ export function prefillFromSearchParams(params: SearchParamsLike): Prefill {
 function readAdvanceMarks(params: SearchParamsLike, values: Record<string, unknown>, ignored: IgnoredParam[]) {
   const text = readParam(params, 'advanceMarksDeg');
   if (text === undefined) return;
-  const element = shape.advanceMarksDeg.unwrap().element;
+  const element = sheetRequestSchema.shape.advanceMarksDeg.unwrap().element;
   const kept: number[] = [];
   for (const angle of parseNumberList(text)) {
     const result = element.safeParse(angle);
@@ -106,7 +94,7 @@ function readAdvanceMarks(params: SearchParamsLike, values: Record<string, unkno
     else ignored.push({ param: 'advanceMarksDeg', message: firstMessage(result.error) });
   }
   if (kept.length > MAX_ADVANCE_MARKS)
-    ignored.push({ param: 'advanceMarksDeg', message: `Advance marks (advanceMarksDeg): kept the first ${MAX_ADVANCE_MARKS}` });
+    ignored.push({ param: 'advanceMarksDeg', message: `${sheetRequestFields.advanceMarksDeg.label}: kept the first ${MAX_ADVANCE_MARKS}` });
   values.advanceMarksDeg = kept.slice(0, MAX_ADVANCE_MARKS);
 }
 
@@ -118,11 +106,11 @@ function readPortEvents(params: SearchParamsLike, values: Record<string, unknown
   try {
     json = JSON.parse(text);
   } catch {
-    ignored.push({ param: 'portEvents', message: 'Port events (portEvents) are not valid JSON' });
+    ignored.push({ param: 'portEvents', message: `${sheetRequestFields.portEvents.label} are not valid JSON` });
     return;
   }
   if (!Array.isArray(json)) {
-    ignored.push({ param: 'portEvents', message: 'Port events (portEvents) must be a list of { name, opensCrankDeg, closesCrankDeg }' });
+    ignored.push({ param: 'portEvents', message: `${sheetRequestFields.portEvents.label} must be a list of { name, opensCrankDeg, closesCrankDeg }` });
     return;
   }
   const kept: PortEvent[] = [];
@@ -132,6 +120,6 @@ function readPortEvents(params: SearchParamsLike, values: Record<string, unknown
     else ignored.push({ param: 'portEvents', message: firstMessage(result.error) });
   }
   if (kept.length > MAX_PORT_EVENTS)
-    ignored.push({ param: 'portEvents', message: `Port events (portEvents): kept the first ${MAX_PORT_EVENTS}` });
+    ignored.push({ param: 'portEvents', message: `${sheetRequestFields.portEvents.label}: kept the first ${MAX_PORT_EVENTS}` });
   values.portEvents = kept.slice(0, MAX_PORT_EVENTS);
 }

@@ -1,9 +1,11 @@
 import { z } from 'zod';
-import { PRINTER_SCALE_RANGE } from './sheet/sheet-request';
+import { lengthField, textField } from './fields/builders';
+import { defineFields, shapeOf } from './fields/field';
+import { printerScaleFields } from './sheet/sheet-request-fields';
 
 /**
  * Printer profiles: the scale-check sheet carries 100 mm bars in both axes
- * (PRODUCT.md §3). The user measures what the printer made of them; the profile
+ * (DEVELOPERS.md, "Sheets"). The user measures what the printer made of them; the profile
  * holds what the printer makes of one millimetre (measured ÷ 100) per axis, and
  * later sheets are pre-scaled by its inverse.
  */
@@ -19,43 +21,21 @@ export const PROFILE_NAME_MAX = 60;
 const SCALING_HINT =
   'the printer is probably scaling to fit the page: print again at 100 % / actual size with fit-to-page turned off';
 
-function measuredBar(label: string, field: string) {
-  const { min, max } = MEASURED_BAR_RANGE_MM;
-  const range = `${min}–${max} mm`;
-  return z
-    .number({ error: `${label} (${field}) must be a number, ${range}` })
-    .min(min, `${label} (${field}) is under ${min} mm (allowed ${range}): ${SCALING_HINT}`)
-    .max(max, `${label} (${field}) is over ${max} mm (allowed ${range}): ${SCALING_HINT}`);
-}
-
-const profileName = z
-  .string({ error: `Profile name (name) must be text, 1–${PROFILE_NAME_MAX} characters` })
-  .trim()
-  .min(1, `Profile name (name) must not be empty (1–${PROFILE_NAME_MAX} characters)`)
-  .max(PROFILE_NAME_MAX, `Profile name (name) must be at most ${PROFILE_NAME_MAX} characters`);
-
 /** What the printer-check form asks for: a name and the two measured bar lengths. */
-export const printerMeasurementSchema = z.object({
-  name: profileName,
-  measuredXMm: measuredBar('Horizontal bar', 'measuredXMm'),
-  measuredYMm: measuredBar('Vertical bar', 'measuredYMm'),
+export const printerMeasurementFields = defineFields({
+  name: textField({ label: 'Profile name', minLength: 1, maxLength: PROFILE_NAME_MAX }),
+  measuredXMm: lengthField({ label: 'Horizontal bar', ...MEASURED_BAR_RANGE_MM, hint: SCALING_HINT, help: 'The 100 mm bar that runs across the page.' }),
+  measuredYMm: lengthField({ label: 'Vertical bar', ...MEASURED_BAR_RANGE_MM, hint: SCALING_HINT, help: 'The 100 mm bar that runs down the page.' }),
 });
+
+export const printerMeasurementSchema = z.object(shapeOf(printerMeasurementFields));
 export type PrinterMeasurement = z.infer<typeof printerMeasurementSchema>;
 
-function scaleFactor(label: string, field: string) {
-  const { min, max } = PRINTER_SCALE_RANGE;
-  return z
-    .number({ error: `${label} (${field}) must be a number, ${min}–${max}` })
-    .min(min, `${label} (${field}) must be at least ${min} (allowed ${min}–${max})`)
-    .max(max, `${label} (${field}) must be at most ${max} (allowed ${min}–${max})`);
-}
-
-/** A stored profile, as kept in the browser (and sent with a sheet request). */
+/** A stored profile, as kept in the browser (and sent with a sheet request); id and date are the browser's bookkeeping. */
 export const printerProfileSchema = z.object({
   id: z.string().min(1).max(64),
-  name: profileName,
-  printerScaleX: scaleFactor('Printer scale X', 'printerScaleX'),
-  printerScaleY: scaleFactor('Printer scale Y', 'printerScaleY'),
+  name: printerMeasurementFields.name.schema,
+  ...shapeOf(printerScaleFields),
   createdAt: z.string().max(40),
 });
 export type PrinterProfile = z.infer<typeof printerProfileSchema>;

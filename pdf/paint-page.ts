@@ -1,9 +1,9 @@
+import { shapeMayShowIn } from '@/lib/sheet/bounds';
 import type { Drawing, PageLayout } from '@/lib/sheet/drawing';
 import type { SheetFonts } from './fonts';
 import { drawingToPagePt, pageMmToPt, viewportRectPt } from './page-mapping';
 import { paintShape } from './paint-shape';
 import type { Painter } from './painter';
-import { shapeMayShowOn } from './shape-bounds';
 
 /**
  * One printed page: the page's viewport of the drawing, moved to its origin and
@@ -17,7 +17,7 @@ export function paintPage(p: Painter, drawing: Drawing, page: PageLayout, fonts:
   p.save();
   p.rect(clip.xPt, clip.yPt, clip.widthPt, clip.heightPt).clip();
   for (const shape of drawing.shapes) {
-    if (shapeMayShowOn(shape, page)) paintShape(p, shape, at, fonts);
+    if (shapeMayShowIn(shape, page.viewportMm)) paintShape(p, shape, at, fonts);
   }
   p.restore();
   for (const shape of page.pageShapes) paintShape(p, shape, pageMmToPt, fonts);

@@ -1,8 +1,9 @@
 /**
  * The two-instance check (run through scripts/check-two-instances.sh, which builds, starts
- * PostgreSQL, migrates and seeds): starts the S3 fake and the mail fake, two `next start`
- * servers on the same DATABASE_URL, bucket and session key, and shows through HTTP alone
- * that what one instance writes the other reads. Prints each check; exits 1 on any failure.
+ * PostgreSQL, migrates and seeds): starts the S3 fake and the mail fake, two production
+ * servers (`npm start`: scripts/server.mjs over the `next build` output) on the same
+ * DATABASE_URL, bucket and session key, and shows through HTTP alone that what one
+ * instance writes the other reads. Prints each check; exits 1 on any failure.
  */
 import { spawn, type ChildProcess } from 'node:child_process';
 import crypto from 'node:crypto';
@@ -43,8 +44,9 @@ function freePort(): Promise<number> {
 async function startInstance(name: string, env: NodeJS.ProcessEnv): Promise<Instance> {
   const port = await freePort();
   const url = `http://127.0.0.1:${port}`;
-  const server = spawn(process.execPath, [path.join('node_modules', 'next', 'dist', 'bin', 'next'), 'start', '-p', String(port), '-H', '127.0.0.1'], {
-    env: { ...env, APP_URL: url, NEXTAUTH_URL: url },
+  // The production server (`npm start`): the built app as `next start` serves it, plus the socket peer the limits count.
+  const server = spawn(process.execPath, [path.join('scripts', 'server.mjs')], {
+    env: { ...env, HOST: '127.0.0.1', PORT: String(port), APP_URL: url, NEXTAUTH_URL: url },
     stdio: ['ignore', 'ignore', 'inherit'],
   });
   const deadline = Date.now() + 60_000;

@@ -21,6 +21,8 @@ if [ -z "${SMTP_URL:-}" ]; then
   mail_fake_pid=$!
   echo "Mail fake running: sent e-mail appears at ${APP_URL}/dev/inbox"
 fi
-node node_modules/next/dist/bin/next start -p "${PORT:-3000}" &
+# Listens on this machine only (127.0.0.1) unless HOST is set on purpose, e.g. HOST=0.0.0.0 for the shop's network.
+export HOST="${HOST:-127.0.0.1}" PORT="${PORT:-3000}"
+node scripts/server.mjs &
 server_pid=$!
 wait "$server_pid"

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { pageUser } from '@/app/lib/page-access';
+import { SignOutEverywhere } from '@/components/account/sign-out-everywhere';
 import { ShopNameForm } from '@/components/workspace/create-shop-form';
 import { ResendVerification } from '@/components/workspace/resend-verification';
 import { findUserById, workspacesOf } from '@/db/accounts';
@@ -37,6 +38,13 @@ export default async function AccountPage() {
         <h2 className="text-lg font-semibold">Create a shop workspace</h2>
         <p className="text-sm text-steel-600 dark:text-steel-300">A shop shares its template library and build sheets with the people you invite.</p>
         <ShopNameForm />
+      </div>
+      <div className="space-y-2">
+        <h2 className="text-lg font-semibold">Sessions</h2>
+        <p className="text-sm text-steel-600 dark:text-steel-300">
+          Signing out ends your sessions on every device. Use this if you signed in on a computer you no longer use or lost a phone.
+        </p>
+        <SignOutEverywhere />
       </div>
     </section>
   );

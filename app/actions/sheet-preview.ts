@@ -1,5 +1,6 @@
 'use server';
 import 'server-only';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetRequestSchema, toFieldIssues, type FieldIssue } from '@/lib/sheet/sheet-request';
@@ -12,13 +13,13 @@ export type SheetPreviewResult =
  * The generator form's live preview: the same schema as POST /api/v1/sheets, the
  * untiled drawing as SVG, the layout's warnings and how many pages the PDF will take.
  * Public on purpose, so no session or role check: the generator works without an
- * account (PRODUCT.md §1, issue 3) and this touches no stored data.
+ * account (DEVELOPERS.md, "Public pages") and this touches no stored data.
  */
 export async function previewSheet(input: unknown): Promise<SheetPreviewResult> {
   const parsed = sheetRequestSchema.safeParse(input);
   if (!parsed.success) return { ok: false, issues: toFieldIssues(parsed.error) };
   try {
-    const drawing = buildDrawing(parsed.data);
+    const drawing = buildDrawing(parsed.data, { dateFormat: await requestDateFormat() });
     return { ok: true, svg: renderSvg(drawing), warnings: drawing.warnings, pageCount: drawing.pages.length };
   } catch (error) {
     console.error('previewSheet failed:', error instanceof Error ? error.message : String(error));

@@ -1,7 +1,7 @@
 import Link from 'next/link';
 import { CALCULATORS } from './calculator-list';
 
-// Public section (PRODUCT.md §4): no sign-in, nothing stored; every answer is computed in the browser.
+// Public section (DEVELOPERS.md, "Public pages"): no sign-in, nothing stored; every answer is computed in the browser.
 export default function CalculatorsLayout({ children }: { children: React.ReactNode }) {
   return (
     <div className="space-y-6">

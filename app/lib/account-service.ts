@@ -11,6 +11,7 @@ import { resetMail, verificationMail } from './emails';
 import { sendMail } from './mailer';
 import { TOKEN_REFUSAL_MESSAGES } from '@/lib/one-time-token';
 import { hashPassword } from './passwords';
+import { consumePoint, RateLimitedError } from './rate-limit';
 
 export type ServiceResult<T> = { ok: true; value: T } | { ok: false; status: number; message: string };
 
@@ -21,7 +22,7 @@ export function randomSlugTail(): string {
 }
 
 /** Creates the account with its personal workspace; mails a confirmation link unless an invitation proves the address. */
-export async function signUp(input: SignUpInput, origin: string): Promise<ServiceResult<{ userId: number; verified: boolean }>> {
+export async function signUp(input: SignUpInput, origin: string, client: string): Promise<ServiceResult<{ userId: number; verified: boolean }>> {
   const email = normalizeEmail(input.email);
   if (await findUserByEmail(email)) {
     return refuse(409, 'An account with this e-mail already exists: sign in, or reset its password');
@@ -45,14 +46,24 @@ export async function signUp(input: SignUpInput, origin: string): Promise<Servic
   await recordAudit({ action: 'sign-up', actorUserId: userId });
   if (!verified) {
     // The account stands even if the mail server is down; the account page offers a new link.
-    await sendVerification(userId, origin).catch((err: unknown) => console.error(`[mail] confirmation link not sent: ${errorText(err)}`));
+    await sendVerification(userId, origin, client).catch((err: unknown) => console.error(`[mail] confirmation link not sent: ${errorText(err)}`));
   }
   return { ok: true, value: { userId, verified } };
 }
 
-export async function sendVerification(userId: number, origin: string): Promise<void> {
+/**
+ * Mails a confirmation link to the account's (unconfirmed) address. Whoever signs up may have
+ * typed somebody else's address, so these mails are limited per target address, per account
+ * and per client (RateLimitedError).
+ */
+export async function sendVerification(userId: number, origin: string, client: string): Promise<void> {
   const user = await findUserById(userId);
   if (!user || user.email_verified_at) return;
+  await consumePoint([
+    ['verifyMailPerTarget', user.email],
+    ['verifyMailPerAccount', String(user.id)],
+    ['verifyMailPerAddress', client],
+  ]);
   const token = await issueToken('verify-email', userId);
   await sendMail(verificationMail(user.email, user.name, `${origin}/verify-email?token=${token}`));
 }
@@ -69,6 +80,13 @@ export async function verifyEmail(token: string): Promise<ServiceResult<{ userId
 export async function requestPasswordReset(email: string, origin: string): Promise<void> {
   const user = await findUserByEmail(email);
   if (!user) return;
+  try {
+    await consumePoint([['resetPerAccount', String(user.id)]]);
+  } catch (err) {
+    // Answered like any other request: the reply must not tell whether the address has an account.
+    if (err instanceof RateLimitedError) return;
+    throw err;
+  }
   const token = await issueToken('reset-password', user.id);
   // A mail failure is logged, not answered: the reply must not differ for addresses with an account.
   await sendMail(resetMail(user.email, `${origin}/reset-password/confirm?token=${token}`)).catch((err: unknown) =>
@@ -96,4 +114,18 @@ export async function resetPassword(token: string, password: string): Promise<Se
   await retireTokens('reset-password', used.userId);
   await recordAudit({ action: 'password-reset', actorUserId: used.userId });
   return { ok: true, value: { userId: used.userId } };
+}
+
+/**
+ * Ends every session of the user: sessions carry the version they were signed in at, and
+ * app/lib/session.ts reads one that no longer matches as signed out, so a saved cookie stops
+ * working at once. With `fromVersion` (a sign-out's own token) only a current session raises
+ * it, so replaying an already dead cookie cannot end newer sessions.
+ */
+export async function endSessions(userId: number, fromVersion?: number): Promise<boolean> {
+  const query = db()(TABLES.users).where({ id: userId });
+  if (fromVersion !== undefined) query.andWhere({ session_version: fromVersion });
+  const changed = await query.update({ session_version: db().raw('session_version + 1') });
+  if (changed > 0) await recordAudit({ action: 'signed-out', actorUserId: userId, detail: { everywhere: fromVersion === undefined ? 1 : 0 } });
+  return changed > 0;
 }

@@ -1,9 +1,11 @@
 import 'server-only';
 import type { z } from 'zod';
 import { toFieldIssues, type FieldIssue } from '@/lib/sheet/sheet-request';
+import { BodyTooLargeError, readBodyBytes, sizeText } from './request-body';
 
-/** JSON bodies above this are refused before parsing. */
+/** JSON bodies above this are refused while they are read. */
 export const MAX_JSON_BODY_BYTES = 64 * 1024;
+
 
 export type ApiErrorBody = { error: string; issues: FieldIssue[] };
 
@@ -25,11 +27,17 @@ export async function parseJsonBody<S extends z.ZodType>(
 ): Promise<Parsed<z.output<S>>> {
   const declared = Number(request.headers.get('content-length') ?? '0');
   if (declared > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
-  const text = await request.text();
-  if (Buffer.byteLength(text) > maxBytes) return { ok: false, response: tooLarge(maxBytes) };
+  let bytes: Uint8Array;
+  try {
+    // Read while counting: a chunked body without Content-Length stops at the limit too.
+    bytes = await readBodyBytes(request, maxBytes);
+  } catch (err) {
+    if (err instanceof BodyTooLargeError) return { ok: false, response: tooLarge(maxBytes) };
+    throw err;
+  }
   let json: unknown;
   try {
-    json = JSON.parse(text);
+    json = JSON.parse(new TextDecoder().decode(bytes));
   } catch {
     return { ok: false, response: jsonError(400, 'The request body is not valid JSON', [{ path: '(body)', message: 'Send a JSON object' }]) };
   }
@@ -39,7 +47,5 @@ export async function parseJsonBody<S extends z.ZodType>(
 }
 
 function tooLarge(maxBytes: number): Response {
-  return jsonError(413, `The request body is larger than ${Math.round(maxBytes / 1024)} KiB`, [
-    { path: '(body)', message: `At most ${Math.round(maxBytes / 1024)} KiB of JSON` },
-  ]);
+  return jsonError(413, `The request body is larger than ${sizeText(maxBytes)}`, [{ path: '(body)', message: `At most ${sizeText(maxBytes)} of JSON` }]);
 }

@@ -1,9 +1,11 @@
 import 'server-only';
 import type { NextAuthOptions } from 'next-auth';
 import CredentialsProvider from 'next-auth/providers/credentials';
+import { endSessions } from './account-service';
+import { secureCookies } from '@/lib/session-cookie';
 import { authSecret } from './auth-secret';
 import { signInWithPassword } from './password-sign-in';
-import { clientAddress } from './rate-limit';
+import { clientAddress } from './client-address';
 
 // next-auth 4 takes its origin from NEXTAUTH_URL, or from the Host header when this is set:
 // the app then works on whatever host and port it is served from without configuration.
@@ -17,6 +19,10 @@ export const authOptions: NextAuthOptions = {
     return authSecret();
   },
   session: { strategy: 'jwt', maxAge: 30 * 24 * 60 * 60 },
+  // Secure cookies whenever the public origin is https, also when a TLS proxy talks http to the app.
+  get useSecureCookies() {
+    return secureCookies();
+  },
   pages: { signIn: SIGN_IN_PATH, error: SIGN_IN_PATH },
   providers: [
     CredentialsProvider({
@@ -39,6 +45,13 @@ export const authOptions: NextAuthOptions = {
     session({ session, token }) {
       session.user = { id: token.sub ?? '', email: token.email ?? '', name: token.name ?? '', sessionVersion: token.sv ?? 0 };
       return session;
+    },
+  },
+  events: {
+    // Signing out raises the session version, so the cookie stops working even if it was saved.
+    async signOut({ token }) {
+      const userId = Number(token?.sub);
+      if (Number.isInteger(userId) && userId > 0) await endSessions(userId, Number(token.sv ?? 0));
     },
   },
   logger: {

@@ -1,7 +1,8 @@
 import 'server-only';
 import nodemailer, { type Transporter } from 'nodemailer';
 
-export type OutgoingMail = { to: string; subject: string; text: string };
+export type MailAttachment = { filename: string; content: Buffer; contentType: string };
+export type OutgoingMail = { to: string; subject: string; text: string; attachments?: MailAttachment[] };
 
 /** What `npx tsx scripts/mail-fake.ts` listens on by default. */
 const DEVELOPMENT_SMTP_URL = 'smtp://127.0.0.1:2525';
@@ -31,5 +32,6 @@ export async function sendMail(mail: OutgoingMail): Promise<void> {
     to: mail.to,
     subject: mail.subject,
     text: mail.text,
+    attachments: mail.attachments,
   });
 }

@@ -20,8 +20,9 @@ export async function signInWithPassword(credentials: unknown, address: string):
   if (!parsed.success) return null;
   const email = normalizeEmail(parsed.data.email);
   const keys: Parameters<typeof consumePoint>[0] = [
-    ['signInPerAccount', email],
+    ['signInPerAccountAndAddress', `${email} ${address}`],
     ['signInPerAddress', address],
+    ['signInPerAccount', email],
   ];
   try {
     await assertNotLimited(keys);
@@ -36,7 +37,8 @@ export async function signInWithPassword(credentials: unknown, address: string):
     await recordAudit({ action: 'sign-in-refused', actorUserId: user?.id ?? null, detail: { address } });
     return null;
   }
-  await forgetKey('signInPerAccount', email);
+  // The right password from here clears this address's count for the account; the others stand.
+  await forgetKey('signInPerAccountAndAddress', `${email} ${address}`);
   await recordAudit({ action: 'sign-in', actorUserId: user!.id, detail: { address } });
   return { id: String(user!.id), email: user!.email, name: user!.name, sessionVersion: user!.session_version };
 }

@@ -2,18 +2,43 @@ import 'server-only';
 import { RateLimiterRes } from 'rate-limiter-flexible';
 import { clearAllLimits, databaseLimiter } from './rate-limit-store';
 
-/** Limits shared by every app instance: the counters live in the database (rate-limit-store.ts). */
+const MINUTE = 60;
+const HOUR = 60 * MINUTE;
+const DAY = 24 * HOUR;
+
+/**
+ * Every limit the app applies: its points per window. The keys each caller passes say what is
+ * counted (an account, a target e-mail address, a client address from client-address.ts,
+ * a workspace). The counters live in the database (rate-limit-store.ts): shared by every app
+ * instance and kept across restarts.
+ */
 const LIMITS = {
-  signInPerAccount: { points: 5, duration: 15 * 60 },
-  signInPerAddress: { points: 30, duration: 15 * 60 },
-  resetPerAccount: { points: 3, duration: 60 * 60 },
-  resetPerAddress: { points: 10, duration: 60 * 60 },
+  // Wrong passwords. Per account *and* client address, so an attacker elsewhere cannot lock the
+  // owner out; per client address against one address guessing many accounts; per account a
+  // much higher ceiling against a guesser spread over many addresses.
+  signInPerAccountAndAddress: { points: 5, duration: 15 * MINUTE },
+  signInPerAddress: { points: 30, duration: 15 * MINUTE },
+  signInPerAccount: { points: 100, duration: HOUR },
+  // Reset links: per target address (the account's), per account and per client.
+  resetPerTarget: { points: 3, duration: HOUR },
+  resetPerAccount: { points: 3, duration: HOUR },
+  resetPerAddress: { points: 10, duration: HOUR },
+  // Address confirmations: the sign-up's own mail counts against the target, then resends.
+  verifyMailPerTarget: { points: 3, duration: HOUR },
+  verifyMailPerAccount: { points: 3, duration: HOUR },
+  verifyMailPerAddress: { points: 20, duration: HOUR },
+  // Invitations: per workspace per day, and per invited address per day across workspaces.
+  invitePerWorkspace: { points: 20, duration: DAY },
+  invitePerTarget: { points: 3, duration: DAY },
   // Sign-up says when an address already has an account, so it is limited like a guess.
-  signUpPerAddress: { points: 20, duration: 60 * 60 },
+  signUpPerAddress: { points: 20, duration: HOUR },
+  // A shop mails customers their copies; more than this an hour looks like a loop or abuse of the mailer.
+  buildSendPerWorkspace: { points: 30, duration: HOUR },
 } as const;
 
 export type LimitName = keyof typeof LIMITS;
 
+/** The limiters, built by rate-limit-store.ts (the one place that chooses their store). */
 function limiters(): Record<LimitName, ReturnType<typeof databaseLimiter>> {
   const entries = Object.entries(LIMITS).map(([name, opts]) => [name, databaseLimiter({ keyPrefix: name, ...opts })]);
   return Object.fromEntries(entries) as Record<LimitName, ReturnType<typeof databaseLimiter>>;
@@ -34,16 +59,21 @@ export async function assertNotLimited(checks: [LimitName, string][]): Promise<v
   }
 }
 
-/** Uses one point of each key; throws RateLimitedError when one is over its limit. */
+/**
+ * Uses one point of each key; throws RateLimitedError when one is over its limit. Every key
+ * is charged even when an earlier one refuses, so no limit can be dodged by tripping another.
+ */
 export async function consumePoint(checks: [LimitName, string][]): Promise<void> {
+  let refusal: RateLimitedError | undefined;
   for (const [name, key] of checks) {
     try {
       await limiters()[name].consume(key);
     } catch (err) {
-      if (err instanceof RateLimiterRes) throw new RateLimitedError(err.msBeforeNext / 1000);
-      throw err;
+      if (!(err instanceof RateLimiterRes)) throw err;
+      if (!refusal || err.msBeforeNext / 1000 > refusal.retryAfterSeconds) refusal = new RateLimitedError(err.msBeforeNext / 1000);
     }
   }
+  if (refusal) throw refusal;
 }
 
 export async function forgetKey(name: LimitName, key: string): Promise<void> {
@@ -53,13 +83,4 @@ export async function forgetKey(name: LimitName, key: string): Promise<void> {
 /** Tests start each case with fresh limits. */
 export async function resetAllLimits(): Promise<void> {
   await clearAllLimits();
-}
-
-/**
- * The client address as the nearest proxy reports it. Without a trusted proxy the header
- * can be forged, which is why every limit also applies per account.
- */
-export function clientAddress(headers: Headers | Record<string, string | string[] | undefined>): string {
-  const get = (name: string) => (headers instanceof Headers ? headers.get(name) : [headers[name]].flat()[0]) ?? '';
-  return get('x-forwarded-for').split(',')[0]?.trim() || get('x-real-ip').trim() || 'local';
 }

@@ -8,8 +8,3 @@ export function serviceResponse<T>(result: ServiceResult<T>, status = 200, body?
   if (status === 204) return new Response(null, { status });
   return Response.json(body ? body(result.value) : result.value, { status });
 }
-
-/** A route parameter that must be a positive integer id; anything else reads as "no such item". */
-export function idParam(value: string): number | null {
-  return /^[1-9][0-9]{0,9}$/.test(value) ? Number(value) : null;
-}

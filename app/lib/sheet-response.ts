@@ -1,4 +1,5 @@
 import 'server-only';
+import type { DateFormat } from '@/lib/format/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetFileName } from '@/lib/sheet/sheet-file-name';
@@ -10,9 +11,12 @@ const CONTENT_TYPE: Record<SheetRequest['format'], string> = {
   pdf: 'application/pdf',
 };
 
-/** A validated sheet request drawn and answered as a PDF or SVG download (the public and the template routes alike). */
-export async function sheetDownloadResponse(sheet: SheetRequest): Promise<Response> {
-  const drawing = buildDrawing(sheet);
+/**
+ * A validated sheet request drawn and answered as a PDF or SVG download (the public and the template routes alike),
+ * its date written in the reader's `dateFormat`.
+ */
+export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: DateFormat): Promise<Response> {
+  const drawing = buildDrawing(sheet, { dateFormat });
   const body = sheet.format === 'svg' ? renderSvg(drawing) : new Uint8Array(await renderSheetPdf(drawing));
   return new Response(body, {
     status: 200,
@@ -21,6 +25,8 @@ export async function sheetDownloadResponse(sheet: SheetRequest): Promise<Respon
       'Content-Disposition': `attachment; filename="${sheetFileName(sheet)}"`,
       'Cache-Control': 'no-store',
       'X-Content-Type-Options': 'nosniff',
+      // What the layout could not draw as asked, and why (also printed on the sheet): percent-encoded JSON list.
+      'X-Sheet-Layout-Notes': encodeURIComponent(JSON.stringify(drawing.warnings)),
     },
   });
 }

@@ -1,4 +1,5 @@
 import 'server-only';
+import { consumePoint, RateLimitedError } from './rate-limit';
 import { recordAudit } from '@/db/audit-log';
 import { countHolders, createWorkspace, findRole, findUserById, membersOf, slugFrom } from '@/db/accounts';
 import { acceptInvitation, createInvitation, lookUpInvitation, revokeInvitation } from '@/db/invitations';
@@ -11,6 +12,7 @@ import type { Access } from './authz';
 import { invitationMail } from './emails';
 import { sendMail } from './mailer';
 import { TOKEN_REFUSAL_MESSAGES } from '@/lib/one-time-token';
+import type { DateFormat } from '@/lib/format/date-format';
 
 const refuse = (status: number, message: string) => ({ ok: false, status, message }) as const;
 
@@ -24,6 +26,7 @@ export async function invite(
   access: Access,
   input: { email: string; role: Role },
   origin: string,
+  dateFormat: DateFormat,
 ): Promise<ServiceResult<{ invitationId: number }>> {
   if (access.workspace.kind === 'personal') {
     return refuse(409, 'A personal workspace has only you in it: create a shop workspace to invite others');
@@ -36,10 +39,23 @@ export async function invite(
   if (members.some((m) => m.email === input.email.trim().toLowerCase())) {
     return refuse(409, `${input.email} is already a member of ${access.workspace.name}`);
   }
-  const { id, token } = await createInvitation({ workspaceId: access.workspace.id, email: input.email, role: input.role, invitedBy: access.user.id });
+  try {
+    await consumePoint([
+      ['invitePerWorkspace', String(access.workspace.id)],
+      ['invitePerTarget', input.email.trim().toLowerCase()],
+    ]);
+  } catch (err) {
+    if (err instanceof RateLimitedError) return refuse(429, `${err.message} (invitations are limited per shop per day and per invited address)`);
+    throw err;
+  }
+  const { id, token, expiresAt } = await createInvitation({ workspaceId: access.workspace.id, email: input.email, role: input.role, invitedBy: access.user.id });
   try {
     await sendMail(
-      invitationMail(input.email, access.user.name, access.workspace.name, input.role, `${origin}/invitations/accept?token=${token}`),
+      invitationMail(
+        input.email,
+        { inviter: access.user.name, workspace: access.workspace.name, role: input.role, link: `${origin}/invitations/accept?token=${token}`, expiresAt },
+        dateFormat,
+      ),
     );
   } catch (err) {
     await revokeInvitation(access.workspace.id, id);

@@ -2,6 +2,7 @@ import Link from 'next/link';
 import { SignOutButton } from './sign-out-button';
 import { WorkspaceSwitcher } from './workspace-switcher';
 import { TemplatesNavLink } from '@/components/templates/templates-nav-link';
+import { BuildsNavLink } from '@/components/builds/builds-nav-link';
 
 /** The header's right side: sign-in link for visitors; workspace switcher, account and sign-out for members. */
 type Props = {
@@ -26,6 +27,7 @@ export function AccountMenu({ member }: Props) {
   return (
     <div className="flex items-center gap-2">
       <TemplatesNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
+      <BuildsNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
       <WorkspaceSwitcher workspaces={workspaces.map(({ slug, name, kind }) => ({ slug, name, kind }))} />
       <Link href="/account" className="rounded px-2 py-1 text-sm hover:bg-steel-100 dark:hover:bg-steel-800" aria-label={`Account of ${user.name}`}>
         {user.name}

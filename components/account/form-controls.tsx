@@ -2,6 +2,7 @@
 
 import { useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
 import { LabelledField, inputClass } from '@/components/generator/fields';
+import { PASSWORD_LENGTH } from '@/lib/account-forms';
 
 type InputFieldProps<T extends FieldValues> = {
   name: FieldPath<T>;
@@ -19,6 +20,11 @@ export function InputField<T extends FieldValues>({ name, label, type = 'text', 
       {(wiring) => <input {...wiring} type={type} autoComplete={autoComplete} className={inputClass} {...register(name)} />}
     </LabelledField>
   );
+}
+
+/** The field where a new password is chosen (sign-up, reset), stating the rule the schema checks. */
+export function NewPasswordField<T extends FieldValues>({ name, label }: { name: FieldPath<T>; label: string }) {
+  return <InputField<T> name={name} label={label} type="password" autoComplete="new-password" help={`At least ${PASSWORD_LENGTH.min} characters.`} />;
 }
 
 export function SubmitButton({ children, busy }: { children: React.ReactNode; busy?: boolean }) {

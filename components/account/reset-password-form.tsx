@@ -5,8 +5,8 @@ import Link from 'next/link';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { PASSWORD_LENGTH, resetPasswordSchema } from '@/lib/account-forms';
-import { FormMessage, InputField, SubmitButton } from './form-controls';
+import { resetPasswordSchema } from '@/lib/account-forms';
+import { FormMessage, NewPasswordField, SubmitButton } from './form-controls';
 import { applyIssues, submitJson } from './submit-json';
 
 type Values = z.infer<typeof resetPasswordSchema>;
@@ -37,13 +37,7 @@ export function ResetPasswordForm({ token }: { token: string }) {
   return (
     <FormProvider {...form}>
       <form noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Choose a new password" className="max-w-sm space-y-4">
-        <InputField<Values>
-          name="password"
-          label="New password"
-          type="password"
-          autoComplete="new-password"
-          help={`At least ${PASSWORD_LENGTH.min} characters.`}
-        />
+        <NewPasswordField<Values> name="password" label="New password" />
         <FormMessage tone="error" message={outcome?.message} />
         <SubmitButton busy={form.formState.isSubmitting}>Set the new password</SubmitButton>
       </form>

@@ -5,8 +5,8 @@ import { signIn } from 'next-auth/react';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { PASSWORD_LENGTH, signUpSchema } from '@/lib/account-forms';
-import { FormMessage, InputField, SubmitButton } from './form-controls';
+import { signUpSchema } from '@/lib/account-forms';
+import { FormMessage, InputField, NewPasswordField, SubmitButton } from './form-controls';
 import { applyIssues, submitJson } from './submit-json';
 
 type Values = z.input<typeof signUpSchema>;
@@ -39,13 +39,7 @@ export function SignUpForm({ callbackUrl, invitationToken, email }: { callbackUr
       <form noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Create an account" className="max-w-sm space-y-4">
         <InputField<Values> name="name" label="Your name" autoComplete="name" />
         <InputField<Values> name="email" label="E-mail" type="email" autoComplete="email" />
-        <InputField<Values>
-          name="password"
-          label="Password"
-          type="password"
-          autoComplete="new-password"
-          help={`At least ${PASSWORD_LENGTH.min} characters.`}
-        />
+        <NewPasswordField<Values> name="password" label="Password" />
         <FormMessage tone="error" message={error} />
         <SubmitButton busy={busy}>Create account</SubmitButton>
       </form>

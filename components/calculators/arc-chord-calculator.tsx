@@ -1,16 +1,17 @@
 'use client';
 
 import { HydratedForm } from '@/components/hydrated-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { TextField } from '@/components/generator/fields';
 import { arcChordRows } from '@/lib/engine/arc-chord-rows';
-import { arcChordSchema, type ArcChordInput, type ArcChordRequest } from '@/lib/engine/arc-chord-schema';
+import { arcChordFields, arcChordSchema, type ArcChordInput, type ArcChordRequest } from '@/lib/engine/arc-chord-schema';
 import { scribeChartHref } from '@/lib/engine/wheel-links';
 import { LengthField } from './length-field';
-import { formatDeg, toUnit, type LengthUnit } from './length-unit';
+import { mmToUnit, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from './length-unit';
 import { ResultPanel, WaitingForInput } from './result-panel';
+import { shownUnitResolver, useRecheckOnUnit } from './shown-unit-resolver';
 import { UnitSwitch } from './unit-switch';
 import { useLiveResult } from './use-live-result';
 import { WheelLink } from './wheel-link';
@@ -19,10 +20,12 @@ import { WheelLink } from './wheel-link';
 export function ArcChordCalculator() {
   const [unit, setUnit] = useState<LengthUnit>('mm');
   const form = useForm<ArcChordInput, unknown, ArcChordRequest>({
-    resolver: zodResolver(arcChordSchema),
+    resolver: shownUnitResolver(arcChordSchema, arcChordFields),
+    context: { unit },
     defaultValues: { diameterMm: 118, anglesDeg: '16, 17, 18, 19, 20' },
     mode: 'onChange',
   });
+  useRecheckOnUnit(form, unit);
   const result = useLiveResult(form.control, arcChordSchema, (valid) => ({ ...valid, rows: arcChordRows(valid) }));
   const places = unit === 'in' ? 3 : 2;
 
@@ -61,10 +64,10 @@ export function ArcChordCalculator() {
                       {formatDeg(row.angleDeg, 1)}
                     </th>
                     <td className="py-1 pr-3" data-testid={`arc-${index}`}>
-                      {toUnit(row.arcMm, unit).toFixed(places)}
+                      {mmToUnit(row.arcMm, unit).toFixed(places)}
                     </td>
                     <td className="py-1 pr-3" data-testid={`chord-${index}`}>
-                      {toUnit(row.chordMm, unit).toFixed(places)}
+                      {mmToUnit(row.chordMm, unit).toFixed(places)}
                     </td>
                   </tr>
                 ))}

@@ -1,6 +1,6 @@
 import { cosDeg, normalizeDeg, sinDeg } from '@/lib/angle';
 import { deadCentres, offsetPistonDropMm } from '@/lib/engine/offset-slider-crank';
-import { formatLength, type LengthUnit } from './length-unit';
+import { formatLength, type LengthUnit } from '@/lib/fields/length';
 import { svgRound } from './svg-round';
 
 type CrankDiagramProps = { strokeMm: number; rodMm: number; crankDeg: number; pinOffsetMm?: number; unit: LengthUnit };

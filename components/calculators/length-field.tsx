@@ -3,7 +3,8 @@
 import { useState } from 'react';
 import { useController, useFormContext, type FieldPath, type FieldValues } from 'react-hook-form';
 import { LabelledField, UnitSuffix, inputClass } from '@/components/generator/fields';
-import { fromUnit, lengthText, parseTypedNumber, type LengthUnit } from './length-unit';
+import { lengthText, unitToMm, type LengthUnit } from '@/lib/fields/length';
+import { parseTypedNumber } from './length-unit';
 
 type LengthFieldProps<T extends FieldValues> = {
   name: FieldPath<T>;
@@ -29,7 +30,7 @@ export function LengthField<T extends FieldValues>({ name, label, unit, help, cl
 
   const onChange = (text: string) => {
     const typed = parseTypedNumber(text);
-    const mm = Number.isNaN(typed) ? Number.NaN : fromUnit(typed, unit);
+    const mm = Number.isNaN(typed) ? Number.NaN : unitToMm(typed, unit);
     setShown({ unit, valueMm: mm, text });
     field.onChange(mm);
   };

@@ -1,18 +1,19 @@
 'use client';
 
 import { HydratedForm } from '@/components/hydrated-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useEffect, useRef, useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
 import { NumberField } from '@/components/generator/fields';
-import { crankAngleSchema, type CrankAngleInput, type CrankAngleRequest } from '@/lib/engine/crank-angle-schema';
-import { pistonDropSchema, type PistonDropInput, type PistonDropRequest } from '@/lib/engine/piston-drop-schema';
+import { crankAngleFields, crankAngleSchema, type CrankAngleInput, type CrankAngleRequest } from '@/lib/engine/crank-angle-schema';
+import { pistonDropFields, pistonDropSchema, type PistonDropInput, type PistonDropRequest } from '@/lib/engine/piston-drop-schema';
 import { crankAnglesFromDropMm, offsetPistonDropMm } from '@/lib/engine/offset-slider-crank';
 import { advanceMarkHref } from '@/lib/engine/wheel-links';
 import { CrankDiagram } from './crank-diagram';
 import { LengthField } from './length-field';
-import { formatDeg, formatLength, type LengthUnit } from './length-unit';
+import { formatLength, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from './length-unit';
 import { ResultFigure, ResultPanel, WaitingForInput } from './result-panel';
+import { shownUnitResolver, useRecheckOnUnit } from './shown-unit-resolver';
 import { UnitSwitch } from './unit-switch';
 import { useLiveResult } from './use-live-result';
 import { WheelLink } from './wheel-link';
@@ -93,10 +94,12 @@ function sideText(crankDeg: number): string {
 
 function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
   const form = useForm<PistonDropInput, unknown, PistonDropRequest>({
-    resolver: zodResolver(pistonDropSchema),
+    resolver: shownUnitResolver(pistonDropSchema, pistonDropFields),
+    context: { unit },
     defaultValues: { ...geometry, crankDeg: 18 },
     mode: 'onChange',
   });
+  useRecheckOnUnit(form, unit);
   const result = useLiveResult(form.control, pistonDropSchema, (valid) => ({ ...valid, pinOffsetMm: valid.pinOffsetMm ?? 0, dropMm: offsetPistonDropMm(valid) }));
   useRememberGeometry(result, onGeometry);
   const offset = result !== null && result.pinOffsetMm !== 0;
@@ -146,10 +149,12 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
 
 function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
   const form = useForm<CrankAngleInput, unknown, CrankAngleRequest>({
-    resolver: zodResolver(crankAngleSchema),
+    resolver: shownUnitResolver(crankAngleSchema, crankAngleFields),
+    context: { unit },
     defaultValues: { ...geometry, dropMm: 1.8 },
     mode: 'onChange',
   });
+  useRecheckOnUnit(form, unit);
   const result = useLiveResult(form.control, crankAngleSchema, (valid) => ({ ...valid, pinOffsetMm: valid.pinOffsetMm ?? 0, ...crankAnglesFromDropMm(valid) }));
   useRememberGeometry(result, onGeometry);
 

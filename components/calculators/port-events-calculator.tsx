@@ -1,19 +1,20 @@
 'use client';
 
 import { HydratedForm } from '@/components/hydrated-form';
-import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm } from 'react-hook-form';
 import { FieldErrorText, SelectField, TextField, fieldId } from '@/components/generator/fields';
 import { MAX_CALC_PORTS } from '@/lib/engine/calc-fields';
 import { portEvents, type PortTiming } from '@/lib/engine/port-events';
-import { portEventsSchema, type PortEventsInput, type PortEventsRequest } from '@/lib/engine/port-events-schema';
+import { portEventsFields, portEventsSchema, type PortEventsInput, type PortEventsRequest } from '@/lib/engine/port-events-schema';
 import { PORT_KINDS } from '@/lib/engine/port-kind';
 import { portEventsWheelHref } from '@/lib/engine/wheel-links';
 import { LengthField } from './length-field';
-import { formatDeg, formatLength, type LengthUnit } from './length-unit';
+import { formatLength, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from './length-unit';
 import { PortRing } from './port-ring';
 import { ResultPanel, WaitingForInput } from './result-panel';
+import { shownUnitResolver, useRecheckOnUnit } from './shown-unit-resolver';
 import { UnitSwitch } from './unit-switch';
 import { useLiveResult } from './use-live-result';
 import { WheelLink } from './wheel-link';
@@ -38,10 +39,12 @@ const KIND_OPTIONS = PORT_KINDS.map((kind) => ({ value: kind, label: kind[0]?.to
 export function PortEventsCalculator() {
   const [unit, setUnit] = useState<LengthUnit>('mm');
   const form = useForm<PortEventsInput, unknown, PortEventsRequest>({
-    resolver: zodResolver(portEventsSchema),
+    resolver: shownUnitResolver(portEventsSchema, portEventsFields),
+    context: { unit },
     defaultValues: EXAMPLE,
     mode: 'onChange',
   });
+  useRecheckOnUnit(form, unit);
   const ports = useFieldArray({ control: form.control, name: 'ports' });
   const result = useLiveResult(form.control, portEventsSchema, (valid) => portEvents(valid));
   // The list-level message (no ports, too many) sits on the array itself.

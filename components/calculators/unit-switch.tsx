@@ -1,6 +1,6 @@
 'use client';
 
-import type { LengthUnit } from './length-unit';
+import type { LengthUnit } from '@/lib/fields/length';
 
 type UnitSwitchProps = {
   unit: LengthUnit;

@@ -12,6 +12,16 @@ type Status = { kind: 'idle' } | { kind: 'busy'; format: string } | { kind: 'sav
 
 const NO_CORRECTION = '';
 
+/** The PDF is the main download; the SVG (for editors and cutters) is offered beside it. */
+const FORMATS = [
+  { format: 'pdf', className: 'bg-gauge-600 text-white shadow-sm hover:bg-gauge-700' },
+  {
+    format: 'svg',
+    className:
+      'border border-steel-300 bg-white text-steel-800 hover:bg-steel-100 dark:border-steel-600 dark:bg-steel-900 dark:text-steel-100 dark:hover:bg-steel-800',
+  },
+] as const;
+
 /**
  * "Download PDF" / "Download SVG": validates the form (the same schema), adds the
  * chosen printer profile's correction and saves the API's answer.
@@ -67,22 +77,11 @@ export function DownloadPanel({
         </p>
       </div>
       <div className="flex flex-wrap gap-2">
-        <button
-          type="button"
-          onClick={() => download('pdf')}
-          disabled={status.kind === 'busy'}
-          className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700 disabled:opacity-60"
-        >
-          Download PDF
-        </button>
-        <button
-          type="button"
-          onClick={() => download('svg')}
-          disabled={status.kind === 'busy'}
-          className="rounded-md border border-steel-300 bg-white px-4 py-2 text-sm font-semibold text-steel-800 hover:bg-steel-100 disabled:opacity-60 dark:border-steel-600 dark:bg-steel-900 dark:text-steel-100 dark:hover:bg-steel-800"
-        >
-          Download SVG
-        </button>
+        {FORMATS.map(({ format, className }) => (
+          <button key={format} type="button" onClick={() => download(format)} disabled={status.kind === 'busy'} className={`rounded-md px-4 py-2 text-sm font-semibold disabled:opacity-60 ${className}`}>
+            Download {format.toUpperCase()}
+          </button>
+        ))}
       </div>
       <div aria-live="polite" className="text-sm">
         {status.kind === 'busy' ? <p className="text-steel-500">Preparing the {status.format.toUpperCase()}…</p> : null}

@@ -1,14 +1,15 @@
 import { parseNumberList } from '@/lib/generator-prefill';
 import type { PaperName } from '@/lib/sheet/paper';
 import type { PortEvent, SheetKind, SheetRequestInput } from '@/lib/sheet/sheet-request';
-import { MM_PER_INCH, type LengthUnit } from '@/lib/units';
+import type { LengthUnit } from '@/lib/fields/length';
 
 /**
  * What the generator form holds, field for field named after the sheet request
- * schema's keys. Three differences from the request: the advance marks are the
- * text the user types ("16, 17, 18"), blank pairs mean "none", and the measured
- * lengths are in the unit of the mm/in toggle. `toSheetRequestInput` turns it
- * into the request the shared schema validates.
+ * schema's keys. Two differences from the request: the advance marks are the
+ * text the user types ("16, 17, 18") and blank pairs mean "none". Lengths are
+ * held in mm like the request; the mm/in toggle only changes how the length
+ * fields show them. `toSheetRequestInput` turns it into the request the shared
+ * schema validates.
  */
 
 export type { LengthUnit };
@@ -39,10 +40,6 @@ export type GeneratorFormValues = {
   title: string;
   note: string;
 };
-
-/** Lengths that follow the mm/in toggle (the ones measured with calipers). */
-export const LENGTH_FIELDS = ['diameterMm', 'hubHoleMm', 'innerDiameterMm', 'outerDiameterMm', 'stripWidthMm'] as const;
-type LengthField = (typeof LENGTH_FIELDS)[number];
 
 type RequestField = Exclude<keyof GeneratorFormValues, 'lengthUnit'>;
 const SCALE_FIELDS: RequestField[] = ['rotation', 'carrier', 'numbering', 'advanceMarksDeg', 'advanceBandDeg', 'portEvents', 'minPitchMm'];
@@ -88,23 +85,6 @@ export const DEFAULT_FORM_VALUES: GeneratorFormValues = {
   note: '',
 };
 
-const roundTo = (value: number, places: number) => Math.round(value * 10 ** places) / 10 ** places;
-
-function lengthToMm(value: number, unit: LengthUnit): number {
-  return unit === 'in' && Number.isFinite(value) ? roundTo(value * MM_PER_INCH, 6) : value;
-}
-
-/** Converts the measured lengths shown in the form when the mm/in toggle flips. */
-export function convertLengths(values: GeneratorFormValues, to: LengthUnit): Pick<GeneratorFormValues, LengthField> {
-  const converted = {} as Pick<GeneratorFormValues, LengthField>;
-  for (const field of LENGTH_FIELDS) {
-    const value = values[field];
-    if (!Number.isFinite(value) || values.lengthUnit === to) converted[field] = value;
-    else converted[field] = to === 'in' ? roundTo(value / MM_PER_INCH, 4) : roundTo(value * MM_PER_INCH, 3);
-  }
-  return converted;
-}
-
 function pairOrNone(pair: [number, number] | undefined): [number, number] | undefined {
   if (!pair) return undefined;
   const [from, to] = pair;
@@ -112,13 +92,12 @@ function pairOrNone(pair: [number, number] | undefined): [number, number] | unde
   return blank(from) && blank(to) ? undefined : [from, to];
 }
 
-/** The sheet request for the shared schema: mm, only the chosen kind's fields, parsed lists. */
+/** The sheet request for the shared schema: only the chosen kind's fields, parsed lists. */
 export function toSheetRequestInput(values: GeneratorFormValues): SheetRequestInput {
   const request: Record<string, unknown> = {};
   for (const field of FIELDS_BY_KIND[values.kind] ?? COMMON_FIELDS) {
     const value = values[field];
-    if ((LENGTH_FIELDS as readonly string[]).includes(field)) request[field] = lengthToMm(value as number, values.lengthUnit);
-    else if (field === 'advanceMarksDeg') request[field] = parseNumberList(String(value ?? ''));
+    if (field === 'advanceMarksDeg') request[field] = parseNumberList(String(value ?? ''));
     else if (field === 'windowCrankDeg' || field === 'advanceBandDeg') request[field] = pairOrNone(value as [number, number]);
     else if (field === 'note') request[field] = String(value ?? '').trim() || undefined;
     else request[field] = value;

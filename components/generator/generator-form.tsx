@@ -1,16 +1,17 @@
 'use client';
 
 import { HydratedForm } from '@/components/hydrated-form';
+import { LengthField } from '@/components/calculators/length-field';
 import { UnitSwitch } from '@/components/calculators/unit-switch';
 import { useEffect, useRef } from 'react';
 import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
 import { PAPER_NAMES } from '@/lib/sheet/paper';
 import type { IgnoredParam } from '@/lib/generator-prefill';
-import type { SheetKind, SheetRequest } from '@/lib/sheet/sheet-request';
+import { issueInUnit, LENGTH_KEYS, type SheetKind, type SheetRequest } from '@/lib/sheet/sheet-request';
+import { sheetRequestFields as fields } from '@/lib/sheet/sheet-request-fields';
 import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
-import { convertLengths, toSheetRequestInput, usesField, LENGTH_FIELDS, type GeneratorFormValues, type LengthUnit } from './form-values';
+import { toSheetRequestInput, usesField, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
-import { messageInTypedUnit } from './inch-messages';
 import { DownloadPanel } from './download-panel';
 import { PortEventsField } from './port-events-field';
 import { SheetPreview } from './sheet-preview';
@@ -68,7 +69,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
         </HydratedForm>
 
         <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
-          <SheetPreview request={request} describeIssue={(issue) => messageInTypedUnit(issue, { ...defaultValues, ...values })} />
+          <SheetPreview request={request} describeIssue={(issue) => issueInUnit(issue, { ...defaultValues, ...values }, values.lengthUnit)} />
           <PrintAtActualSize />
           <DownloadPanel validate={validate} />
           <SafetyPanel />
@@ -105,13 +106,11 @@ function IgnoredParams({ ignored }: { ignored: IgnoredParam[] }) {
 function UnitToggle() {
   const { getValues, setValue, trigger } = useFormContext<GeneratorFormValues>();
   const unit = useWatch<GeneratorFormValues, 'lengthUnit'>({ name: 'lengthUnit' });
+  // The values stay in mm; the length fields show them in the new unit and their messages are restated in it.
   const choose = (to: LengthUnit) => {
-    const values = getValues();
-    if (values.lengthUnit === to) return;
-    const converted = convertLengths(values, to);
-    for (const field of LENGTH_FIELDS) setValue(field, converted[field]);
+    if (getValues('lengthUnit') === to) return;
     setValue('lengthUnit', to);
-    void trigger(LENGTH_FIELDS.filter((field) => getValues(field) !== undefined));
+    void trigger(LENGTH_KEYS.filter((field) => field in getValues()) as Array<keyof GeneratorFormValues>);
   };
   return <UnitSwitch unit={unit} onChange={choose} idPrefix="sheet" caption={null} inchLabel="in" className="gap-1 text-xs" />;
 }
@@ -121,28 +120,28 @@ function MeasurementsSection({ kind, unit }: { kind: SheetKind; unit: LengthUnit
     <FormSection title="Measurements" aside={<UnitToggle />}>
       {kind === 'ring' ? (
         <div className="grid gap-4 sm:grid-cols-2">
-          <NumberField<GeneratorFormValues>
+          <LengthField<GeneratorFormValues>
             name="outerDiameterMm"
-            label="Outer diameter"
+            label={fields.outerDiameterMm.label}
             unit={unit}
             help="Measure the magneto flange or stator plate diameter with calipers."
           />
-          <NumberField<GeneratorFormValues>
+          <LengthField<GeneratorFormValues>
             name="innerDiameterMm"
-            label="Inner diameter"
+            label={fields.innerDiameterMm.label}
             unit={unit}
             help="Inner = flywheel outer diameter + clearance (about 1–2 mm), so the flywheel’s mark reads at the inner edge."
           />
         </div>
       ) : (
         <div className="grid gap-4 sm:grid-cols-2">
-          <NumberField<GeneratorFormValues> name="diameterMm" label="Diameter" unit={unit} help={DIAMETER_HELP[kind]} className="sm:col-span-2" />
+          <LengthField<GeneratorFormValues> name="diameterMm" label={fields.diameterMm.label} unit={unit} help={DIAMETER_HELP[kind]} className="sm:col-span-2" />
           {kind === 'wheel' ? (
-            <NumberField<GeneratorFormValues> name="hubHoleMm" label="Hub hole" unit={unit} help="For the crank nut or boss; 0 for none." />
+            <LengthField<GeneratorFormValues> name="hubHoleMm" label={fields.hubHoleMm.label} unit={unit} help="For the crank nut or boss; 0 for none." />
           ) : null}
           {kind === 'strip' ? (
             <>
-              <NumberField<GeneratorFormValues> name="stripWidthMm" label="Strip width" unit={unit} help="6–40 mm; what fits the rim." />
+              <LengthField<GeneratorFormValues> name="stripWidthMm" label={fields.stripWidthMm.label} unit={unit} help="6–40 mm; what fits the rim." />
               <NumberField<GeneratorFormValues>
                 name="paperThicknessMm"
                 label="Paper thickness"

@@ -1,11 +1,4 @@
-/** The cautions of PRODUCT.md §6, shown wherever a sheet is made. */
-const CAUTIONS = [
-  'Take the plug lead off (or the battery out) before turning the engine.',
-  'Turn a positive stop only by hand, and take it out before starting.',
-  'Keep hands, hair and clothes clear of the flywheel and fan when timing with a strobe.',
-  'Run engines outdoors or with ventilation.',
-  'Too much advance causes detonation and can hole a piston.',
-];
+import { CAUTION_LINES, MANUAL_FIRST, PRINT_AT_100 } from '@/lib/sheet/sheet-notes';
 
 export function SafetyPanel() {
   return (
@@ -15,14 +8,14 @@ export function SafetyPanel() {
         Before you turn the engine
       </h2>
       <ul className="mt-2 space-y-1 text-steel-700 dark:text-steel-300">
-        {CAUTIONS.map((caution) => (
+        {CAUTION_LINES.map((caution) => (
           <li key={caution} className="flex gap-2">
             <span aria-hidden className="text-steel-400">—</span>
             <span>{caution}</span>
           </li>
         ))}
       </ul>
-      <p className="mt-3 text-xs text-steel-500 dark:text-steel-400">The engine maker’s manual and local regulations come first.</p>
+      <p className="mt-3 text-xs text-steel-500 dark:text-steel-400">{MANUAL_FIRST}</p>
     </aside>
   );
 }
@@ -30,7 +23,7 @@ export function SafetyPanel() {
 export function PrintAtActualSize() {
   return (
     <p className="rounded-md border-l-4 border-gauge-600 bg-white px-3 py-2 text-sm font-medium text-steel-800 dark:bg-steel-900 dark:text-steel-100">
-      Print at 100 % / actual size — turn off fit-to-page.
+      {PRINT_AT_100}.
     </p>
   );
 }

@@ -4,7 +4,7 @@ import { HydratedForm } from '@/components/hydrated-form';
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { FormProvider, useForm } from 'react-hook-form';
-import { describeScale, profileFromMeasurement, printerMeasurementSchema, type PrinterMeasurement } from '@/lib/printer-profile';
+import { describeScale, printerMeasurementFields as fields, profileFromMeasurement, printerMeasurementSchema, type PrinterMeasurement } from '@/lib/printer-profile';
 import { NumberField, TextField } from '@/components/generator/fields';
 import { saveProfile } from './printer-profile-store';
 
@@ -30,7 +30,7 @@ export function PrinterProfileForm() {
   return (
     <FormProvider {...form}>
       <HydratedForm noValidate onSubmit={form.handleSubmit(onValid)} aria-label="Printer profile" className="space-y-4">
-        <TextField<MeasurementForm> name="name" label="Profile name" placeholder="e.g. Workshop laser, plain paper" maxLength={60} />
+        <TextField<MeasurementForm> name="name" label={fields.name.label} placeholder="e.g. Workshop laser, plain paper" maxLength={fields.name.maxLength} />
         <div className="grid gap-4 sm:grid-cols-2">
           <NumberField<MeasurementForm>
             name="measuredXMm"
@@ -38,7 +38,7 @@ export function PrinterProfileForm() {
             unit="mm"
             step={0.1}
             placeholder="100.0"
-            help="The 100 mm bar that runs across the page."
+            help={fields.measuredXMm.help}
           />
           <NumberField<MeasurementForm>
             name="measuredYMm"
@@ -46,7 +46,7 @@ export function PrinterProfileForm() {
             unit="mm"
             step={0.1}
             placeholder="100.0"
-            help="The 100 mm bar that runs down the page."
+            help={fields.measuredYMm.help}
           />
         </div>
         <button type="submit" className="rounded-md bg-gauge-600 px-4 py-2 text-sm font-semibold text-white shadow-sm hover:bg-gauge-700">

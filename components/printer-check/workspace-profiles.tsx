@@ -7,7 +7,7 @@ import { submitJson } from '@/components/account/submit-json';
 import { describeScale, type PrinterProfile } from '@/lib/printer-profile';
 import { usePrinterProfiles } from './use-printer-profiles';
 
-type Props = { workspaceSlug: string; canEdit: boolean };
+type Props = { workspaceSlug: string; canEdit: boolean; canSetDefault?: boolean };
 
 const fetchProfiles = async (url: string): Promise<PrinterProfile[]> => {
   const res = await fetch(url);
@@ -15,13 +15,22 @@ const fetchProfiles = async (url: string): Promise<PrinterProfile[]> => {
   return res.json();
 };
 
+const fetchDefault = async (url: string): Promise<{ profile: PrinterProfile | null }> => {
+  const res = await fetch(url);
+  if (!res.ok) throw new Error(((await res.json()) as { error?: string }).error ?? `HTTP ${res.status}`);
+  return res.json();
+};
+
 /**
  * The printer profiles saved in a workspace, for signed-in members: listed for everyone,
- * and technicians and owners can copy this browser's profiles in or delete one.
+ * and technicians and owners can copy this browser's profiles in or delete one; an owner marks the
+ * default that the workspace's template and build sheets are corrected with.
  */
-export function WorkspaceProfiles({ workspaceSlug, canEdit }: Props) {
+export function WorkspaceProfiles({ workspaceSlug, canEdit, canSetDefault = false }: Props) {
   const url = `/api/v1/workspaces/${workspaceSlug}/printer-profiles`;
   const { data, error, mutate } = useSWR(url, fetchProfiles);
+  const defaultUrl = `${url}/default`;
+  const { data: current, mutate: mutateDefault } = useSWR(defaultUrl, fetchDefault);
   const [message, setMessage] = useState<{ tone: 'info' | 'error'; text: string } | undefined>();
   const local = usePrinterProfiles();
 
@@ -33,6 +42,16 @@ export function WorkspaceProfiles({ workspaceSlug, canEdit }: Props) {
     });
     setMessage(result.ok ? { tone: 'info', text: `Saved “${profile.name}” to the workspace.` } : { tone: 'error', text: String(result.body.error) });
     await mutate();
+  };
+
+  const makeDefault = async (profile: PrinterProfile | null) => {
+    const result = await submitJson(defaultUrl, 'PUT', { profileId: profile ? Number(profile.id) : null });
+    setMessage(
+      result.ok
+        ? { tone: 'info', text: profile ? `Sheets of this workspace are now corrected for “${profile.name}”.` : 'Sheets of this workspace are no longer corrected by default.' }
+        : { tone: 'error', text: String(result.body.error) },
+    );
+    await mutateDefault();
   };
 
   const remove = async (profile: PrinterProfile) => {
@@ -54,6 +73,13 @@ export function WorkspaceProfiles({ workspaceSlug, canEdit }: Props) {
             <li key={p.id} className="flex items-center gap-3">
               <span className="font-medium">{p.name}</span>
               <span className="font-mono text-xs text-steel-500">{describeScale(p)}</span>
+              {current?.profile?.id === p.id ? (
+                <span className="rounded border border-gauge-600 px-1.5 text-xs font-semibold text-gauge-700 dark:text-gauge-500">default</span>
+              ) : canSetDefault ? (
+                <button type="button" className="text-gauge-700 underline dark:text-gauge-300" onClick={() => makeDefault(p)}>
+                  Make {p.name} the default
+                </button>
+              ) : null}
               {canEdit ? (
                 <button type="button" className="text-red-700 underline dark:text-red-400" onClick={() => remove(p)}>
                   Delete {p.name}
@@ -63,6 +89,11 @@ export function WorkspaceProfiles({ workspaceSlug, canEdit }: Props) {
           ))}
         </ul>
       )}
+      {canSetDefault && current?.profile ? (
+        <button type="button" className="text-gauge-700 underline dark:text-gauge-300" onClick={() => makeDefault(null)}>
+          No default profile
+        </button>
+      ) : null}
       {canEdit && local.length > 0 ? (
         <div className="space-y-1">
           <p className="text-steel-600 dark:text-steel-300">Profiles kept in this browser:</p>

@@ -8,17 +8,49 @@ import type { z } from 'zod';
 import { FormMessage, SubmitButton } from '@/components/account/form-controls';
 import { applyIssues, submitJson } from '@/components/account/submit-json';
 import { FieldErrorText, FormSection, LabelledField, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
+import type { Field } from '@/lib/fields/field';
 import type { Template } from '@/lib/templates/template';
+import { TEMPLATE_FIELD_LIST, templateFields } from '@/lib/templates/template-fields';
 import { EMPTY_TEMPLATE, templateFormSchema } from '@/lib/templates/template-schema';
 import { OptionalNumberField, commaListAsNumbers } from './optional-number-field';
 
 type Input = z.input<typeof templateFormSchema>;
 type Output = z.output<typeof templateFormSchema>;
 
-const ROTATIONS = [
-  { value: 'cw', label: 'Clockwise (seen from the scale side)' },
-  { value: 'ccw', label: 'Counter-clockwise (seen from the scale side)' },
-] as const;
+const CHOICE_LABELS: Record<string, string> = {
+  cw: 'Clockwise (seen from the scale side)',
+  ccw: 'Counter-clockwise (seen from the scale side)',
+};
+
+/** Where the form starts a new section, walking the field table in order; a new field lands in the section before it. */
+const SECTION_STARTS: Partial<Record<string, string>> = {
+  name: 'Engine',
+  rotation: 'Flywheel and flange',
+  staticAdvanceDeg: 'Timing targets',
+  notes: 'Notes',
+};
+
+type Section = { title: string; fields: Field[] };
+
+const SECTIONS: Section[] = TEMPLATE_FIELD_LIST.reduce<Section[]>((sections, field) => {
+  const title = SECTION_STARTS[field.key];
+  if (title || sections.length === 0) sections.push({ title: title ?? '', fields: [] });
+  // A flag (archived) is set by its own action, not by the form.
+  if (field.kind !== 'flag') sections.at(-1)!.fields.push(field);
+  return sections;
+}, []);
+
+/** Runs of number fields share a grid row; every other field stands alone. */
+function runsOf(fields: Field[]): Field[][] {
+  const runs: Field[][] = [];
+  for (const field of fields) {
+    const number = field.kind === 'number' || field.kind === 'length';
+    const last = runs.at(-1);
+    if (number && last && (last[0]!.kind === 'number' || last[0]!.kind === 'length')) last.push(field);
+    else runs.push([field]);
+  }
+  return runs;
+}
 
 function defaults(template: Template | null): Input {
   if (!template) return { ...EMPTY_TEMPLATE, name: '' };
@@ -26,26 +58,52 @@ function defaults(template: Template | null): Input {
   return fields;
 }
 
-function AdvanceMarksField() {
+/** A list of numbers typed comma-separated. */
+function NumberListField({ field }: { field: Field }) {
   const { register } = useFormContext<Input>();
+  const name = field.key as 'advanceMarksDeg';
   return (
-    <LabelledField
-      name="advanceMarksDeg"
-      label={<>Advance marks <span className="font-normal text-steel-500">(° BTDC, comma-separated)</span></>}
-      help="For example 16, 18, 20. Left empty, the sheet marks the static advance alone."
-    >
-      {(wiring) => <input {...wiring} className={`${inputClass} font-mono`} {...register('advanceMarksDeg', { setValueAs: commaListAsNumbers })} />}
+    <LabelledField name={name} label={<>{field.label} <span className="font-normal text-steel-500">({field.unit}, comma-separated)</span></>} help={field.help}>
+      {(wiring) => <input {...wiring} className={`${inputClass} font-mono`} {...register(name, { setValueAs: commaListAsNumbers })} />}
     </LabelledField>
   );
 }
 
-function NotesField() {
+/** A long text gets a text area. */
+function LongTextField({ field }: { field: Field }) {
   const { register } = useFormContext<Input>();
+  const name = field.key as 'notes';
   return (
-    <LabelledField name="notes" label="Notes" help="Where the pointer sits, which marks to trust, anything the next person should know.">
-      {(wiring) => <textarea {...wiring} rows={4} maxLength={4000} className={inputClass} {...register('notes')} />}
+    <LabelledField name={name} label={field.label} help={field.help}>
+      {(wiring) => <textarea {...wiring} rows={4} maxLength={field.maxLength} className={inputClass} {...register(name)} />}
     </LabelledField>
   );
+}
+
+const LONG_TEXT = 200;
+
+/** One field of the table as a form control, chosen by its kind. */
+function TemplateField({ field }: { field: Field }) {
+  const name = field.key as keyof Input & string;
+  switch (field.kind) {
+    case 'number':
+    case 'length':
+      return <OptionalNumberField<Input> name={name} label={field.label} unit={field.unit} help={field.help} />;
+    case 'choice':
+      return (
+        <SelectField<Input> name={name} label={field.label} options={(field.choices ?? []).map((value) => ({ value, label: CHOICE_LABELS[value] ?? value }))} />
+      );
+    case 'list':
+      return field.unit ? <NumberListField field={field} /> : <PortTargets />;
+    case 'text':
+      return (field.maxLength ?? 0) > LONG_TEXT ? (
+        <LongTextField field={field} />
+      ) : (
+        <TextField<Input> name={name} label={field.label} maxLength={field.maxLength} help={field.help} />
+      );
+    default:
+      return null;
+  }
 }
 
 function PortTargets() {
@@ -54,7 +112,7 @@ function PortTargets() {
   const error = useFieldError('portTargets');
   return (
     <div className="space-y-2">
-      <p className="text-xs text-steel-500">Crank angles from TDC in the direction of rotation (0–360°): exhaust opening near 90° ATDC is 90, its closing 270.</p>
+      <p className="text-xs text-steel-500">{templateFields.portTargets.help}</p>
       {fields.map((field, index) => (
         <div key={field.id} className="grid grid-cols-[1fr_7rem_7rem_auto] items-end gap-2">
           <PortCell index={index} part="name" label="Port" register={register} />
@@ -120,32 +178,21 @@ export function TemplateForm({ slug, template }: { slug: string; template: Templ
   return (
     <FormProvider {...form}>
       <form noValidate onSubmit={form.handleSubmit(onValid)} aria-label={template ? 'Edit template' : 'New template'} className="space-y-4">
-        <FormSection title="Engine">
-          <TextField<Input> name="name" label="Name" maxLength={80} />
-          <TextField<Input> name="description" label="Engine description" maxLength={200} help="What engine this is: capacity, induction, cooling." />
-          <div className="grid gap-3 sm:grid-cols-3">
-            <OptionalNumberField<Input> name="boreMm" label="Bore" unit="mm" />
-            <OptionalNumberField<Input> name="strokeMm" label="Stroke" unit="mm" />
-            <OptionalNumberField<Input> name="rodMm" label="Con-rod length" unit="mm" help="Centre to centre" />
-          </div>
-        </FormSection>
-        <FormSection title="Flywheel and flange">
-          <SelectField<Input> name="rotation" label="Rotation" options={ROTATIONS} />
-          <div className="grid gap-3 sm:grid-cols-2">
-            <OptionalNumberField<Input> name="rimDiameterMm" label="Flywheel rim diameter" unit="mm" help="For rim strips; with a flange diameter also flange rings" />
-            <OptionalNumberField<Input> name="faceDiameterMm" label="Flywheel face diameter" unit="mm" help="For degree wheels" />
-            <OptionalNumberField<Input> name="flangeDiameterMm" label="Flange diameter" unit="mm" help="Magneto flange or stator plate" />
-            <OptionalNumberField<Input> name="hubHoleMm" label="Hub hole" unit="mm" help="Hole cut in a degree wheel" />
-          </div>
-        </FormSection>
-        <FormSection title="Timing targets">
-          <OptionalNumberField<Input> name="staticAdvanceDeg" label="Static advance" unit="° BTDC" help="Small air-cooled two-strokes are typically 16–20° BTDC; the engine maker’s manual comes first." />
-          <AdvanceMarksField />
-          <PortTargets />
-        </FormSection>
-        <FormSection title="Notes">
-          <NotesField />
-        </FormSection>
+        {SECTIONS.map((section) => (
+          <FormSection key={section.title} title={section.title}>
+            {runsOf(section.fields).map((run) =>
+              run.length > 1 ? (
+                <div key={run[0]!.key} className="grid gap-3 sm:grid-cols-3">
+                  {run.map((field) => (
+                    <TemplateField key={field.key} field={field} />
+                  ))}
+                </div>
+              ) : (
+                <TemplateField key={run[0]!.key} field={run[0]!} />
+              ),
+            )}
+          </FormSection>
+        ))}
         <div className="flex items-center gap-3">
           <SubmitButton busy={form.formState.isSubmitting}>{template ? 'Save changes' : 'Create template'}</SubmitButton>
           {outcome?.conflict ? (

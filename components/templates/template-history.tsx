@@ -1,7 +1,8 @@
 import type { TemplateRevision } from '@/lib/templates/template';
 import type { TemplateFieldName } from '@/lib/templates/template-schema';
 import { ActionButton } from './template-actions';
-import { FIELD_LABELS, formatFieldValue, formatWhen } from './field-labels';
+import { formatDateTime, type DateFormat } from '@/lib/format/date-format';
+import { FIELD_LABELS, formatFieldValue } from './field-labels';
 
 const ACTIONS: Record<TemplateRevision['action'], string> = {
   create: 'created',
@@ -10,10 +11,10 @@ const ACTIONS: Record<TemplateRevision['action'], string> = {
   import: 'imported',
 };
 
-type Props = { revisions: TemplateRevision[]; currentVersion: number; restoreUrl: (version: number) => string; canEdit: boolean };
+type Props = { revisions: TemplateRevision[]; currentVersion: number; restoreUrl: (version: number) => string; canEdit: boolean; dateFormat: DateFormat };
 
 /** Every saved change, newest first: who, when, which fields old → new; editors may restore an earlier one. */
-export function TemplateHistory({ revisions, currentVersion, restoreUrl, canEdit }: Props) {
+export function TemplateHistory({ revisions, currentVersion, restoreUrl, canEdit, dateFormat }: Props) {
   return (
     <ol aria-label="History" className="space-y-3">
       {revisions.map((r) => (
@@ -22,7 +23,7 @@ export function TemplateHistory({ revisions, currentVersion, restoreUrl, canEdit
             <p>
               <span className="font-semibold">Version {r.version}</span> — {ACTIONS[r.action]}
               {r.restoredFromVersion ? ` from version ${r.restoredFromVersion}` : ''} by {r.user?.name ?? 'a removed user'} at{' '}
-              <time dateTime={r.createdAt}>{formatWhen(r.createdAt)}</time>
+              <time dateTime={r.createdAt}>{formatDateTime(r.createdAt, dateFormat)}</time>
             </p>
             {canEdit && r.version !== currentVersion ? (
               <ActionButton

@@ -6,16 +6,24 @@ import { usePathname, useRouter, useSearchParams } from 'next/navigation';
 import { useCallback, useEffect, useMemo, useRef, useState } from 'react';
 import useSWR from 'swr';
 import type { TemplateSortKey } from '@/lib/templates/list-query';
+import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/templates/list-view';
 import type { Template, TemplatePage } from '@/lib/templates/template';
 import { inputClass } from '@/components/generator/fields';
-import { formatFieldValue, formatWhen } from './field-labels';
+import { formatDate, type DateFormat } from '@/lib/format/date-format';
+import { formatFieldValue } from './field-labels';
 
 const features = tableFeatures({});
 const helper = createColumnHelper<typeof features, Template>();
 const EMPTY: Template[] = [];
 
 type SortableColumn = { key: TemplateSortKey; header: string };
+
+/** The fields the field table shows as list columns, headed by their short header or label. */
+const LIST_COLUMNS: SortableColumn[] = TEMPLATE_FIELD_LIST.filter((field) => field.list.column).map((field) => ({
+  key: field.key as TemplateSortKey,
+  header: field.list.header ?? field.label,
+}));
 
 const fetchJson = async (url: string): Promise<TemplatePage> => {
   const res = await fetch(url);
@@ -73,7 +81,8 @@ function useSearchText(urlQ: string, show: (patch: Partial<TemplateListView>) =>
 }
 
 /** The template list: SWR fetches each page from the JSON API (search, sort, filter and paging in SQL). */
-export function TemplateList({ slug }: { slug: string }) {
+/** `dateFormat` comes from the page (the reader's locale and the deployment's time zone), so dates read as on the server. */
+export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: DateFormat }) {
   const { view, show } = useListView();
   const { q: search, sort, dir, archived, page } = view;
   const { text: q, setText: setQ, input: searchInput } = useSearchText(search, show);
@@ -85,18 +94,7 @@ export function TemplateList({ slug }: { slug: string }) {
   });
 
   const columns = useMemo(() => {
-    const sortable: SortableColumn[] = [
-      { key: 'name', header: 'Name' },
-      { key: 'description', header: 'Engine' },
-      { key: 'boreMm', header: 'Bore' },
-      { key: 'strokeMm', header: 'Stroke' },
-      { key: 'rimDiameterMm', header: 'Rim Ø' },
-      { key: 'faceDiameterMm', header: 'Face Ø' },
-      { key: 'flangeDiameterMm', header: 'Flange Ø' },
-      { key: 'staticAdvanceDeg', header: 'Advance' },
-      { key: 'rotation', header: 'Rotation' },
-      { key: 'updatedAt', header: 'Updated' },
-    ];
+    const sortable: SortableColumn[] = [...LIST_COLUMNS, { key: 'updatedAt', header: 'Updated' }];
     return helper.columns(
       sortable.map((c) =>
         helper.accessor(c.key as keyof Template & string, {
@@ -110,7 +108,7 @@ export function TemplateList({ slug }: { slug: string }) {
                   {row.name}
                 </Link>
               );
-            if (c.key === 'updatedAt') return formatWhen(row.updatedAt).slice(0, 10);
+            if (c.key === 'updatedAt') return <time dateTime={row.updatedAt}>{formatDate(row.updatedAt, dateFormat)}</time>;
             if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation)}>{row.rotation.toUpperCase()}</abbr>;
             if (c.key === 'description')
               return (
@@ -123,7 +121,7 @@ export function TemplateList({ slug }: { slug: string }) {
         }),
       ),
     );
-  }, [slug]);
+  }, [slug, dateFormat]);
 
   const table = useTable({ features, columns, data: data?.items ?? EMPTY });
   const total = data?.total ?? 0;

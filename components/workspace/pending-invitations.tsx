@@ -3,7 +3,8 @@
 import { useRouter } from 'next/navigation';
 import { submitJson } from '@/components/account/submit-json';
 
-type Pending = { id: number; email: string; role: string; expiresAt: string };
+/** `expiresOn` is written by the page in the reader's date format (lib/format/date-format.ts). */
+type Pending = { id: number; email: string; role: string; expiresOn: string };
 
 export function PendingInvitations({ slug, invitations }: { slug: string; invitations: Pending[] }) {
   const router = useRouter();
@@ -13,7 +14,7 @@ export function PendingInvitations({ slug, invitations }: { slug: string; invita
       {invitations.map((inv) => (
         <li key={inv.id} className="flex items-center gap-3">
           <span>
-            {inv.email} as {inv.role}, until {new Date(inv.expiresAt).toLocaleDateString()}
+            {inv.email} as {inv.role}, until {inv.expiresOn}
           </span>
           <button
             type="button"

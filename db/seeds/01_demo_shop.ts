@@ -2,7 +2,7 @@ import type { Knex } from 'knex';
 import bcrypt from 'bcryptjs';
 import { TABLES } from '../tables';
 
-/** The invented demo shop of PRODUCT.md §7. Passwords are printed in README.md. */
+/** The invented demo shop (DEVELOPERS.md, "Demo data"). Passwords are printed in README.md. */
 export const DEMO_USERS = [
   { email: 'owner@harbourlane.test', name: 'Maren Ostby', role: 'owner', password: 'harbour-owner-26', personalSlug: 'maren-ostby' },
   { email: 'tech@harbourlane.test', name: 'Teo Lindqvist', role: 'technician', password: 'harbour-tech-26', personalSlug: 'teo-lindqvist' },

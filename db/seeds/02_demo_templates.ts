@@ -5,7 +5,7 @@ import { diffTemplateFields } from '../../lib/templates/revision-diff';
 import { EMPTY_TEMPLATE, templateSchema, type TemplateFields } from '../../lib/templates/template-schema';
 
 /**
- * About a dozen INVENTED engine templates for the invented shop of PRODUCT.md §7
+ * About a dozen INVENTED engine templates for the invented shop (DEVELOPERS.md, "Demo data")
  * (no real brand or model). Figures are plausible for small two-strokes: bore ×
  * stroke gives the named capacity (π/4 · bore² · stroke), static advance 16–20°
  * BTDC and exhaust opening near 90° ATDC, transfers near 120° ATDC (common practice).

@@ -2,7 +2,8 @@ import 'server-only';
 import { db } from '@/db/knex';
 import { caseInsensitiveOrder, likeOperator } from '@/db/dialect';
 import { TABLES } from '@/db/tables';
-import type { TemplateListQuery } from '@/lib/templates/list-query';
+import { TEMPLATE_SEARCH_FIELDS, type TemplateListQuery } from '@/lib/templates/list-query';
+import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import type { TemplatePage } from '@/lib/templates/template';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 import { selectTemplates } from './select-templates';
@@ -22,14 +23,16 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
     if (query.q) {
       const pattern = likePattern(query.q);
       const like = likeOperator(knex);
-      q.andWhere((w) => w.whereRaw(`t.name ${like} ? ESCAPE '\\'`, [pattern]).orWhereRaw(`t.description ${like} ? ESCAPE '\\'`, [pattern]));
+      q.andWhere((w) => {
+        for (const field of TEMPLATE_SEARCH_FIELDS) w.orWhereRaw(`t.${field.column} ${like} ? ESCAPE '\\'`, [pattern]);
+      });
     }
     return q;
   };
   const [counted] = (await filtered().count({ total: '*' })) as Array<{ total: number }>;
   const total = counted?.total ?? 0;
   const column = `t.${SORT_COLUMNS[query.sort]}`;
-  const text = query.sort === 'name' || query.sort === 'description';
+  const text = TEMPLATE_FIELD_LIST.some((field) => field.key === query.sort && field.kind === 'text');
   const idRows: Array<{ id: number }> = await filtered()
     .select('t.id')
     .orderByRaw(`${column} IS NULL`) // unknown measurements last in either direction

@@ -1,26 +1,16 @@
 import { TEMPLATE_SORT_KEYS, type TemplateSortKey } from '@/lib/templates/list-query';
 import type { Template } from '@/lib/templates/template';
+import { TEMPLATE_FIELD_LIST, type TemplateFieldName } from '@/lib/templates/template-fields';
 import type { TemplateFields } from '@/lib/templates/template-schema';
 
-/** A row of the templates table, joined with the names of its creator and last editor. */
+/**
+ * A row of the templates table, joined with the names of its creator and last
+ * editor: the bookkeeping columns below, plus one column per field of the field
+ * table (lib/templates/template-fields.ts), read and written through `column`.
+ */
 export type TemplateRow = {
   id: number;
   workspace_id: number;
-  name: string;
-  description: string;
-  bore_mm: number | null;
-  stroke_mm: number | null;
-  rod_mm: number | null;
-  rotation: 'cw' | 'ccw';
-  rim_diameter_mm: number | null;
-  face_diameter_mm: number | null;
-  flange_diameter_mm: number | null;
-  hub_hole_mm: number | null;
-  static_advance_deg: number | null;
-  advance_marks_json: string;
-  port_targets_json: string;
-  notes: string;
-  archived: number | boolean;
   version: number;
   created_by: number | null;
   updated_by: number | null;
@@ -28,51 +18,25 @@ export type TemplateRow = {
   updated_at: string;
   created_by_name?: string | null;
   updated_by_name?: string | null;
-};
+} & Record<string, unknown>;
 
-/** API field → SQL column; the whitelist for sorting and for writes. */
-export const FIELD_COLUMNS = {
-  name: 'name',
-  description: 'description',
-  boreMm: 'bore_mm',
-  strokeMm: 'stroke_mm',
-  rodMm: 'rod_mm',
-  rotation: 'rotation',
-  rimDiameterMm: 'rim_diameter_mm',
-  faceDiameterMm: 'face_diameter_mm',
-  flangeDiameterMm: 'flange_diameter_mm',
-  hubHoleMm: 'hub_hole_mm',
-  staticAdvanceDeg: 'static_advance_deg',
-  advanceMarksDeg: 'advance_marks_json',
-  portTargets: 'port_targets_json',
-  notes: 'notes',
-  archived: 'archived',
-} as const satisfies Record<keyof TemplateFields, string>;
+/** API field → SQL column, from the field table; the whitelist for sorting and for writes. */
+export const FIELD_COLUMNS = Object.fromEntries(TEMPLATE_FIELD_LIST.map((field) => [field.key, field.column!])) as Record<TemplateFieldName, string>;
 
 /** Every column the API names: the fields, the version and the timestamps. */
-const API_COLUMNS = { ...FIELD_COLUMNS, version: 'version', createdAt: 'created_at', updatedAt: 'updated_at' } as const;
+const API_COLUMNS: Record<TemplateSortKey, string> = { ...FIELD_COLUMNS, version: 'version', createdAt: 'created_at', updatedAt: 'updated_at' };
 
 /** Sort key → SQL column: exactly the sortable keys, so nothing else can reach ORDER BY. */
 export const SORT_COLUMNS = Object.fromEntries(TEMPLATE_SORT_KEYS.map((key) => [key, API_COLUMNS[key]])) as Record<TemplateSortKey, string>;
 
+/** Lists are stored as JSON text, flags as 0/1; everything else as it is. */
 export function rowToFields(row: TemplateRow): TemplateFields {
-  return {
-    name: row.name,
-    description: row.description,
-    boreMm: row.bore_mm,
-    strokeMm: row.stroke_mm,
-    rodMm: row.rod_mm,
-    rotation: row.rotation,
-    rimDiameterMm: row.rim_diameter_mm,
-    faceDiameterMm: row.face_diameter_mm,
-    flangeDiameterMm: row.flange_diameter_mm,
-    hubHoleMm: row.hub_hole_mm,
-    staticAdvanceDeg: row.static_advance_deg,
-    advanceMarksDeg: JSON.parse(row.advance_marks_json),
-    portTargets: JSON.parse(row.port_targets_json),
-    notes: row.notes,
-    archived: Boolean(row.archived),
-  };
+  const fields: Record<string, unknown> = {};
+  for (const field of TEMPLATE_FIELD_LIST) {
+    const value = row[field.column!];
+    fields[field.key] = field.kind === 'list' ? JSON.parse(String(value)) : field.kind === 'flag' ? Boolean(value) : value;
+  }
+  return fields as TemplateFields;
 }
 
 export function rowToTemplate(row: TemplateRow): Template {
@@ -90,12 +54,12 @@ export function rowToTemplate(row: TemplateRow): Template {
 /** The columns to write for the given fields (only those present). */
 export function fieldsToColumns(fields: Partial<TemplateFields>): Record<string, unknown> {
   const columns: Record<string, unknown> = {};
-  for (const [field, column] of Object.entries(FIELD_COLUMNS) as Array<[keyof TemplateFields, string]>) {
-    if (!(field in fields)) continue;
-    const value = fields[field];
-    if (field === 'advanceMarksDeg' || field === 'portTargets') columns[column] = JSON.stringify(value ?? []);
-    else if (field === 'archived') columns[column] = value ? 1 : 0;
-    else columns[column] = value ?? null;
+  for (const field of TEMPLATE_FIELD_LIST) {
+    if (!(field.key in fields)) continue;
+    const value = fields[field.key as TemplateFieldName];
+    if (field.kind === 'list') columns[field.column!] = JSON.stringify(value ?? []);
+    else if (field.kind === 'flag') columns[field.column!] = value ? 1 : 0;
+    else columns[field.column!] = value ?? null;
   }
   return columns;
 }

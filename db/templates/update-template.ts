@@ -1,4 +1,5 @@
 import 'server-only';
+import type { Knex } from 'knex';
 import { db } from '@/db/knex';
 import { TABLES } from '@/db/tables';
 import { diffTemplateFields } from '@/lib/templates/revision-diff';
@@ -13,7 +14,7 @@ export type UpdateOutcome =
   | { ok: false; reason: 'conflict'; current: Template }
   | { ok: false; reason: 'invalid'; issues: Array<{ path: string; message: string }> };
 
-type UpdateOptions = { action?: 'update' | 'restore'; restoredFromVersion?: number };
+type UpdateOptions = { action?: 'update' | 'restore' | 'import'; restoredFromVersion?: number };
 
 /**
  * Applies `changes` to the template if it is still at `baseVersion`: optimistic
@@ -29,36 +30,47 @@ export async function updateTemplate(
   changes: Partial<TemplateFields>,
   options: UpdateOptions = {},
 ): Promise<UpdateOutcome> {
-  return db().transaction(async (trx): Promise<UpdateOutcome> => {
-    const current = await findTemplate(workspaceId, id, trx);
-    if (!current) return { ok: false, reason: 'not-found' };
-    if (current.version !== baseVersion) return { ok: false, reason: 'conflict', current };
+  return db().transaction((trx) => updateTemplateIn(trx, workspaceId, id, userId, baseVersion, changes, options));
+}
 
-    const before: TemplateFields = pickFields(current);
-    const after: TemplateFields = { ...before, ...changes };
-    const issues = templateCrossFieldIssues(after);
-    if (issues.length > 0) return { ok: false, reason: 'invalid', issues };
-    const diff = diffTemplateFields(before, after);
-    if (diff.length === 0) return { ok: true, template: current, changed: false };
+/** updateTemplate inside the caller's transaction (a CSV import updates many templates in one). */
+export async function updateTemplateIn(
+  trx: Knex.Transaction,
+  workspaceId: number,
+  id: number,
+  userId: number,
+  baseVersion: number,
+  changes: Partial<TemplateFields>,
+  options: UpdateOptions = {},
+): Promise<UpdateOutcome> {
+  const current = await findTemplate(workspaceId, id, trx);
+  if (!current) return { ok: false, reason: 'not-found' };
+  if (current.version !== baseVersion) return { ok: false, reason: 'conflict', current };
 
-    const at = new Date().toISOString();
-    const updated = await trx(TABLES.templates)
-      .where({ id, workspace_id: workspaceId, version: baseVersion })
-      .update({ ...fieldsToColumns(after), version: baseVersion + 1, updated_by: userId, updated_at: at });
-    if (updated !== 1) return { ok: false, reason: 'conflict', current: (await findTemplate(workspaceId, id, trx))! };
+  const before: TemplateFields = pickFields(current);
+  const after: TemplateFields = { ...before, ...changes };
+  const issues = templateCrossFieldIssues(after);
+  if (issues.length > 0) return { ok: false, reason: 'invalid', issues };
+  const diff = diffTemplateFields(before, after);
+  if (diff.length === 0) return { ok: true, template: current, changed: false };
 
-    await trx(TABLES.templateRevisions).insert({
-      template_id: id,
-      version: baseVersion + 1,
-      action: options.action ?? 'update',
-      restored_from_version: options.restoredFromVersion ?? null,
-      user_id: userId,
-      created_at: at,
-      changes_json: JSON.stringify(diff),
-      snapshot_json: JSON.stringify(after),
-    });
-    return { ok: true, template: (await findTemplate(workspaceId, id, trx))!, changed: true };
+  const at = new Date().toISOString();
+  const updated = await trx(TABLES.templates)
+    .where({ id, workspace_id: workspaceId, version: baseVersion })
+    .update({ ...fieldsToColumns(after), version: baseVersion + 1, updated_by: userId, updated_at: at });
+  if (updated !== 1) return { ok: false, reason: 'conflict', current: (await findTemplate(workspaceId, id, trx))! };
+
+  await trx(TABLES.templateRevisions).insert({
+    template_id: id,
+    version: baseVersion + 1,
+    action: options.action ?? 'update',
+    restored_from_version: options.restoredFromVersion ?? null,
+    user_id: userId,
+    created_at: at,
+    changes_json: JSON.stringify(diff),
+    snapshot_json: JSON.stringify(after),
   });
+  return { ok: true, template: (await findTemplate(workspaceId, id, trx))!, changed: true };
 }
 
 export function pickFields(t: Template): TemplateFields {

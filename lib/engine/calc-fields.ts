@@ -1,10 +1,11 @@
-import { z } from 'zod';
+import { lengthField, numberField } from '../fields/builders';
+import { defineFields } from '../fields/field';
 import { PIN_OFFSET_LIMIT_MM, offsetCrankGeometryProblem } from './offset-slider-crank';
 import { crankGeometryProblem } from './slider-crank';
 
 /**
- * Field builders shared by the calculator schemas. Every message names the field
- * (label and JSON name) and its allowed range, in the style of the sheet request schema.
+ * What the calculator field tables share: the engine's ranges and fields, and the
+ * checks across them. Every message names the field by its label with its allowed range.
  */
 
 export const STROKE_RANGE_MM = { min: 1, max: 300 } as const;
@@ -14,24 +15,16 @@ export const PORT_HEIGHT_RANGE_MM = { min: 0, max: 400 } as const;
 export const MAX_CALC_PORTS = 12;
 export const PIN_OFFSET_RANGE_MM = { min: -PIN_OFFSET_LIMIT_MM, max: PIN_OFFSET_LIMIT_MM } as const;
 
-function withUnit(value: number, unit: string): string {
-  if (!unit) return String(value);
-  return unit.startsWith('°') ? `${value}${unit}` : `${value} ${unit}`;
-}
+/** The engine's measurements, shared by every calculator's field table. */
+export const crankFields = defineFields({
+  strokeMm: lengthField({ label: 'Stroke', ...STROKE_RANGE_MM }),
+  rodMm: lengthField({ label: 'Con-rod length', ...ROD_RANGE_MM }),
+  /** Positive toward the side the crank pin swings to just after TDC. */
+  pinOffsetMm: lengthField({ label: 'Wrist-pin offset', ...PIN_OFFSET_RANGE_MM }).optional(),
+});
 
-export function numberField(label: string, field: string, min: number, max: number, unit: string) {
-  const range = min < 0 ? `${min} to ${withUnit(max, unit)}` : `${min}–${withUnit(max, unit)}`;
-  return z
-    .number({ error: `${label} (${field}) must be a number, ${range}` })
-    .min(min, `${label} (${field}) must be at least ${withUnit(min, unit)} (allowed ${range})`)
-    .max(max, `${label} (${field}) must be at most ${withUnit(max, unit)} (allowed ${range})`);
-}
-
-export const strokeField = () => numberField('Stroke', 'strokeMm', STROKE_RANGE_MM.min, STROKE_RANGE_MM.max, 'mm');
-/** Optional wrist-pin offset; positive toward the side the crank pin swings to just after TDC. */
-export const pinOffsetField = () =>
-  numberField('Wrist-pin offset', 'pinOffsetMm', PIN_OFFSET_RANGE_MM.min, PIN_OFFSET_RANGE_MM.max, 'mm').optional();
-export const rodField = () => numberField('Con-rod length', 'rodMm', ROD_RANGE_MM.min, ROD_RANGE_MM.max, 'mm');
+/** A crank angle, 0–360° in crank order. */
+export const crankAngleField = (label: string) => numberField({ label, min: 0, max: 360, unit: '°' });
 
 type RefineContext = { addIssue: (issue: { code: 'custom'; path: string[]; message: string }) => void };
 

@@ -1,18 +1,22 @@
 import { z } from 'zod';
-import { STROKE_RANGE_MM, checkOffsetCrankGeometry, numberField, pinOffsetField, rodField, strokeField } from './calc-fields';
+import { lengthField } from '../fields/builders';
+import { defineFields, shapeOf } from '../fields/field';
+import { STROKE_RANGE_MM, checkOffsetCrankGeometry, crankFields } from './calc-fields';
 import { deadCentres } from './offset-slider-crank';
 
 /**
  * POST /api/v1/calc/crank-angle and the crank angle form: piston drop below TDC → crank degrees
  * from TDC, after TDC on the down-stroke and before TDC on the up-stroke (equal without pin offset).
  */
+export const crankAngleFields = defineFields({
+  strokeMm: crankFields.strokeMm,
+  rodMm: crankFields.rodMm,
+  dropMm: lengthField({ label: 'Piston drop', min: 0, max: STROKE_RANGE_MM.max }),
+  pinOffsetMm: crankFields.pinOffsetMm,
+});
+
 export const crankAngleSchema = z
-  .object({
-    strokeMm: strokeField(),
-    rodMm: rodField(),
-    dropMm: numberField('Piston drop', 'dropMm', 0, STROKE_RANGE_MM.max, 'mm'),
-    pinOffsetMm: pinOffsetField(),
-  })
+  .object(shapeOf(crankAngleFields))
   .superRefine((value, ctx) => {
     if (!checkOffsetCrankGeometry(value, ctx)) return;
     // An offset pin travels a little more than the nominal stroke (offset-slider-crank.ts).
@@ -24,8 +28,8 @@ export const crankAngleSchema = z
         path: ['dropMm'],
         message:
           pinOffsetMm === 0
-            ? `Piston drop (dropMm) must be within the stroke (allowed 0–${value.strokeMm} mm)`
-            : `Piston drop (dropMm) must be within the stroke with this pin offset (allowed 0–${Number(travelMm.toFixed(3))} mm)`,
+            ? `${crankAngleFields.dropMm.label} must be within the stroke (allowed 0–${value.strokeMm} mm)`
+            : `${crankAngleFields.dropMm.label} must be within the stroke with this pin offset (allowed 0–${Number(travelMm.toFixed(3))} mm)`,
       });
   });
 

@@ -13,7 +13,7 @@ import { crankDegFromDropMm, crankGeometryProblem, crankThrowMm, pistonDropMm, t
  *   y(φ) = a·cos φ + √(l² − (a·sin φ − e)²)
  * TDC (y greatest, crank and rod in line): y_TDC = √((l + a)² − e²) at φ_TDC = asin(e / (l + a));
  * BDC (folded): y_BDC = √((l − a)² − e²) at φ_BDC = 180° + asin(e / (l − a)).
- * Rimscale keeps crankDeg = 0 at piston TDC (PRODUCT.md §2): crankDeg = φ − φ_TDC.
+ * Rimscale keeps crankDeg = 0 at piston TDC (DEVELOPERS.md, "Angles"): crankDeg = φ − φ_TDC.
  * With e = 0 every function hands over to the centred-pin functions (Heywood eq. 2.5) unchanged.
  */
 
@@ -29,12 +29,12 @@ export function offsetCrankGeometryProblem({ strokeMm, rodMm, pinOffsetMm = 0 }:
   if (centred) return centred;
   const range = `allowed -${PIN_OFFSET_LIMIT_MM} to ${PIN_OFFSET_LIMIT_MM} mm`;
   if (!Number.isFinite(pinOffsetMm) || Math.abs(pinOffsetMm) > PIN_OFFSET_LIMIT_MM)
-    return { field: 'pinOffsetMm', message: `Wrist-pin offset (pinOffsetMm) must be a length in mm, ${range}` };
+    return { field: 'pinOffsetMm', message: `Wrist-pin offset must be a length in mm, ${range}` };
   const lockMm = rodMm - crankThrowMm(strokeMm);
   if (Math.abs(pinOffsetMm) >= lockMm)
     return {
       field: 'pinOffsetMm',
-      message: `Wrist-pin offset (pinOffsetMm) must be less than con-rod length minus crank throw (${roundMm(lockMm)} mm) either way, or the crank cannot pass BDC: allowed more than -${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} and less than ${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} mm`,
+      message: `Wrist-pin offset must be less than con-rod length minus crank throw (${roundMm(lockMm)} mm) either way, or the crank cannot pass BDC: allowed more than -${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} and less than ${roundMm(Math.min(lockMm, PIN_OFFSET_LIMIT_MM))} mm`,
     };
   return null;
 }
@@ -76,7 +76,7 @@ export function deadCentres({ strokeMm, rodMm, pinOffsetMm = 0 }: OffsetCrankGeo
 export function offsetPistonDropMm({ strokeMm, rodMm, crankDeg, pinOffsetMm = 0 }: OffsetCrankGeometry & { crankDeg: number }): number {
   if (pinOffsetMm === 0) return pistonDropMm({ strokeMm, rodMm, crankDeg });
   const { tdcHeightMm, tdcPhiDeg } = deadCentres({ strokeMm, rodMm, pinOffsetMm });
-  if (!Number.isFinite(crankDeg)) throw new RangeError('Crank angle (crankDeg) must be a number of degrees');
+  if (!Number.isFinite(crankDeg)) throw new RangeError('Crank angle must be a number of degrees');
   const a = crankThrowMm(strokeMm);
   const e = pinOffsetMm;
   const thetaDeg = normalizeDeg(crankDeg);
@@ -118,7 +118,7 @@ export function crankAnglesFromDropMm({ strokeMm, rodMm, dropMm, pinOffsetMm = 0
   const centres = deadCentres({ strokeMm, rodMm, pinOffsetMm });
   const { tdcHeightMm, bdcHeightMm, tdcPhiDeg, trueStrokeMm } = centres;
   if (!(dropMm >= 0 && dropMm <= trueStrokeMm))
-    throw new RangeError(`Piston drop (dropMm) must be within the stroke with this pin offset (allowed 0–${roundMm(trueStrokeMm)} mm)`);
+    throw new RangeError(`Piston drop must be within the stroke with this pin offset (allowed 0–${roundMm(trueStrokeMm)} mm)`);
   const a = crankThrowMm(strokeMm);
   const l = rodMm;
   const e = pinOffsetMm;

@@ -1,38 +1,34 @@
 import { z } from 'zod';
-import {
-  DECK_RANGE_MM,
-  MAX_CALC_PORTS,
-  PORT_HEIGHT_RANGE_MM,
-  checkOffsetCrankGeometry,
-  numberField,
-  pinOffsetField,
-  rodField,
-  strokeField,
-} from './calc-fields';
+import { choiceField, lengthField, listField, textField } from '../fields/builders';
+import { defineFields, shapeOf } from '../fields/field';
+import { DECK_RANGE_MM, MAX_CALC_PORTS, PORT_HEIGHT_RANGE_MM, checkOffsetCrankGeometry, crankFields } from './calc-fields';
 import { PORT_KINDS } from './port-kind';
 
-export const calcPortSchema = z.object({
-  name: z
-    .string({ error: 'Port name (name) must be text, 1–24 characters' })
-    .trim()
-    .min(1, 'Port name (name) must not be empty (1–24 characters)')
-    .max(24, 'Port name (name) must be at most 24 characters'),
-  heightMm: numberField('Port edge height', 'heightMm', PORT_HEIGHT_RANGE_MM.min, PORT_HEIGHT_RANGE_MM.max, 'mm'),
-  kind: z.enum(PORT_KINDS, { error: `Port kind (kind) must be one of: ${PORT_KINDS.join(', ')}` }).optional(),
+export const calcPortFields = defineFields({
+  name: textField({ label: 'Port name', minLength: 1, maxLength: 24 }),
+  heightMm: lengthField({ label: 'Port edge height', ...PORT_HEIGHT_RANGE_MM }),
+  kind: choiceField({ label: 'Port kind', choices: PORT_KINDS }).optional(),
+});
+
+const calcPortSchema = z.object(shapeOf(calcPortFields));
+
+export const portEventsFields = defineFields({
+  strokeMm: crankFields.strokeMm,
+  rodMm: crankFields.rodMm,
+  deckMm: lengthField({ label: 'Deck height', ...DECK_RANGE_MM }),
+  pinOffsetMm: crankFields.pinOffsetMm,
+  ports: listField(
+    { label: 'Ports' },
+    z
+      .array(calcPortSchema, { error: 'Ports must be a list of { name, heightMm }' })
+      .min(1, `Ports: give 1–${MAX_CALC_PORTS} ports`)
+      .max(MAX_CALC_PORTS, `Ports: at most ${MAX_CALC_PORTS} (allowed 1–${MAX_CALC_PORTS})`),
+  ),
 });
 
 /** POST /api/v1/calc/port-events and the port timing form. */
 export const portEventsSchema = z
-  .object({
-    strokeMm: strokeField(),
-    rodMm: rodField(),
-    deckMm: numberField('Deck height', 'deckMm', DECK_RANGE_MM.min, DECK_RANGE_MM.max, 'mm'),
-    pinOffsetMm: pinOffsetField(),
-    ports: z
-      .array(calcPortSchema, { error: 'Ports (ports) must be a list of { name, heightMm }' })
-      .min(1, `Ports (ports): give 1–${MAX_CALC_PORTS} ports`)
-      .max(MAX_CALC_PORTS, `Ports (ports): at most ${MAX_CALC_PORTS} (allowed 1–${MAX_CALC_PORTS})`),
-  })
+  .object(shapeOf(portEventsFields))
   .superRefine((value, ctx) => {
     checkOffsetCrankGeometry(value, ctx);
   });

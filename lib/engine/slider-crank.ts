@@ -17,12 +17,12 @@ export function crankThrowMm(strokeMm: number): number {
 /** Why the geometry cannot turn, or null when it can. Messages name the field and its range. */
 export function crankGeometryProblem({ strokeMm, rodMm }: CrankGeometry): { field: 'strokeMm' | 'rodMm'; message: string } | null {
   if (!(strokeMm > 0) || !Number.isFinite(strokeMm))
-    return { field: 'strokeMm', message: 'Stroke (strokeMm) must be a positive length in mm' };
+    return { field: 'strokeMm', message: 'Stroke must be a positive length in mm' };
   const throwMm = crankThrowMm(strokeMm);
   if (!(rodMm > throwMm) || !Number.isFinite(rodMm))
     return {
       field: 'rodMm',
-      message: `Con-rod length (rodMm) must be longer than the crank throw, half the stroke (more than ${throwMm} mm)`,
+      message: `Con-rod length must be longer than the crank throw, half the stroke (more than ${throwMm} mm)`,
     };
   return null;
 }
@@ -39,7 +39,7 @@ function assertGeometry(geometry: CrankGeometry): void {
  */
 export function pistonDropMm({ strokeMm, rodMm, crankDeg }: CrankGeometry & { crankDeg: number }): number {
   assertGeometry({ strokeMm, rodMm });
-  if (!Number.isFinite(crankDeg)) throw new RangeError('Crank angle (crankDeg) must be a number of degrees');
+  if (!Number.isFinite(crankDeg)) throw new RangeError('Crank angle must be a number of degrees');
   const throwMm = crankThrowMm(strokeMm);
   const halfAngleSin = sinDeg(normalizeDeg(crankDeg) / 2);
   const sideways = throwMm * sinDeg(crankDeg);
@@ -59,7 +59,7 @@ export function pistonDropMm({ strokeMm, rodMm, crankDeg }: CrankGeometry & { cr
 export function crankDegFromDropMm({ strokeMm, rodMm, dropMm }: CrankGeometry & { dropMm: number }): number {
   assertGeometry({ strokeMm, rodMm });
   if (!(dropMm >= 0 && dropMm <= strokeMm))
-    throw new RangeError(`Piston drop (dropMm) must be within the stroke (allowed 0–${strokeMm} mm)`);
+    throw new RangeError(`Piston drop must be within the stroke (allowed 0–${strokeMm} mm)`);
   const throwMm = crankThrowMm(strokeMm);
   const pMinusS = dropMm / 2;
   const pMinusL = (strokeMm - dropMm) / 2;

@@ -1,40 +1,44 @@
 import { z } from 'zod';
-import { numberField } from './calc-fields';
+import { choiceField } from '../fields/builders';
+import { defineFields, shapeOf } from '../fields/field';
+import { crankAngleField } from './calc-fields';
 import { STOP_SIDES, WHEEL_NUMBERINGS, crankOrderDeg, signedTurnDeg } from './tdc-from-stops';
 
-const side = (label: string, field: string) =>
-  z.enum(STOP_SIDES, { error: `${label} (${field}) must be BTDC or ATDC` }).optional();
+const side = (label: string) => choiceField({ label, choices: STOP_SIDES }).optional();
+
+export const tdcFields = defineFields({
+  numbering: choiceField({ label: 'Numbering', choices: WHEEL_NUMBERINGS }),
+  readingADeg: crankAngleField('Reading A'),
+  readingBDeg: crankAngleField('Reading B'),
+  readingASide: side('Reading A side'),
+  readingBSide: side('Reading B side'),
+});
 
 /**
  * POST /api/v1/calc/tdc and the TDC form. Full numbering: readings 0–360 in crank
  * order. Split numbering: readings 0–180, each with its side (BTDC or ATDC).
  */
 export const tdcSchema = z
-  .object({
-    numbering: z.enum(WHEEL_NUMBERINGS, { error: 'Numbering (numbering) must be one of: full, split' }),
-    readingADeg: numberField('Reading A', 'readingADeg', 0, 360, '°'),
-    readingBDeg: numberField('Reading B', 'readingBDeg', 0, 360, '°'),
-    readingASide: side('Reading A side', 'readingASide'),
-    readingBSide: side('Reading B side', 'readingBSide'),
-  })
+  .object(shapeOf(tdcFields))
   .superRefine((value, ctx) => {
     let valid = true;
     if (value.numbering === 'split') {
-      for (const [reading, sideField, label] of [
-        ['readingADeg', 'readingASide', 'Reading A'],
-        ['readingBDeg', 'readingBSide', 'Reading B'],
+      for (const [reading, sideField] of [
+        ['readingADeg', 'readingASide'],
+        ['readingBDeg', 'readingBSide'],
       ] as const) {
+        const { label } = tdcFields[reading];
         const degrees = value[reading];
         if (degrees > 180) {
           valid = false;
           ctx.addIssue({
             code: 'custom',
             path: [reading],
-            message: `${label} (${reading}) on a split wheel must be at most 180° (allowed 0–180°, with its side BTDC or ATDC)`,
+            message: `${label} on a split wheel must be at most 180° (allowed 0–180°, with its side BTDC or ATDC)`,
           });
         } else if (degrees > 0 && degrees < 180 && value[sideField] === undefined) {
           valid = false;
-          ctx.addIssue({ code: 'custom', path: [sideField], message: `${label} side (${sideField}) is needed on a split wheel: BTDC or ATDC` });
+          ctx.addIssue({ code: 'custom', path: [sideField], message: `${tdcFields[sideField].label} is needed on a split wheel: BTDC or ATDC` });
         }
       }
     }
@@ -45,7 +49,7 @@ export const tdcSchema = z
       ctx.addIssue({
         code: 'custom',
         path: ['readingBDeg'],
-        message: 'Reading B (readingBDeg) is 180° from reading A: the stops must lie less than 180° apart across TDC',
+        message: 'Reading B is 180° from reading A: the stops must lie less than 180° apart across TDC',
       });
   });
 

@@ -9,8 +9,8 @@ import { z } from 'zod';
 
 export type FieldKind = 'number' | 'length' | 'text' | 'choice' | 'flag' | 'list';
 
-/** How a list of records shows the field: as a column, sortable, matched by the search box. */
-export type ListBehaviour = { readonly column?: boolean; readonly sort?: boolean; readonly search?: boolean };
+/** How a list of records shows the field: as a column (headed `header`, else the label), sortable, matched by the search box. */
+export type ListBehaviour = { readonly column?: boolean; readonly sort?: boolean; readonly search?: boolean; readonly header?: string };
 
 export type FieldInfo = {
   /** The JSON / form key; set by `defineFields` from the table's key. */

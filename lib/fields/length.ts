@@ -22,8 +22,9 @@ export function mmToUnit(mm: number, unit: LengthUnit): number {
   return unit === 'in' ? mm / MM_PER_INCH : mm;
 }
 
+/** A value typed in `unit`, in mm to a nanometre, so 1.5 in is 38.1 mm and not 38.099999999999994. */
 export function unitToMm(value: number, unit: LengthUnit): number {
-  return unit === 'in' ? value * MM_PER_INCH : value;
+  return unit === 'in' ? Math.round(value * MM_PER_INCH * 1e6) / 1e6 : value;
 }
 
 /** The text a field shows for a value in mm: trailing zeros dropped, blank for no value. */

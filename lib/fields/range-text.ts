@@ -4,7 +4,7 @@
  * Every range message of every field is written here, so they all read alike.
  */
 
-export function withUnit(value: number, unit: string): string {
+export function withUnit(value: number | string, unit: string): string {
   if (!unit) return String(value);
   return unit.startsWith('°') ? `${value}${unit}` : `${value} ${unit}`;
 }

@@ -4,93 +4,45 @@ function fail(value: number, where: string): never {
   throw new Error(`Sheet layout produced a non-finite number (${value}) at ${where}; this is a bug, please report the request`);
 }
 
+// The numbers of each kind of shape, written once: the check walks this table, so a field added to a shape
+// is checked by adding its name here.
+const NUMBER_KEYS = {
+  line: ['x1Mm', 'y1Mm', 'x2Mm', 'y2Mm', 'dashMm', 'strokeMm'],
+  path: ['strokeMm'],
+  ellipse: ['cxMm', 'cyMm', 'rxMm', 'ryMm', 'dashMm', 'strokeMm'],
+  rect: ['xMm', 'yMm', 'widthMm', 'heightMm', 'strokeMm'],
+  text: ['xMm', 'yMm', 'sizeMm', 'rotateDeg'],
+} as const satisfies { [K in Shape['type']]: ReadonlyArray<keyof Extract<Shape, { type: K }>> };
+const DATA_KEYS = ['crankDeg', 'advanceDeg', 'checkMm', 'level'] as const;
+
+function bad(value: number | undefined): value is number {
+  return value !== undefined && !Number.isFinite(value);
+}
+
 function check(value: number | undefined, where: string, field: string): void {
-  if (value !== undefined && !Number.isFinite(value)) fail(value, `${where}.${field}`);
+  if (bad(value)) fail(value, `${where}.${field}`);
 }
 
-/** A finite number, or one left out (optional fields). */
-function ok(value: number | undefined): boolean {
-  return value === undefined || Number.isFinite(value);
-}
-
-// Checked without naming the shape: its location text is made only for the one that fails.
-function shapeIsFinite(shape: Shape): boolean {
-  let fine: boolean;
-  switch (shape.type) {
-    case 'line':
-      fine = ok(shape.x1Mm) && ok(shape.y1Mm) && ok(shape.x2Mm) && ok(shape.y2Mm) && ok(shape.dashMm);
-      break;
-    case 'path': {
-      fine = true;
-      const points = shape.pointsMm;
-      for (let i = 0; i < points.length && fine; i += 1) fine = ok(points[i]![0]) && ok(points[i]![1]);
-      break;
+/** The first non-finite number of a shape (its field name and value), or null; names are made only for a failure. */
+function firstNonFinite(shape: Shape): { field: string; value: number } | null {
+  const numbers = shape as unknown as Record<string, number | undefined>;
+  for (const key of NUMBER_KEYS[shape.type]) if (bad(numbers[key])) return { field: key, value: numbers[key] };
+  if (shape.type === 'path') {
+    const points = shape.pointsMm;
+    for (let i = 0; i < points.length; i += 1) {
+      for (const axis of [0, 1] as const) if (bad(points[i]![axis])) return { field: `pointsMm[${i}][${axis}]`, value: points[i]![axis] };
     }
-    case 'ellipse':
-      fine = ok(shape.cxMm) && ok(shape.cyMm) && ok(shape.rxMm) && ok(shape.ryMm) && ok(shape.dashMm);
-      break;
-    case 'rect':
-      fine = ok(shape.xMm) && ok(shape.yMm) && ok(shape.widthMm) && ok(shape.heightMm);
-      break;
-    case 'text':
-      fine = ok(shape.xMm) && ok(shape.yMm) && ok(shape.sizeMm) && ok(shape.rotateDeg);
-      break;
   }
-  if (shape.type !== 'text') fine &&= ok(shape.strokeMm);
   const data = shape.data;
-  return data ? fine && ok(data.crankDeg) && ok(data.advanceDeg) && ok(data.checkMm) && ok(data.level) : fine;
-}
-
-/** Throws naming the shape's first non-finite field. */
-function checkShape(shape: Shape, where: string): void {
-  switch (shape.type) {
-    case 'line':
-      check(shape.x1Mm, where, 'x1Mm');
-      check(shape.y1Mm, where, 'y1Mm');
-      check(shape.x2Mm, where, 'x2Mm');
-      check(shape.y2Mm, where, 'y2Mm');
-      check(shape.dashMm, where, 'dashMm');
-      break;
-    case 'path':
-      shape.pointsMm.forEach(([x, y], i) => {
-        check(x, where, `pointsMm[${i}][0]`);
-        check(y, where, `pointsMm[${i}][1]`);
-      });
-      break;
-    case 'ellipse':
-      check(shape.cxMm, where, 'cxMm');
-      check(shape.cyMm, where, 'cyMm');
-      check(shape.rxMm, where, 'rxMm');
-      check(shape.ryMm, where, 'ryMm');
-      check(shape.dashMm, where, 'dashMm');
-      break;
-    case 'rect':
-      check(shape.xMm, where, 'xMm');
-      check(shape.yMm, where, 'yMm');
-      check(shape.widthMm, where, 'widthMm');
-      check(shape.heightMm, where, 'heightMm');
-      break;
-    case 'text':
-      check(shape.xMm, where, 'xMm');
-      check(shape.yMm, where, 'yMm');
-      check(shape.sizeMm, where, 'sizeMm');
-      check(shape.rotateDeg, where, 'rotateDeg');
-      break;
-  }
-  if (shape.type !== 'text') check(shape.strokeMm, where, 'strokeMm');
-  const data = shape.data;
-  if (data) {
-    check(data.crankDeg, where, 'data.crankDeg');
-    check(data.advanceDeg, where, 'data.advanceDeg');
-    check(data.checkMm, where, 'data.checkMm');
-    check(data.level, where, 'data.level');
-  }
+  if (data) for (const key of DATA_KEYS) if (bad(data[key])) return { field: `data.${key}`, value: data[key] };
+  return null;
 }
 
 function checkShapes(shapes: readonly Shape[], where: (i: number, shape: Shape) => string): void {
   for (let i = 0; i < shapes.length; i += 1) {
     const shape = shapes[i]!;
-    if (!shapeIsFinite(shape)) checkShape(shape, where(i, shape));
+    const found = firstNonFinite(shape);
+    if (found) fail(found.value, `${where(i, shape)}.${found.field}`);
   }
 }
 

@@ -1,7 +1,7 @@
 import { cosDeg, sinDeg } from '../angle';
 import { IDENTITY_MAP, type AxisMap } from './affine';
 import type { Shape } from './drawing';
-import { textWidthMm } from './sheet-style';
+import { GLYPH_WIDTH_EM, textWidthMm } from './sheet-style';
 
 export type Box = { minX: number; minY: number; maxX: number; maxY: number };
 
@@ -63,4 +63,24 @@ export function shapesBox(shapes: readonly Shape[], map: AxisMap = IDENTITY_MAP)
   const box = { ...EMPTY_BOX };
   for (const shape of shapes) shapeBox(shape, box, map);
   return box.minX <= box.maxX ? box : { minX: 0, minY: 0, maxX: 0, maxY: 0 };
+}
+
+type RectMm = { xMm: number; yMm: number; widthMm: number; heightMm: number };
+
+// The widest glyph is about 1 em, the text box's estimate 0.62 em a glyph: grow text boxes by the difference
+// and one em more, so culling can only keep too much, never drop a mark that would show.
+function textSlackMm(shape: Shape): number {
+  return shape.type === 'text' ? shape.sizeMm * (shape.text.length * (1 - GLYPH_WIDTH_EM) + 1) : 0;
+}
+
+/** Whether any ink of `shape` may fall inside `rect` (a tile's viewport): a page skips the shapes for which this is false. */
+export function shapeMayShowIn(shape: Shape, rect: RectMm): boolean {
+  const box = shapeBox(shape);
+  const slackMm = textSlackMm(shape);
+  return (
+    box.maxX + slackMm >= rect.xMm &&
+    box.minX - slackMm <= rect.xMm + rect.widthMm &&
+    box.maxY + slackMm >= rect.yMm &&
+    box.minY - slackMm <= rect.yMm + rect.heightMm
+  );
 }

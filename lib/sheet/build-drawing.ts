@@ -1,3 +1,4 @@
+import { DEFAULT_DATE_FORMAT, formatDate, type DateFormat } from '../format/date-format';
 import { assertFiniteDrawing } from './assert-finite';
 import { checkBlockShapes } from './check-block';
 import { nestBlock, toBlock, type Block } from './block';
@@ -5,15 +6,17 @@ import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackedPageCount, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
 import { addPageBands, pageBandHeightMm } from './page-band';
-import { DEFAULT_MARGIN_MM, pageSizeMm } from './paper';
+import { DEFAULT_MARGIN_MM, MIN_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
 import { sheetRequestSchema, type SheetRequest } from './sheet-request';
-import { isoDate, sheetTitle, titleBlockLines } from './sheet-notes';
+import { sheetTitle, titleBlockLines } from './sheet-notes';
 import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
 import { stripLayout } from './strip-layout';
+import { formatDeg } from './scale-marks';
 
-export type BuildOptions = { date?: Date; marginMm?: number };
+/** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"). */
+export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
 export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
@@ -112,15 +115,23 @@ function arrange(page: PageSpec, layout: ScaleLayout, infoAt: InfoAt): Arrangeme
   return { multiPage: true, place: () => tileOversized(fullInfo, scale, page) };
 }
 
-function labelWarnings(shapes: readonly Shape[]): string[] {
-  let marks = 0;
-  let labels = 0;
+/**
+ * Marks drawn without a label, named: a mark is labelled when a label with its advance angle
+ * (advance) or crank angle (port) exists. Strips repeat marks in overlaps, so names are counted once.
+ */
+export function labelWarnings(shapes: readonly Shape[]): string[] {
+  const labelled = new Set<string>();
+  const marks = new Map<string, string>();
   for (const shape of shapes) {
-    const role = shape.data?.role;
-    if (role === 'advance' || role === 'port') marks += 1;
-    else if (role === 'advance-label' || role === 'port-label') labels += 1;
+    const data = shape.data;
+    if (!data?.role) continue;
+    const key = data.role.startsWith('advance') ? `a${data.advanceDeg}` : `p${data.crankDeg}`;
+    if (data.role === 'advance-label' || data.role === 'port-label') labelled.add(key);
+    else if (data.role === 'advance' && data.advanceDeg !== undefined) marks.set(key, data.advanceDeg === 0 ? 'TDC' : `${formatDeg(data.advanceDeg)}° BTDC`);
+    else if (data.role === 'port' && data.crankDeg !== undefined) marks.set(key, `port event at crank ${formatDeg(data.crankDeg)}°`);
   }
-  return labels < marks ? [`${marks - labels} of ${marks} advance/port marks are drawn without a label: they sit closer together than the label text`] : [];
+  const bare = [...marks].filter(([key]) => !labelled.has(key)).map(([, name]) => name);
+  return bare.length ? [`${bare.length} of ${marks.size} advance/port marks are drawn without a label (too close to their neighbours for the label text): ${bare.join(', ')}`] : [];
 }
 
 /**
@@ -130,13 +141,14 @@ function labelWarnings(shapes: readonly Shape[]): string[] {
  */
 export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): Drawing {
   const request = sheetRequestSchema.parse(input);
-  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, 6) };
+  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, MIN_MARGIN_MM) };
   const title = sheetTitle(request);
   const contentFor = (layout?: ScaleLayout): InfoContent => ({
     title,
     request,
+    notes: layout ? [...layout.warnings, ...labelWarnings(layout.blocks.flatMap((block) => block.parts.flatMap((part) => part.shapes)))] : [],
     lines: titleBlockLines(request, {
-      date: isoDate(options.date ?? new Date()),
+      date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
       ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
       ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
     }),

@@ -1,5 +1,5 @@
 import type { Shape } from './drawing';
-import { MM_PER_INCH } from '../units';
+import { MM_PER_INCH } from '../fields/length';
 import { line, rect, text } from './shapes';
 import { STROKE_MM, TEXT_MM } from './sheet-style';
 import { wrapText } from './text-wrap';

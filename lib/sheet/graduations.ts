@@ -15,11 +15,6 @@ export function levelOfHalfDegIndex(crankIndex: number): GraduationLevel {
   return 0.5;
 }
 
-/** Arc pitch of `stepDeg` at a diameter: π·d·step/360. */
-export function arcPitchMm(diameterMm: number, stepDeg: number): number {
-  return (Math.PI * diameterMm * stepDeg) / 360;
-}
-
 export type LevelChoice = { finestLevel: GraduationLevel; keptLevels: GraduationLevel[]; warnings: string[] };
 
 function formatMm(mm: number): string {

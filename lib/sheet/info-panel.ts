@@ -11,7 +11,8 @@ import { wrapText } from './text-wrap';
 
 /** Title block, print line, "which way" note with its small diagram, cautions and the scale check. */
 
-export type InfoContent = { title: string; lines: string[]; request: SheetRequest };
+/** `notes`: what the layout could not draw as asked, and why (printed on the sheet as well as returned). */
+export type InfoContent = { title: string; lines: string[]; request: SheetRequest; notes: string[] };
 
 const LINE_GAP = 1.38; // line height as a share of the text size
 const GUTTER_MM = 5;
@@ -68,6 +69,10 @@ function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; h
   for (const row of content.lines) y = paragraph(shapes, row, 1.5, y, TEXT_MM.small, widthMm - 3);
   shapes.push(rect(0, boxTop - 0.4, widthMm, y - boxTop + 1, STROKE_MM.fine, 'none', { role: 'title-block' }));
   y += 2.5;
+  if (content.notes.length) {
+    y = paragraph(shapes, `Layout notes: ${content.notes.join(' · ')}`, 0, y, TEXT_MM.small, widthMm, 'normal', 'layout-notes');
+    y += 1;
+  }
   y = paragraph(shapes, PRINT_AT_100, 0, y, TEXT_MM.body, widthMm, 'bold', 'print-at-100');
   y += 1;
   y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');

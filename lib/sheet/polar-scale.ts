@@ -3,7 +3,8 @@ import type { Fill, GraduationLevel, Shape } from './drawing';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
 import { spreadOnTurn } from './label-fan';
-import { labelLanes, type PlacedMark, type ScaleMarks } from './scale-marks';
+import { labelLanes, type AlongInterval, type PlacedMark, type ScaleMarks } from './scale-marks';
+import { tangentialText, textInAnnulus, type Annulus } from './annulus-text';
 import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
 import { arrow, line, path, text } from './shapes';
 import { STROKE_MM, textWidthMm } from './sheet-style';
@@ -78,8 +79,14 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   const roomMm = o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f;
   // Radial labels need their length in depth; a narrow ring gets labels along the circle instead.
   const tangential = longestMm > roomMm && roomMm >= labelSize * 1.1;
-  const radial = tangential ? undefined : radialLabeller(o, labelled, longestMm, roomMm, radius, angle, at);
-  const radialLabel = radial ?? tangentialLabeller(o, labelled, longestMm, roomMm, radius, angle);
+  const piece = pieceAnnulus(o);
+  // A narrow ring has no depth past the band for side labels and the arrow: they move into the band's
+  // zone and the label zone, the arrow taking a stretch round BDC that mark labels then keep off.
+  const narrow = o.maxDepthMm / Math.max(f, 1e-6) < POLAR_DEPTH_MM.arrow + 5;
+  const arrow = narrow ? narrowRotationArrow(o, radius, piece) : { shapes: rotationArrow(o, radius(POLAR_DEPTH_MM.arrow)), blocked: [] };
+  const plan: LabelPlan = { o, marks: labelled, longestMm, roomMm, radius, angle, at };
+  const radial = tangential ? undefined : radialLabeller(plan);
+  const radialLabel = radial ?? tangentialLabeller(plan, piece, arrow.blocked);
   const busyAlongDeg = [...labelled.map((m) => m.alongDeg), ...(radial?.labelAlongDeg ?? [])];
 
   for (const mark of o.marks.advance) {
@@ -96,8 +103,8 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   }
 
   shapes.push(...tdcPointer(o, at));
-  shapes.push(...sideLabels(o, at, angle, busyAlongDeg));
-  shapes.push(...rotationArrow(o, radius(POLAR_DEPTH_MM.arrow)));
+  shapes.push(...sideLabels(o, at, angle, busyAlongDeg, piece, narrow ? radius((POLAR_DEPTH_MM.bandFrom + POLAR_DEPTH_MM.bandTo) / 2) : undefined));
+  shapes.push(...arrow.shapes);
   return shapes;
 }
 
@@ -126,6 +133,17 @@ function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, a
 }
 type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
 
+/** What either labeller needs: the labelled marks, the longest label, the depth it may use and the polar mapping. */
+type LabelPlan = {
+  o: PolarScaleOptions;
+  marks: readonly PlacedMark[];
+  longestMm: number;
+  roomMm: number;
+  radius: (depthMm: number) => number;
+  angle: (alongDeg: number) => number;
+  at: At;
+};
+
 const MAX_FAN_MM = 15;
 
 /**
@@ -133,15 +151,7 @@ const MAX_FAN_MM = 15;
  * than a label is thick fan their labels out (label-fan.ts) past a fan zone deep enough for
  * leaders no flatter than 2 across : 1 down, each leader joining a label to its own mark.
  */
-function radialLabeller(
-  o: PolarScaleOptions,
-  marks: readonly PlacedMark[],
-  longestMm: number,
-  roomMm: number,
-  radius: (depthMm: number) => number,
-  angle: (alongDeg: number) => number,
-  at: At,
-): Labeller & { labelAlongDeg: number[] } {
+function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: LabelPlan): Labeller & { labelAlongDeg: number[] } {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
   const labelSize = POLAR_DEPTH_MM.labelSize * f;
@@ -191,21 +201,14 @@ function radialLabeller(
 }
 
 /** Labels along the circle, centred on their mark, in as many rings of text as the depth holds. */
-function tangentialLabeller(
-  o: PolarScaleOptions,
-  marks: readonly PlacedMark[],
-  longestMm: number,
-  roomMm: number,
-  radius: (depthMm: number) => number,
-  angle: (alongDeg: number) => number,
-): Labeller {
+function tangentialLabeller({ o, marks, longestMm, roomMm, radius, angle }: LabelPlan, piece: Annulus, blocked: readonly AlongInterval[]): Labeller {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
   const labelSize = POLAR_DEPTH_MM.labelSize * f;
   const laneMm = labelSize * 1.1;
   const firstRadius = radius(POLAR_DEPTH_MM.labelFrom);
   const gapDeg = ((longestMm + 1) * 360) / (2 * Math.PI * Math.max(firstRadius, 1e-6));
-  const lanes = labelLanes(marks, gapDeg, Math.max(1, Math.floor(roomMm / laneMm)));
+  const lanes = labelLanes(marks, gapDeg, Math.max(1, Math.floor(roomMm / laneMm)), blocked);
   return (alongDeg, label, data) => {
     const lane = lanes.get(alongDeg);
     lanes.delete(alongDeg);
@@ -214,7 +217,11 @@ function tangentialLabeller(
     // Glyph tops face outward: the baseline is the lane's edge nearer the centre.
     const baseline = firstRadius + sign * lane * laneMm + (sign > 0 ? 0.2 * labelSize : -0.8 * labelSize);
     const [x, y] = polarPointMm(o.centreMm, baseline, theta);
-    return [text(x, y, label, labelSize, { anchor: 'middle', rotateDeg: theta, weight: 'bold', data })];
+    const shape = text(x, y, label, labelSize, { anchor: 'middle', rotateDeg: theta, weight: 'bold', ...(data ? { data } : {}) });
+    if (textInAnnulus(shape, piece)) return [shape];
+    // A small ring bends away from the straight text's ends: shrink it onto the lane's middle instead.
+    const fitted = tangentialText(label, labelSize, theta, baseline + (sign > 0 ? 0.3 : -0.3) * labelSize, piece, { weight: 'bold', ...(data ? { data } : {}) });
+    return fitted ? [fitted] : [];
   };
 }
 
@@ -265,7 +272,7 @@ export function sideLabelCrankDeg(middleCrankDeg: 90 | 270, busyAlongDeg: readon
   return best;
 }
 
-function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => number, markAlongDeg: readonly number[]): Shape[] {
+function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => number, markAlongDeg: readonly number[], piece: Annulus, narrowRadiusMm?: number): Shape[] {
   const f = o.depthScale;
   const size = 2.6 * f;
   // Inside a narrow ring when it fits beyond the band, else at the usual depth (past its edge).
@@ -274,17 +281,24 @@ function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => n
   const sideRadiusMm = Math.max(o.edgeRadiusMm + (o.towards === 'centre' ? -1 : 1) * sideDepth * f, 1e-6);
   // Half the side label's length plus a mark label's thickness and a gap, as an angle at its radius.
   const clearDeg = (((textWidthMm('BTDC side', size) / 2 + POLAR_DEPTH_MM.labelSize * f + 0.8) / sideRadiusMm) * 180) / Math.PI;
-  const place = (crankDeg: number, label: string, role: string) => {
+  const place = (crankDeg: number, label: string, role: string): Shape[] => {
     const along = alongRotationDeg(crankDeg, o.carrier);
+    if (narrowRadiusMm !== undefined) {
+      const fitted = tangentialText(label, size, angle(along), narrowRadiusMm, piece, { weight: 'bold', data: { role, crankDeg } });
+      return fitted ? [fitted] : [];
+    }
     const [x, y] = at(along, crankDeg === 180 ? POLAR_DEPTH_MM.labelFrom + 1 : sideDepth);
     const theta = angle(along);
     const upright = theta > 90 && theta < 270 ? theta + 180 : theta;
-    return text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role, crankDeg } });
+    const shape = text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role, crankDeg } });
+    if (textInAnnulus(shape, piece)) return [shape];
+    const fitted = tangentialText(label, size, theta, Math.hypot(x - o.centreMm[0], y - o.centreMm[1]), piece, { weight: 'bold', data: { role, crankDeg } });
+    return fitted ? [fitted] : [];
   };
   return [
-    place(sideLabelCrankDeg(270, markAlongDeg, o.carrier, clearDeg), 'BTDC side', 'btdc-side'),
-    place(sideLabelCrankDeg(90, markAlongDeg, o.carrier, clearDeg), 'ATDC side', 'atdc-side'),
-    place(180, 'BDC', 'bdc-label'),
+    ...place(sideLabelCrankDeg(270, markAlongDeg, o.carrier, clearDeg), 'BTDC side', 'btdc-side'),
+    ...place(sideLabelCrankDeg(90, markAlongDeg, o.carrier, clearDeg), 'ATDC side', 'atdc-side'),
+    ...place(180, 'BDC', 'bdc-label'),
   ];
 }
 
@@ -307,4 +321,39 @@ function rotationArrow(o: PolarScaleOptions, radiusMm: number): Shape[] {
     head,
     text(labelAt[0], labelAt[1], label, 2 * f, { anchor: 'middle', data: { role: 'rotation-label' } }),
   ];
+}
+
+/** The piece the scale is printed on: the disc less its hub (wheel) or the ring, as labels may use it. */
+function pieceAnnulus(o: PolarScaleOptions): Annulus {
+  const far = o.towards === 'centre' ? o.edgeRadiusMm - o.maxDepthMm : o.edgeRadiusMm + o.maxDepthMm;
+  return { centreMm: o.centreMm, innerMm: Math.max(0, Math.min(o.edgeRadiusMm, far)), outerMm: Math.max(o.edgeRadiusMm, far) };
+}
+
+/**
+ * The rotation arrow on a narrow ring: in the label zone beyond the band, its words centred on BDC
+ * and the arrow running on from their end the way the flywheel turns, both inside the ring.
+ */
+function narrowRotationArrow(o: PolarScaleOptions, radius: (depthMm: number) => number, piece: Annulus): { shapes: Shape[]; blocked: AlongInterval[] } {
+  const f = o.depthScale;
+  const zoneFrom = POLAR_DEPTH_MM.labelFrom;
+  const zoneTo = o.maxDepthMm / Math.max(f, 1e-6);
+  const mid = radius((zoneFrom + Math.max(zoneFrom, zoneTo)) / 2);
+  const label = o.rotation === 'cw' ? 'turns clockwise' : 'turns counter-clockwise';
+  const words = tangentialText(label, 2 * f, 180, mid, piece, { data: { role: 'rotation-label' } });
+  const halfWordsDeg = words ? ((textWidthMm(label, words.sizeMm) / 2 + 0.8) / Math.max(mid, 1e-6)) * (180 / Math.PI) : 2;
+  const spanDeg = Math.min(20, Math.max(8, (12 / Math.max(mid, 1e-6)) * (180 / Math.PI)));
+  const dir = o.rotation === 'cw' ? 1 : -1;
+  const from = 180 + dir * halfWordsDeg;
+  const to = from + dir * spanDeg;
+  const steps = 16;
+  const points: Array<[number, number]> = [];
+  for (let i = 0; i <= steps; i += 1) points.push(polarPointMm(o.centreMm, mid, from + ((to - from) * i) / steps));
+  const tail = points[steps - 2]!;
+  const tip = points[steps]!;
+  const [, head] = arrow(tail[0], tail[1], tip[0], tip[1], Math.min(2.2 * f, Math.hypot(tip[0] - tail[0], tip[1] - tail[1])), { role: 'rotation-arrow' });
+  const reachDeg = halfWordsDeg + spanDeg;
+  return {
+    shapes: [path(points.slice(0, steps - 1), false, 'none', STROKE_MM.outline, { role: 'rotation-arrow' }), head, ...(words ? [words] : [])],
+    blocked: [{ fromAlongDeg: 180 - reachDeg, toAlongDeg: 180 + reachDeg }],
+  };
 }

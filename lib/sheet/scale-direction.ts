@@ -1,7 +1,7 @@
 import { normalizeDeg } from '../angle';
 
 /**
- * The one place that decides where a crank angle sits on a scale (PRODUCT.md §2).
+ * The one place that decides where a crank angle sits on a scale (DEVELOPERS.md, "Rotation and carrier").
  * crankDeg: 0 = TDC, increasing the way the engine turns; x° BTDC = 360 − x.
  * A rotating carrier (disc or strip on the flywheel, fixed pointer) has its BTDC
  * marks from TDC in the direction of rotation; a stationary one (ring on the

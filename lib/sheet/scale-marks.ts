@@ -33,7 +33,6 @@ export type ScaleMarksOptions = {
   advanceMarksDeg: readonly number[];
   advanceBandDeg?: readonly [number, number];
   portEvents: readonly PortEvent[];
-  drawPorts: boolean;
   /** Numerals this close (degrees) to an advance or port mark are left off, so the heavy line never strikes one through. */
   numberClearDeg?: number;
 };
@@ -47,6 +46,15 @@ export function numberStrideFor(pitch10Mm: number, textWidthMm: number): number 
 
 export function formatDeg(deg: number): string {
   return String(Math.round(deg * 100) / 100);
+}
+
+/** A port event's angle as the scale reads it: crank degrees on full numbering, ° ATDC / ° BTDC on split. */
+export function portAngleWords(crankDeg: number, numbering: Numbering): string {
+  const crank = normalizeDeg(crankDeg);
+  if (numbering === 'full') return `${formatDeg(crank)}°`;
+  if (Math.abs(crank) < 0.005 || Math.abs(crank - 360) < 0.005) return 'at TDC';
+  if (Math.abs(crank - 180) < 0.005) return 'at BDC';
+  return crank < 180 ? `${formatDeg(crank)}° ATDC` : `${formatDeg(360 - crank)}° BTDC`;
 }
 
 /** Every along position (shifted by whole turns) of a crank angle inside the range. */
@@ -100,22 +108,20 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
     }));
   });
 
-  const ports: PlacedMark[] = options.drawPorts
-    ? options.portEvents.flatMap((port) =>
-        (
-          [
-            [port.opensCrankDeg, 'opens'],
-            [port.closesCrankDeg, 'closes'],
-          ] as const
-        ).flatMap(([crank, verb]) =>
-          alongPositions(normalizeDeg(crank), range, carrier).map((alongDeg) => ({
-            alongDeg,
-            crankDeg: normalizeDeg(crank),
-            label: `${port.name} ${verb} ${formatDeg(crank)}°`,
-          })),
-        ),
-      )
-    : [];
+  const ports: PlacedMark[] = options.portEvents.flatMap((port) =>
+    (
+      [
+        [port.opensCrankDeg, 'opens'],
+        [port.closesCrankDeg, 'closes'],
+      ] as const
+    ).flatMap(([crank, verb]) =>
+      alongPositions(normalizeDeg(crank), range, carrier).map((alongDeg) => ({
+        alongDeg,
+        crankDeg: normalizeDeg(crank),
+        label: `${port.name} ${verb} ${portAngleWords(crank, options.numbering)}`,
+      })),
+    ),
+  );
 
   const stride20 = 20 * options.numberStride;
   const numbers: PlacedMark[] = ticks
@@ -132,10 +138,17 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
  * ticks) whose last label is at least `gapDeg` behind it, so labels never print over each
  * other; with every lane taken the label is left off (the mark itself is always drawn).
  */
-export function labelLanes(marks: readonly PlacedMark[], gapDeg: number, laneCount: number): Map<number, number> {
+export function labelLanes(marks: readonly PlacedMark[], gapDeg: number, laneCount: number, blocked: readonly AlongInterval[] = []): Map<number, number> {
   const lanes = new Map<number, number>();
   const lastInLane = Array.from({ length: Math.max(1, laneCount) }, () => -Infinity);
+  // A label reaches gapDeg / 2 either side of its mark; blocked stretches (the rotation arrow) take none.
+  const clear = (along: number) => blocked.every((b) => {
+    const mid = (b.fromAlongDeg + b.toAlongDeg) / 2;
+    const d = Math.abs(((along - mid) % 360 + 540) % 360 - 180);
+    return d >= (b.toAlongDeg - b.fromAlongDeg) / 2 + gapDeg / 2;
+  });
   for (const along of [...new Set(marks.map((m) => m.alongDeg))].sort((a, b) => a - b)) {
+    if (!clear(along)) continue;
     const lane = lastInLane.findIndex((last) => along - last >= gapDeg - 1e-9);
     if (lane < 0) continue;
     lanes.set(along, lane);

@@ -7,9 +7,17 @@ import { btdcToCrankDeg, wheelAngleDeg } from './scale-direction';
 
 export const PRINT_AT_100 = 'Print at 100 % / actual size — turn off fit-to-page';
 
-// PRODUCT.md §6 in short.
-export const CAUTIONS =
-  'Safety: take the plug lead off (or the battery out) before turning the engine. Turn a positive stop by hand only and take it out before starting. Keep hands, hair and clothes clear of the flywheel and fan when timing with a strobe. Run engines outdoors or with ventilation. Too much advance causes detonation and can hole a piston. The engine maker’s manual and local regulations come first.';
+/** The cautions (DEVELOPERS.md, "Cautions"), one list for every sheet and the sheet maker's panel. */
+export const CAUTION_LINES = [
+  'Take the plug lead off (or the battery out) before turning the engine.',
+  'Turn a positive stop by hand only and take it out before starting.',
+  'Keep hands, hair and clothes clear of the flywheel and fan when timing with a strobe.',
+  'Run engines outdoors or with ventilation.',
+  'Too much advance causes detonation and can hole a piston.',
+] as const;
+export const MANUAL_FIRST = 'The engine maker’s manual and local regulations come first.';
+
+export const CAUTIONS = `Safety: ${CAUTION_LINES.join(' ')} ${MANUAL_FIRST}`;
 
 const KIND_NAMES: Record<SheetKind, string> = {
   wheel: 'Degree wheel',
@@ -31,10 +39,6 @@ export function defaultTitle(req: SheetRequest): string {
 
 export function sheetTitle(req: SheetRequest): string {
   return req.title.trim() || defaultTitle(req);
-}
-
-export function isoDate(date: Date): string {
-  return Number.isFinite(date.getTime()) ? date.toISOString().slice(0, 10) : '';
 }
 
 function dimensionsLine(req: SheetRequest, stripLengthMm?: number): string {

@@ -1,150 +1,106 @@
 import { z } from 'zod';
-import { PAPER_NAMES, type PaperName } from './paper';
+import { fieldsOf, shapeOf } from '../fields/field';
+import { lengthRangeMessage, lengthText, rangeInUnit, type LengthUnit } from '../fields/length';
+import { rangeText } from '../fields/range-text';
+import { DIAMETER_RANGE_MM, MAX_SCRIBE_ROWS, sheetRequestFields } from './sheet-request-fields';
 
 /**
  * The one schema for a sheet request: the generator form (browser), the preview
- * server action and POST /api/v1/sheets all validate with it. Lengths in mm,
- * angles in degrees. Every message names the field and its allowed range.
+ * server action and POST /api/v1/sheets all validate with it, derived from the
+ * field table (sheet-request-fields.ts) plus the rules across fields. Lengths in
+ * mm, angles in degrees. Every message names the field by its label and its allowed range.
  */
 
-export const SHEET_KINDS = ['wheel', 'ring', 'strip', 'scribe', 'check'] as const;
-export type SheetKind = (typeof SHEET_KINDS)[number];
+export {
+  ADVANCE_RANGE_DEG,
+  DIAMETER_RANGE_MM,
+  MAX_ADVANCE_MARKS,
+  MAX_PORT_EVENTS,
+  MAX_SCRIBE_ROWS,
+  portEventSchema,
+  type PortEvent,
+  type SheetKind,
+} from './sheet-request-fields';
 
-export const DIAMETER_RANGE_MM = { min: 20, max: 600 } as const;
-export const STRIP_WIDTH_RANGE_MM = { min: 6, max: 40 } as const;
-export const PAPER_THICKNESS_RANGE_MM = { min: 0, max: 0.5 } as const;
-export const ADVANCE_RANGE_DEG = { min: 0, max: 60 } as const;
-export const MAX_ADVANCE_MARKS = 72;
-export const MIN_PITCH_RANGE_MM = { min: 0.2, max: 5 } as const;
-export const PRINTER_SCALE_RANGE = { min: 0.9, max: 1.1 } as const;
-export const MAX_PORT_EVENTS = 12;
-export const MAX_SCRIBE_ROWS = 400;
+const fields = sheetRequestFields;
 
-function withUnit(value: number, unit: string): string {
-  if (!unit) return String(value);
-  return unit.startsWith('°') ? `${value}${unit}` : `${value} ${unit}`;
-}
-
-function numberIn(label: string, field: string, min: number, max: number, unit: string) {
-  const range = `${min}–${withUnit(max, unit)}`;
-  return z
-    .number({ error: `${label} (${field}) must be a number, ${range}` })
-    .min(min, `${label} (${field}) must be at least ${withUnit(min, unit)} (allowed ${range})`)
-    .max(max, `${label} (${field}) must be at most ${withUnit(max, unit)} (allowed ${range})`);
-}
-
-const crankDeg = (label: string, field: string) => numberIn(label, field, 0, 360, '°');
-const btdcDeg = (label: string, field: string) =>
-  numberIn(label, field, ADVANCE_RANGE_DEG.min, ADVANCE_RANGE_DEG.max, '° BTDC');
-
-function choice<const T extends readonly [string, ...string[]]>(label: string, field: string, values: T) {
-  return z.enum(values, { error: `${label} (${field}) must be one of: ${values.join(', ')}` });
-}
-
-export const portEventSchema = z.object({
-  name: z
-    .string({ error: 'Port name must be text, 1–24 characters' })
-    .trim()
-    .min(1, 'Port name must not be empty (1–24 characters)')
-    .max(24, 'Port name must be at most 24 characters'),
-  opensCrankDeg: crankDeg('Port opening angle', 'opensCrankDeg'),
-  closesCrankDeg: crankDeg('Port closing angle', 'closesCrankDeg'),
+export const sheetRequestSchema = z.object(shapeOf(fields)).superRefine((req, ctx) => {
+  for (const { path, message } of crossFieldIssues(req, 'mm')) ctx.addIssue({ code: 'custom', path: [path], message });
 });
-export type PortEvent = z.infer<typeof portEventSchema>;
 
-export const sheetRequestSchema = z
-  .object({
-    kind: choice('Sheet kind', 'kind', SHEET_KINDS),
-    diameterMm: numberIn('Diameter', 'diameterMm', DIAMETER_RANGE_MM.min, DIAMETER_RANGE_MM.max, 'mm').optional(),
-    hubHoleMm: numberIn('Hub hole', 'hubHoleMm', 0, DIAMETER_RANGE_MM.max, 'mm').default(0),
-    innerDiameterMm: numberIn('Inner diameter', 'innerDiameterMm', DIAMETER_RANGE_MM.min, DIAMETER_RANGE_MM.max, 'mm').optional(),
-    outerDiameterMm: numberIn('Outer diameter', 'outerDiameterMm', DIAMETER_RANGE_MM.min, DIAMETER_RANGE_MM.max, 'mm').optional(),
-    paperThicknessMm: numberIn(
-      'Paper thickness',
-      'paperThicknessMm',
-      PAPER_THICKNESS_RANGE_MM.min,
-      PAPER_THICKNESS_RANGE_MM.max,
-      'mm',
-    ).default(0.1),
-    stripWidthMm: numberIn('Strip width', 'stripWidthMm', STRIP_WIDTH_RANGE_MM.min, STRIP_WIDTH_RANGE_MM.max, 'mm').default(12),
-    seamCrankDeg: crankDeg('Seam position', 'seamCrankDeg').default(180),
-    windowCrankDeg: z
-      .tuple([crankDeg('Window start', 'windowCrankDeg'), crankDeg('Window end', 'windowCrankDeg')], {
-        error: 'Window (windowCrankDeg) must be two crank angles [from, to], each 0–360°',
-      })
-      .optional(),
-    fromDeg: numberIn('Scribe chart start', 'fromDeg', 0, 180, '°').default(0),
-    toDeg: numberIn('Scribe chart end', 'toDeg', 0, 180, '°').default(40),
-    stepDeg: numberIn('Scribe chart step', 'stepDeg', 0.1, 10, '°').default(1),
-    rotation: choice('Rotation', 'rotation', ['cw', 'ccw']).default('cw'),
-    carrier: choice('Scale carrier', 'carrier', ['rotating', 'stationary']).default('rotating'),
-    numbering: choice('Numbering', 'numbering', ['split', 'full']).default('split'),
-    advanceMarksDeg: z
-      .array(btdcDeg('Advance mark', 'advanceMarksDeg'), {
-        error: 'Advance marks (advanceMarksDeg) must be a list of angles, 0–60° BTDC',
-      })
-      .max(MAX_ADVANCE_MARKS, `Advance marks (advanceMarksDeg): at most ${MAX_ADVANCE_MARKS} angles`)
-      .default([]),
-    advanceBandDeg: z
-      .tuple([btdcDeg('Advance band start', 'advanceBandDeg'), btdcDeg('Advance band end', 'advanceBandDeg')], {
-        error: 'Advance band (advanceBandDeg) must be two angles [from, to], each 0–60° BTDC',
-      })
-      .optional(),
-    portEvents: z
-      .array(portEventSchema, { error: 'Port events (portEvents) must be a list of { name, opensCrankDeg, closesCrankDeg }' })
-      .max(MAX_PORT_EVENTS, `Port events (portEvents): at most ${MAX_PORT_EVENTS}`)
-      .default([]),
-    minPitchMm: numberIn('Minimum legible pitch', 'minPitchMm', MIN_PITCH_RANGE_MM.min, MIN_PITCH_RANGE_MM.max, 'mm').default(0.6),
-    paper: choice('Paper', 'paper', PAPER_NAMES as [PaperName, ...PaperName[]]).default('A4'),
-    orientation: choice('Orientation', 'orientation', ['portrait', 'landscape']).default('portrait'),
-    printerScaleX: numberIn('Printer scale X', 'printerScaleX', PRINTER_SCALE_RANGE.min, PRINTER_SCALE_RANGE.max, '').default(1),
-    printerScaleY: numberIn('Printer scale Y', 'printerScaleY', PRINTER_SCALE_RANGE.min, PRINTER_SCALE_RANGE.max, '').default(1),
-    printerProfileName: z.string().trim().max(60, 'Printer profile name must be at most 60 characters').optional(),
-    title: z
-      .string({ error: 'Title (title) must be text, up to 80 characters' })
-      .trim()
-      .max(80, 'Title (title) must be at most 80 characters')
-      .default(''),
-    note: z.string().trim().max(200, 'Note (note) must be at most 200 characters').optional(),
-    format: choice('Format', 'format', ['svg', 'pdf']).default('pdf'),
-  })
-  .superRefine((req, ctx) => {
-    const need = (field: 'diameterMm' | 'innerDiameterMm' | 'outerDiameterMm', label: string) => {
-      if (req[field] === undefined)
-        ctx.addIssue({
-          code: 'custom',
-          path: [field],
-          message: `${label} (${field}) is required for a ${req.kind} sheet (allowed ${DIAMETER_RANGE_MM.min}–${DIAMETER_RANGE_MM.max} mm)`,
-        });
-    };
-    if (req.kind === 'wheel' || req.kind === 'strip' || req.kind === 'scribe') need('diameterMm', 'Diameter');
-    if (req.kind === 'ring') {
-      need('innerDiameterMm', 'Inner diameter');
-      need('outerDiameterMm', 'Outer diameter');
-      if (req.innerDiameterMm !== undefined && req.outerDiameterMm !== undefined && req.innerDiameterMm >= req.outerDiameterMm)
-        ctx.addIssue({
-          code: 'custom',
-          path: ['innerDiameterMm'],
-          message: `Inner diameter (innerDiameterMm) must be smaller than the outer diameter (${req.outerDiameterMm} mm)`,
-        });
-    }
-    if (req.kind === 'wheel' && req.diameterMm !== undefined && req.hubHoleMm >= req.diameterMm)
-      ctx.addIssue({
-        code: 'custom',
-        path: ['hubHoleMm'],
-        message: `Hub hole (hubHoleMm) must be smaller than the disc diameter (0 to under ${req.diameterMm} mm)`,
+/** What the rules across fields read: a parsed request, or the generator form's values (mm, blanks as NaN). */
+type RuleInput = Pick<SheetRequest, 'kind' | 'hubHoleMm' | 'fromDeg' | 'toDeg' | 'stepDeg'> &
+  Partial<Pick<SheetRequest, 'diameterMm' | 'innerDiameterMm' | 'outerDiameterMm'>>;
+
+const given = (mm: number | undefined): mm is number => mm !== undefined && Number.isFinite(mm);
+
+/**
+ * The rules no single field can check (a diameter the kind needs, inner below
+ * outer, hub below disc, a scribe chart's rows), with the lengths written in
+ * the unit the user reads: the API speaks mm, the form may show inches.
+ */
+export function crossFieldIssues(req: RuleInput, unit: LengthUnit): FieldIssue[] {
+  const issues: FieldIssue[] = [];
+  const length = (mm: number) => `${lengthText(mm, unit)} ${unit}`;
+  const need = (field: 'diameterMm' | 'innerDiameterMm' | 'outerDiameterMm') => {
+    if (req[field] !== undefined) return;
+    const { min, max } = rangeInUnit(DIAMETER_RANGE_MM, unit);
+    issues.push({ path: field, message: `${fields[field].label} is required for a ${req.kind} sheet (allowed ${rangeText(min, max, unit)})` });
+  };
+  if (req.kind === 'wheel' || req.kind === 'strip' || req.kind === 'scribe') need('diameterMm');
+  if (req.kind === 'ring') {
+    need('innerDiameterMm');
+    need('outerDiameterMm');
+    if (given(req.innerDiameterMm) && given(req.outerDiameterMm) && req.innerDiameterMm >= req.outerDiameterMm)
+      issues.push({
+        path: 'innerDiameterMm',
+        message: `${fields.innerDiameterMm.label} must be smaller than the outer diameter (${length(req.outerDiameterMm)})`,
       });
-    if (req.kind === 'scribe') {
-      if (req.toDeg < req.fromDeg)
-        ctx.addIssue({ code: 'custom', path: ['toDeg'], message: `Scribe chart end (toDeg) must not be below the start (${req.fromDeg}°)` });
-      else if ((req.toDeg - req.fromDeg) / req.stepDeg + 1 > MAX_SCRIBE_ROWS)
-        ctx.addIssue({
-          code: 'custom',
-          path: ['stepDeg'],
-          message: `Scribe chart step (stepDeg) gives more than ${MAX_SCRIBE_ROWS} rows: widen the step or narrow the range`,
-        });
-    }
-  });
+  }
+  if (req.kind === 'wheel' && given(req.diameterMm) && req.hubHoleMm >= req.diameterMm)
+    issues.push({
+      path: 'hubHoleMm',
+      message: `${fields.hubHoleMm.label} must be smaller than the disc diameter (0 to under ${length(req.diameterMm)})`,
+    });
+  if (req.kind === 'scribe') {
+    if (req.toDeg < req.fromDeg)
+      issues.push({ path: 'toDeg', message: `${fields.toDeg.label} must not be below the start (${req.fromDeg}°)` });
+    else if ((req.toDeg - req.fromDeg) / req.stepDeg + 1 > MAX_SCRIBE_ROWS)
+      issues.push({
+        path: 'stepDeg',
+        message: `${fields.stepDeg.label} gives more than ${MAX_SCRIBE_ROWS} rows: widen the step or narrow the range`,
+      });
+  }
+  return issues;
+}
+
+/** One issue of the schema as the user reads it: `code` is zod's ('too_big', 'custom'…). */
+export type CodedIssue = FieldIssue & { code: string };
+
+/**
+ * An issue restated in the unit the form shows lengths in: a length field's
+ * range message from the field's own range (lengthRangeMessage), a rule across
+ * fields from the rule itself. Anything else, and everything in mm, stays as it is.
+ */
+export function issueInUnit(issue: CodedIssue, req: RuleInput, unit: LengthUnit): string {
+  if (unit === 'mm' || !isLengthKey(issue.path)) return issue.message;
+  const field = fields[issue.path];
+  if (issue.code === 'custom') return crossFieldIssues(req, unit).find((rule) => rule.path === issue.path)?.message ?? issue.message;
+  if (issue.code === 'too_small' || issue.code === 'too_big' || issue.code === 'invalid_type')
+    return lengthRangeMessage(issue.code, { label: field.label, min: field.min ?? 0, max: field.max ?? 0 }, unit);
+  return issue.message;
+}
+
+type SheetRequestKey = keyof typeof fields;
+
+/** The fields a form shows in the chosen length unit (the ones measured with calipers). */
+export const LENGTH_KEYS: readonly SheetRequestKey[] = fieldsOf(fields)
+  .filter((field) => field.kind === 'length')
+  .map((field) => field.key as SheetRequestKey);
+
+function isLengthKey(path: string): path is SheetRequestKey {
+  return (LENGTH_KEYS as readonly string[]).includes(path);
+}
 
 export type SheetRequestInput = z.input<typeof sheetRequestSchema>;
 export type SheetRequest = z.output<typeof sheetRequestSchema>;

@@ -1,8 +1,8 @@
 import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
 import { chooseLevels } from './graduations';
-import { spreadInRange } from './label-fan';
-import { formatDeg, numberStrideFor, scaleMarks, type ScaleMarks } from './scale-marks';
+import { freeLabelSpot, MIN_STRIP_LABEL_MM, stripMarkLabels, type InkBox, type StripMark, type Zone } from './strip-labels';
+import { formatDeg, numberStrideFor, portAngleWords, scaleMarks, type ScaleMarks } from './scale-marks';
 import { alongRotationDeg, crankFromAlongDeg, stripXMm } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
@@ -19,9 +19,6 @@ import { STROKE_MM, TEXT_MM, textWidthMm } from './sheet-style';
 export const STRIP_OVERLAP_MM = 10;
 export const GLUE_TAIL_MM = 15;
 export const STRIP_LABEL_BAND_MM = 5;
-/** Depth below the strip where fanned labels' leaders run from their marks to the labels (least, most). */
-export const STRIP_FAN_MM = 3;
-export const STRIP_MAX_FAN_MM = 12;
 
 export type StripSegment = {
   letter: string;
@@ -89,8 +86,9 @@ export function planStrip(req: SheetRequest, rowLengthMm: number): StripPlan {
 type StripDepths = { tick: Record<GraduationLevel, number>; numeralSize: number; numeralBaseline: number; bandTop: number };
 
 export function stripDepths(widthMm: number): StripDepths {
-  const long = Math.min(0.42 * widthMm, 6);
-  const numeralSize = Math.min(3, 0.25 * widthMm);
+  // A narrow strip gives its ticks and numerals less, so the label zone below them stays usable.
+  const long = widthMm < 10 ? 0.3 * widthMm : Math.min(0.35 * widthMm, 6);
+  const numeralSize = widthMm < 10 ? 0.2 * widthMm : Math.min(3, 0.22 * widthMm);
   const numeralBaseline = long + 0.5 + numeralSize * 0.8;
   return { tick: { 10: long, 5: long * 0.75, 1: long * 0.5, 0.5: long * 0.33 }, numeralSize, numeralBaseline, bandTop: numeralBaseline + numeralSize * 0.25 + 0.3 };
 }
@@ -107,7 +105,6 @@ function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment,
     advanceMarksDeg: req.advanceMarksDeg,
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
-    drawPorts: req.numbering === 'full',
     numberClearDeg: Math.max(1.5, (numeralWidthMm / 2 + 0.4) / plan.mmPerDeg),
   });
 }
@@ -146,55 +143,30 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
     shapes.push(text(nx, top + depths.numeralBaseline, number.label, depths.numeralSize, { anchor, font: 'figures', data: tag({ role: 'numeral', crankDeg: number.crankDeg }) }));
   }
 
-  const labelSize = TEXT_MM.small;
-  const labelled = [...marks.advance, ...marks.ports];
-  // Labels hang below the strip, reading upwards; marks closer than a label is thick fan their
-  // labels out (label-fan.ts) below a short fan zone, each joined to its mark by a fine leader.
-  const alongs = [...new Set(labelled.map((m) => m.alongDeg))].sort((a, b) => a - b);
-  const pitchMm = labelSize * 1.3;
-  const range = [labelSize * 0.5, rowLength - labelSize * 0.5] as const;
-  // The fan is as deep as leaders no flatter than 2 across : 1 down need, up to STRIP_MAX_FAN_MM;
-  // labels that would go farther than that allows are left off (thinned evenly).
-  let widestMm = 0;
-  for (const [wanted, at] of spreadInRange(alongs.map(x), pitchMm, range)) widestMm = Math.max(widestMm, Math.abs(at - wanted));
-  const fanMm = Math.min(Math.max(STRIP_FAN_MM, widestMm / 2), STRIP_MAX_FAN_MM);
-  const placed = spreadInRange(alongs.map(x), pitchMm, range, 2.2 * fanMm);
-  const labelX = new Map(alongs.flatMap((along) => (placed.has(x(along)) ? [[along, placed.get(x(along))!] as const] : [])));
-  // Fanned: moved, or within a pitch of a neighbouring mark (the middle of a cluster).
-  const fanned = new Set(alongs.filter((along, i) => Math.abs((labelX.get(along) ?? x(along)) - x(along)) > 1e-6 || Math.abs(x(alongs[i - 1] ?? -Infinity) - x(along)) < pitchMm || Math.abs(x(alongs[i + 1] ?? Infinity) - x(along)) < pitchMm));
-  const markLabel = (alongDeg: number, label: string, data: ShapeData): Shape[] => {
-    const lx = labelX.get(alongDeg);
-    labelX.delete(alongDeg);
-    if (lx === undefined) return [];
-    const startY = top + w + 1 + (fanned.has(alongDeg) ? fanMm : 0);
-    const shapes: Shape[] = [];
-    if (fanned.has(alongDeg)) shapes.push(line(x(alongDeg), top + w, lx, startY - 0.4, STROKE_MM.fine, tag({ role: 'label-leader' })));
-    shapes.push(text(lx + labelSize * 0.35, startY, label, labelSize, { anchor: 'end', rotateDeg: -90, weight: 'bold', data: tag(data) }));
-    return shapes;
-  };
-  for (const mark of marks.advance) {
-    shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg })));
-    shapes.push(...markLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
-  }
-  for (const mark of marks.ports) {
-    shapes.push(line(x(mark.alongDeg), top, x(mark.alongDeg), top + w, STROKE_MM.heavy, tag({ role: 'port', crankDeg: mark.crankDeg }), 0.8));
-    shapes.push(...markLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
-  }
-
-  shapes.push(...tdcPointers(marks, x, top, depths, w, tag));
-  shapes.push(...sideLabels(req, segment, plan, x, top, depths, w, tag));
-  // The lower zone's occupants, so the in-strip arrow finds a free place.
-  const busy: Array<[number, number]> = [];
-  for (const shape of shapes) {
-    if (shape.type === 'text' && (shape.data?.role?.endsWith('-side') || shape.data?.role === 'bdc-label')) {
-      const width = textWidthMm(shape.text, shape.sizeMm);
-      const from = shape.anchor === 'start' ? shape.xMm : shape.anchor === 'end' ? shape.xMm - width : shape.xMm - width / 2;
-      busy.push([from, from + width]);
-    } else if (shape.data?.role === 'tdc-pointer' && shape.type === 'path') busy.push([shape.pointsMm[1]![0], shape.pointsMm[2]![0]]);
-    else if (shape.type === 'line' && (shape.data?.role === 'advance' || shape.data?.role === 'port')) busy.push([shape.x1Mm - 0.5, shape.x1Mm + 0.5]);
-  }
+  // Marks and their labels: inside the strip, in the zone below the numerals (strip-labels.ts).
+  const zone: Zone = { topMm: top + depths.bandTop + 0.2, bottomMm: top + w - 0.3, fromMm: 0, toMm: segment.extension === 'tail' ? segment.markedMm : rowLength };
+  const tdc = tdcPointers(marks, x, top, depths, w, tag);
+  const stripMarks: StripMark[] = [
+    ...marks.advance.map((mark) => ({ xMm: x(mark.alongDeg), label: mark.label, line: { role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg }, labelData: { role: 'advance-label', advanceDeg: mark.advanceDeg } })),
+    ...marks.ports.map((mark) => ({ xMm: x(mark.alongDeg), label: mark.label, line: { role: 'port', crankDeg: mark.crankDeg }, labelData: { role: 'port-label', crankDeg: mark.crankDeg }, dashMm: 0.8 })),
+  ];
+  const labels = stripMarkLabels(stripMarks, top, zone, tag);
+  shapes.push(...labels.shapes);
+  const occupied = [...labels.occupied, ...tdc.map(pathBox)];
+  shapes.push(...tdc);
+  shapes.push(...sideLabels(req, segment, plan, x, zone, occupied, tag));
+  // The in-strip arrow goes where nothing else is.
+  const busy: Array<[number, number]> = occupied.map((box) => [box.x0, box.x1]);
+  for (const mark of stripMarks) busy.push([mark.xMm - 0.5, mark.xMm + 0.5]);
   shapes.push(...rowLabels(req, plan, segment, index, top, w, tag, busy));
   return shapes;
+}
+
+function pathBox(shape: Shape): InkBox {
+  const points = shape.type === 'path' ? shape.pointsMm : [];
+  const xs = points.map((p) => p[0]);
+  const ys = points.map((p) => p[1]);
+  return { x0: Math.min(...xs) - 0.2, x1: Math.max(...xs) + 0.2, y0: Math.min(...ys), y1: Math.max(...ys) };
 }
 
 /** A centred label that would stick out of the strip's end is anchored at that end instead. */
@@ -217,7 +189,8 @@ function freeSpot(busy: ReadonlyArray<[number, number]>, lengthMm: number, limit
 function tdcPointers(marks: ScaleMarks, x: (a: number) => number, top: number, depths: StripDepths, w: number, tag: (d: ShapeData) => ShapeData): Shape[] {
   const lower = w - depths.bandTop;
   if (lower < 0.8) return [];
-  const size = Math.min(2.2, lower * 0.9);
+  // Small, at the top of the label zone: the labels stand on the zone's bottom edge.
+  const size = Math.min(1.6, lower * 0.4);
   return marks.ticks
     .filter((tick) => tick.crankIndex === 0)
     .map((tick) =>
@@ -235,25 +208,53 @@ function tdcPointers(marks: ScaleMarks, x: (a: number) => number, top: number, d
     );
 }
 
-function sideLabels(req: SheetRequest, segment: StripSegment, plan: StripPlan, x: (a: number) => number, top: number, depths: StripDepths, w: number, tag: (d: ShapeData) => ShapeData): Shape[] {
-  const lower = w - depths.bandTop;
-  if (lower < 1.6) return [];
-  const size = Math.min(2.4, lower * 0.75);
+/**
+ * BTDC side / ATDC side inside the strip, on every stretch of the segment that lies on that side
+ * of TDC (at 45° from TDC when the stretch holds it, else in the stretch's middle, so a window
+ * strip says which side it shows), and BDC where the segment holds it; each at the first free spot.
+ */
+function sideLabels(req: SheetRequest, segment: StripSegment, plan: StripPlan, x: (a: number) => number, zone: Zone, occupied: InkBox[], tag: (d: ShapeData) => ShapeData): Shape[] {
+  const size = Math.min(2.4, (zone.bottomMm - zone.topMm) / 1.1);
+  if (size < MIN_STRIP_LABEL_MM) return [];
   const from = segment.startAlongDeg;
   const to = from + segment.markedMm / plan.mmPerDeg;
   const shapes: Shape[] = [];
-  for (const [crankDeg, label, role] of [
-    [315, 'BTDC side', 'btdc-side'],
-    [45, 'ATDC side', 'atdc-side'],
-    [180, 'BDC', 'bdc-label'],
+  const put = (along: number, label: string, role: string) => {
+    const spot = freeLabelSpot(label, size, x(along), zone, occupied);
+    if (!spot) return;
+    occupied.push(spot.box);
+    shapes.push(text(spot.xMm, spot.baselineMm, label, size, { anchor: 'middle', weight: 'bold', data: tag({ role, crankDeg: crankFromAlongDeg(along, req.carrier) }) }));
+  };
+  for (const [preferredCrank, label, role, onSide] of [
+    [315, 'BTDC side', 'btdc-side', (c: number) => c > 182 && c < 358],
+    [45, 'ATDC side', 'atdc-side', (c: number) => c > 2 && c < 178],
   ] as const) {
-    const base = normalizeDeg(alongRotationDeg(crankDeg, req.carrier));
-    for (let along = base + 360 * Math.ceil((from - base) / 360); along <= to; along += 360) {
-      const [lx, anchor] = keepInside(x(along), textWidthMm(label, size), segment.markedMm);
-      shapes.push(text(lx, top + depths.bandTop + (lower + size * 0.7) / 2, label, size, { anchor, weight: 'bold', data: tag({ role }) }));
+    for (const [runFrom, runTo] of sideRuns(from, to, (along) => onSide(crankFromAlongDeg(along, req.carrier)))) {
+      if ((runTo - runFrom) * plan.mmPerDeg < textWidthMm(label, size) + 1) continue;
+      const preferred = normalizeDeg(alongRotationDeg(preferredCrank, req.carrier));
+      const inRun = [0, -360, 360, 720].map((t) => preferred + t).find((a) => a >= runFrom && a <= runTo);
+      put(inRun ?? (runFrom + runTo) / 2, label, role);
     }
   }
+  const bdc = normalizeDeg(alongRotationDeg(180, req.carrier));
+  for (let along = bdc + 360 * Math.ceil((from - bdc) / 360); along <= to + 1e-9; along += 360) put(along, 'BDC', 'bdc-label');
   return shapes;
+}
+
+/** The stretches of [from, to] (along degrees, 1° resolution) where `inside` holds. */
+function sideRuns(from: number, to: number, inside: (along: number) => boolean): Array<[number, number]> {
+  const runs: Array<[number, number]> = [];
+  let start: number | undefined;
+  for (let along = from; along <= to + 1e-9; along += 1) {
+    const here = Math.min(along, to);
+    if (inside(here)) start ??= here;
+    else if (start !== undefined) {
+      runs.push([start, here - 1]);
+      start = undefined;
+    }
+  }
+  if (start !== undefined) runs.push([start, to]);
+  return runs;
 }
 
 function rowLabels(req: SheetRequest, plan: StripPlan, segment: StripSegment, index: number, top: number, w: number, tag: (d: ShapeData) => ShapeData, busy: Array<[number, number]>): Shape[] {
@@ -273,7 +274,7 @@ function rowLabels(req: SheetRequest, plan: StripPlan, segment: StripSegment, in
   }
   // The rotation arrow: on the strip itself, near its start, and in words above it.
   const [shaft, head] = arrow(cursor, baseline - 0.7, cursor + 9, baseline - 0.7, 1.6, tag({ role: 'rotation-arrow' }));
-  shapes.push(shaft, head, text(cursor + 10, baseline, 'rim moves this way', TEXT_MM.small, { data: tag({ role: 'rotation-label' }) }));
+  shapes.push(shaft, head, text(cursor + 10, baseline, 'rim moves this way', TEXT_MM.small, { data: tag({ role: 'rotation-caption' }) }));
   const inStripY = top + w - Math.min(1, w * 0.1);
   const arrowLength = Math.min(8, segment.markedMm * 0.3);
   const arrowStart = freeSpot(busy, arrowLength + 1, segment.markedMm) ?? Math.min(4, segment.markedMm * 0.2);
@@ -304,11 +305,29 @@ export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
   const choice = chooseLevels(plan.mmPerDeg, req.minPitchMm, 'on this strip');
   const stride = numberStrideFor(plan.mmPerDeg * 10, textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize));
   const warnings = [...choice.warnings];
-  if (req.portEvents.length && req.numbering !== 'full') warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
+  warnings.push(...outsideWindowWarnings(req));
   if (plan.segments.length > 1)
     warnings.push(
       `The strip (${(plan.markedMm).toFixed(2)} mm marked) is cut into ${plan.segments.length} segments, ${plan.segments[0]!.letter}–${plan.segments[plan.segments.length - 1]!.letter}, that join end to end`,
     );
   const rows = plan.segments.map((segment, i) => stripRow(req, plan, segment, i, choice.finestLevel, stride));
   return { rows, keptLevels: choice.keptLevels, stripLengthMm: plan.stripLengthMm, warnings, plan };
+}
+
+/** What a window strip cannot show: each requested advance mark, band or port event outside the window, by name. */
+function outsideWindowWarnings(req: SheetRequest): string[] {
+  if (!req.windowCrankDeg) return [];
+  const [from] = req.windowCrankDeg;
+  const span = windowSpanDeg(req.windowCrankDeg);
+  const inWindow = (crankDeg: number) => normalizeDeg(crankDeg - from) <= span + 1e-7;
+  const left: string[] = [];
+  for (const advanceDeg of new Set(req.advanceMarksDeg)) if (!inWindow(360 - advanceDeg)) left.push(`advance mark ${formatDeg(advanceDeg)}° BTDC`);
+  for (const port of req.portEvents)
+    for (const [crank, verb] of [
+      [port.opensCrankDeg, 'opens'],
+      [port.closesCrankDeg, 'closes'],
+    ] as const)
+      if (!inWindow(crank)) left.push(`${port.name} ${verb} ${portAngleWords(crank, req.numbering)}`);
+  if (req.advanceBandDeg && !inWindow(360 - req.advanceBandDeg[0]) && !inWindow(360 - req.advanceBandDeg[1])) left.push(`advance band ${formatDeg(Math.min(...req.advanceBandDeg))}–${formatDeg(Math.max(...req.advanceBandDeg))}° BTDC`);
+  return left.length ? [`Not drawn, outside the window: ${left.join(', ')}`] : [];
 }

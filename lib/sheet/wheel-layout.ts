@@ -1,5 +1,6 @@
 import type { GraduationLevel, Shape } from './drawing';
-import { arcPitchMm, chooseLevels } from './graduations';
+import { arcLengthMm } from '../engine/arc-chord';
+import { chooseLevels } from './graduations';
 import { polarScaleShapes, POLAR_DEPTH_MM, TICK_DEPTH_MM } from './polar-scale';
 import { numberStrideFor, scaleMarks } from './scale-marks';
 import type { SheetRequest } from './sheet-request';
@@ -11,21 +12,20 @@ import { STROKE_MM, textWidthMm } from './sheet-style';
 export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[] };
 
 const MIN_DEPTH_SCALE = 0.02;
-const RING_SCALE_DEPTH_MM = POLAR_DEPTH_MM.bandTo + 0.7; // ticks, numerals and band inside the annulus
+// Ticks, numerals, band and one lane of mark labels inside the annulus.
+const RING_SCALE_DEPTH_MM = POLAR_DEPTH_MM.labelFrom + POLAR_DEPTH_MM.labelSize * 1.2 + 0.5;
 
 function clampScale(value: number): number {
   return Math.min(1, Math.max(MIN_DEPTH_SCALE, value));
 }
 
 function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string, maxDepthMm: number) {
-  const choice = chooseLevels(arcPitchMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
+  const choice = chooseLevels(arcLengthMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
   const numeralRadius = edgeRadiusMm + (towards === 'centre' ? -1 : 1) * (TICK_DEPTH_MM[10] + 2.4) * depthScale;
   const numeralWidthMm = textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale);
-  const stride = numberStrideFor(arcPitchMm(2 * numeralRadius, 10), numeralWidthMm);
-  const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcPitchMm(2 * numeralRadius, 1), 1e-6));
-  const drawPorts = req.numbering === 'full';
+  const stride = numberStrideFor(arcLengthMm(2 * numeralRadius, 10), numeralWidthMm);
+  const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcLengthMm(2 * numeralRadius, 1), 1e-6));
   const warnings = [...choice.warnings];
-  if (req.portEvents.length && !drawPorts) warnings.push('Port events are drawn on full-numbered scales only: choose full numbering to see them');
   const marks = scaleMarks({
     range: 'turn',
     carrier: req.carrier,
@@ -35,7 +35,6 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     advanceMarksDeg: req.advanceMarksDeg,
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
-    drawPorts,
     numberClearDeg,
   });
   const shapes = polarScaleShapes({
@@ -75,7 +74,7 @@ export function ringLayout(req: SheetRequest): PolarLayout {
   const innerRadiusMm = (req.innerDiameterMm ?? 0) / 2;
   const outerRadiusMm = Math.max((req.outerDiameterMm ?? 0) / 2, innerRadiusMm);
   const depthScale = clampScale((outerRadiusMm - innerRadiusMm) / RING_SCALE_DEPTH_MM);
-  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter', outerRadiusMm - innerRadiusMm - 0.3);
+  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter', outerRadiusMm - innerRadiusMm - 0.15);
   const shapes: Shape[] = [
     circle(0, 0, outerRadiusMm, STROKE_MM.outline, { role: 'cut-line' }),
     circle(0, 0, innerRadiusMm, STROKE_MM.outline, { role: 'cut-line-inner' }),

@@ -1,23 +1,18 @@
 import { z } from 'zod';
+import { TEMPLATE_FIELD_LIST, type TemplateFieldName } from './template-fields';
 
-/** Columns the list can sort by (API names); the query module maps each to one SQL column. */
-export const TEMPLATE_SORT_KEYS = [
-  'name',
-  'description',
-  'boreMm',
-  'strokeMm',
-  'rodMm',
-  'rotation',
-  'rimDiameterMm',
-  'faceDiameterMm',
-  'flangeDiameterMm',
-  'hubHoleMm',
-  'staticAdvanceDeg',
+/** Columns the list can sort by (API names): the sortable fields of the table, then the version and the dates. */
+const sortKeys: TemplateSortKey[] = [
+  ...TEMPLATE_FIELD_LIST.filter((field) => field.list.sort).map((field) => field.key as TemplateFieldName),
   'version',
   'createdAt',
   'updatedAt',
-] as const;
-export type TemplateSortKey = (typeof TEMPLATE_SORT_KEYS)[number];
+];
+export const TEMPLATE_SORT_KEYS = sortKeys as [TemplateSortKey, ...TemplateSortKey[]];
+export type TemplateSortKey = TemplateFieldName | 'version' | 'createdAt' | 'updatedAt';
+
+/** The fields the search box matches (their SQL columns are searched with LIKE). */
+export const TEMPLATE_SEARCH_FIELDS = TEMPLATE_FIELD_LIST.filter((field) => field.list.search);
 
 export const MAX_PAGE_SIZE = 100;
 

@@ -1,40 +1,47 @@
 import Papa from 'papaparse';
-import { CSV_COLUMNS, CSV_COLUMN_SPECS, columnForField, type CsvColumn, type CsvColumnSpec } from './csv-columns';
+import { CSV_COLUMNS, CSV_COLUMN_SPECS, columnForField, type CsvColumnSpec } from './csv-columns';
+import { detectDelimiter, type CsvDelimiter } from '@/lib/csv/detect-delimiter';
+import { guardCell, unguardCell } from '@/lib/csv/formula-guard';
 import {
   readBooleanCell,
   readListCell,
   readNumberCell,
   readPortsCell,
-  readTextCell,
   writeListCell,
   writeNumberCell,
   writePortsCell,
-  writeTextCell,
   type CellResult,
+  type NumberStyle,
 } from './csv-cells';
-import { templateSchema, type TemplateFields } from './template-schema';
+import type { PortEvent } from '@/lib/sheet/sheet-request';
+import { templateSchema, type TemplateFieldName, type TemplateFields } from './template-schema';
 
 export const MAX_IMPORT_ROWS = 20_000;
 
 /** One problem in an import: `row` is the spreadsheet row (the header is row 1). */
 export type CsvProblem = { row: number; column: string; message: string };
 
-export type CsvImportResult = { ok: true; templates: TemplateFields[] } | { ok: false; problems: CsvProblem[] };
+export type CsvImportResult =
+  | { ok: true; templates: TemplateFields[]; fields: TemplateFieldName[]; delimiter: CsvDelimiter }
+  | { ok: false; problems: CsvProblem[] };
 
-function readCell(spec: CsvColumnSpec, cell: string): CellResult<unknown> {
+function readCell(spec: CsvColumnSpec, guarded: string, style: NumberStyle): CellResult<unknown> {
+  // Every exported cell may carry the formula guard (templatesToCsv), so every cell loses it first.
+  const cell = unguardCell(guarded);
   switch (spec.kind) {
     case 'number':
-      return readNumberCell(cell, spec.column);
+      return readNumberCell(cell, spec.column, style);
     case 'list':
-      return readListCell(cell, spec.column);
+      return readListCell(cell, spec.column, style);
     case 'ports':
-      return readPortsCell(cell, spec.column);
+      return readPortsCell(cell, spec.column, style);
     case 'boolean':
       return readBooleanCell(cell, spec.column);
-    case 'rotation':
-      return { ok: true, value: cell.trim() === '' ? 'cw' : cell.trim().toLowerCase() };
+    case 'choice':
+      // An empty cell takes the field's default; a bad value is left to the schema's message.
+      return { ok: true, value: cell.trim() === '' ? undefined : cell.trim().toLowerCase() };
     case 'text':
-      return { ok: true, value: readTextCell(cell) };
+      return { ok: true, value: cell };
   }
 }
 
@@ -53,13 +60,13 @@ function headerProblems(headers: string[]): CsvProblem[] {
   return problems;
 }
 
-function rowToTemplate(record: Record<string, string>, row: number, problems: CsvProblem[]): TemplateFields | null {
+function rowToTemplate(record: Record<string, string>, row: number, problems: CsvProblem[], style: NumberStyle): TemplateFields | null {
   const raw: Record<string, unknown> = {};
   let cellsOk = true;
   for (const spec of CSV_COLUMN_SPECS) {
     const cell = record[spec.column];
     if (cell === undefined) continue;
-    const result = readCell(spec, cell);
+    const result = readCell(spec, cell, style);
     if (result.ok) raw[spec.field] = result.value;
     else {
       problems.push({ row, column: spec.column, message: result.message });
@@ -79,13 +86,18 @@ function rowToTemplate(record: Record<string, string>, row: number, problems: Cs
 }
 
 /**
- * Reads a template CSV (column set in csv-columns.ts). Every row is checked and
- * every problem reported; templates come back only when all rows pass.
+ * Reads a template CSV (column set in csv-columns.ts) separated by commas, semicolons or
+ * tabs (detected from the header row); a semicolon file may write numbers with a decimal
+ * comma. Every row is checked and every problem reported; templates come back only when
+ * all rows pass.
  */
-export function parseTemplatesCsv(text: string): CsvImportResult {
-  const parsed = Papa.parse<Record<string, string>>(text.replace(/^\uFEFF/, ''), {
+export function parseTemplatesCsv(source: string): CsvImportResult {
+  const text = source.replace(/^\uFEFF/, '');
+  const delimiter = detectDelimiter(text);
+  const style: NumberStyle = { decimalComma: delimiter === ';' };
+  const parsed = Papa.parse<Record<string, string>>(text, {
     header: true,
-    delimiter: ',',
+    delimiter,
     skipEmptyLines: 'greedy',
     transformHeader: (h) => h.trim().toLowerCase(),
   });
@@ -100,36 +112,36 @@ export function parseTemplatesCsv(text: string): CsvImportResult {
 
   const templates: TemplateFields[] = [];
   parsed.data.forEach((record, index) => {
-    const template = rowToTemplate(record, index + 2, problems);
+    const template = rowToTemplate(record, index + 2, problems, style);
     if (template) templates.push(template);
   });
-  return problems.length > 0 ? { ok: false, problems } : { ok: true, templates };
+  if (problems.length > 0) return { ok: false, problems };
+  // The columns the file has: an update from it changes those fields and leaves the others alone.
+  const fields = CSV_COLUMN_SPECS.filter((spec) => headers.includes(spec.column)).map((spec) => spec.field);
+  return { ok: true, templates, fields, delimiter };
 }
 
-function templateToRecord(t: TemplateFields): Record<CsvColumn, string> {
-  return {
-    name: writeTextCell(t.name),
-    description: writeTextCell(t.description),
-    bore_mm: writeNumberCell(t.boreMm),
-    stroke_mm: writeNumberCell(t.strokeMm),
-    rod_mm: writeNumberCell(t.rodMm),
-    rotation: t.rotation,
-    rim_diameter_mm: writeNumberCell(t.rimDiameterMm),
-    face_diameter_mm: writeNumberCell(t.faceDiameterMm),
-    flange_diameter_mm: writeNumberCell(t.flangeDiameterMm),
-    hub_hole_mm: writeNumberCell(t.hubHoleMm),
-    static_advance_deg_btdc: writeNumberCell(t.staticAdvanceDeg),
-    advance_marks_deg_btdc: writeListCell(t.advanceMarksDeg),
-    port_targets: writePortsCell(t.portTargets),
-    notes: writeTextCell(t.notes),
-    archived: t.archived ? 'true' : 'false',
-  };
+function writeCell(spec: CsvColumnSpec, value: unknown): string {
+  switch (spec.kind) {
+    case 'number':
+      return writeNumberCell(value as number | null);
+    case 'list':
+      return writeListCell(value as number[]);
+    case 'ports':
+      return writePortsCell(value as PortEvent[]);
+    case 'boolean':
+      return value ? 'true' : 'false';
+    case 'choice':
+      return String(value);
+    case 'text':
+      return value as string;
+  }
 }
 
-/** Writes templates in the documented column set, header first, CRLF line ends (RFC 4180). */
+/** Writes templates in the documented column set, header first, CRLF line ends (RFC 4180), every cell formula-guarded. */
 export function templatesToCsv(templates: TemplateFields[]): string {
   return Papa.unparse(
-    { fields: [...CSV_COLUMNS], data: templates.map((t) => CSV_COLUMNS.map((c) => templateToRecord(t)[c])) },
-    { newline: '\r\n', quotes: false },
+    { fields: [...CSV_COLUMNS], data: templates.map((t) => CSV_COLUMN_SPECS.map((spec) => guardCell(writeCell(spec, t[spec.field])))) },
+    { newline: '\r\n', quotes: false, escapeFormulae: false },
   );
 }

@@ -1,4 +1,5 @@
 import type { SheetRequestInput } from '@/lib/sheet/sheet-request';
+import { templateFields } from './template-fields';
 import { RING_CLEARANCE_MM, type TemplateFields } from './template-schema';
 
 export const TEMPLATE_SHEET_KINDS = ['wheel', 'ring', 'strip'] as const;
@@ -19,16 +20,24 @@ type SheetSource = Pick<
 >;
 
 /**
- * Which sheets a template can print, decided by the diameters it has:
- * a face diameter gives a degree wheel (disc on the flywheel face), a rim and a
- * flange diameter give a flange ring, a rim diameter gives a rim strip.
+ * The diameters each sheet needs: a face diameter gives a degree wheel (disc on
+ * the flywheel face), a rim and a flange diameter give a flange ring, a rim
+ * diameter gives a rim strip.
  */
+const SHEET_NEEDS: Record<TemplateSheetKind, ReadonlyArray<'faceDiameterMm' | 'rimDiameterMm' | 'flangeDiameterMm'>> = {
+  wheel: ['faceDiameterMm'],
+  ring: ['rimDiameterMm', 'flangeDiameterMm'],
+  strip: ['rimDiameterMm'],
+};
+
+/** Which sheets a template can print, decided by the diameters it has. */
 export function availableSheetKinds(t: SheetSource): TemplateSheetKind[] {
-  const kinds: TemplateSheetKind[] = [];
-  if (t.faceDiameterMm != null) kinds.push('wheel');
-  if (t.rimDiameterMm != null && t.flangeDiameterMm != null) kinds.push('ring');
-  if (t.rimDiameterMm != null) kinds.push('strip');
-  return kinds;
+  return TEMPLATE_SHEET_KINDS.filter((kind) => SHEET_NEEDS[kind].every((field) => t[field] != null));
+}
+
+/** "the flywheel rim diameter and the flange diameter": what a kind of sheet needs, by label. */
+export function sheetNeeds(kind: TemplateSheetKind): string {
+  return SHEET_NEEDS[kind].map((field) => `the ${templateFields[field].label.toLowerCase()}`).join(' and ');
 }
 
 /** The marks to draw: the template's advance marks, or its static advance alone when it lists none. */

@@ -1,4 +1,5 @@
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
+import { runWithSocketPeer } from '@/app/lib/client-address';
 import { POST as requestReset } from '@/app/api/v1/account/password-reset/route';
 import { POST as confirmReset } from '@/app/api/v1/account/password-reset/confirm/route';
 import { POST as signUpRoute } from '@/app/api/v1/account/sign-up/route';
@@ -76,7 +77,7 @@ describe('password reset links', () => {
     expect(forged.json.error).toBe(TOKEN_REFUSAL_MESSAGES.unknown);
     const malformed = await callRoute(confirmReset, { body: { token: 'x', password: 'a fresh long password' } });
     expect(malformed.status).toBe(400);
-    expect(malformed.json.issues).toEqual([{ path: 'token', message: expect.stringContaining('Link code (token)') }]);
+    expect(malformed.json.issues).toEqual([{ path: 'token', message: expect.stringContaining('Link code is not valid') }]);
   });
 
   it('store only a SHA-256 of the token, never the token', async () => {
@@ -107,10 +108,11 @@ describe('password reset links', () => {
   });
 
   it('are limited to 10 requests per client address per hour, whatever the addresses asked for', async () => {
-    const headers = { 'x-forwarded-for': '203.0.113.7' }; // TEST-NET-3, RFC 5737
     const statuses = [];
     for (let i = 0; i < 11; i++) {
-      statuses.push((await callRoute(requestReset, { body: { email: `someone-${i}@world.test` }, headers })).status);
+      // One socket peer (TEST-NET-3, RFC 5737) rotating a forged X-Forwarded-For: still one client.
+      const headers = { 'x-forwarded-for': `198.51.100.${i}` };
+      statuses.push((await runWithSocketPeer('203.0.113.7', () => callRoute(requestReset, { body: { email: `someone-${i}@world.test` }, headers }))).status);
     }
     expect(statuses.slice(0, 10).every((s) => s === 202)).toBe(true);
     expect(statuses[10]).toBe(429);
@@ -137,12 +139,12 @@ describe('e-mail verification links', () => {
     expect([late.status, late.json.error]).toEqual([400, TOKEN_REFUSAL_MESSAGES.expired]);
   });
 
-  it('sign-ups are limited to 20 per client address per hour, then 429', async () => {
-    const headers = { 'x-forwarded-for': '198.51.100.20' }; // TEST-NET-2, RFC 5737
+  it('sign-ups are limited to 20 per client address per hour, then 429, however X-Forwarded-For rotates', async () => {
     const statuses: number[] = [];
     for (let i = 0; i < 21; i++) {
       const body = { name: `N${i}`, email: `n${i}@world.test`, password: 'a long password' };
-      statuses.push((await callRoute(signUpRoute, { body, headers })).status);
+      const headers = { 'x-forwarded-for': `203.0.113.${i}` }; // forged, rotating (TEST-NET-3, RFC 5737)
+      statuses.push((await runWithSocketPeer('198.51.100.20', () => callRoute(signUpRoute, { body, headers }))).status);
     }
     expect(statuses.filter((s) => s === 201)).toHaveLength(20);
     expect(statuses[20]).toBe(429);

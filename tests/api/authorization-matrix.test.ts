@@ -103,6 +103,10 @@ async function runRoute(row: (typeof ROUTE_MATRIX)[number], actor: Actor): Promi
       init.body = JSON.stringify(call.body);
       init.headers = { 'content-type': 'application/json' };
     }
+    if (call.raw) {
+      init.body = call.raw.body;
+      init.headers = { 'content-type': call.raw.type };
+    }
     const response = await handler(new Request(urlFor(row.file, params, call.search), init), { params: Promise.resolve(params) });
     return { status: response.status, body: await response.text() };
   } finally {

@@ -2,6 +2,8 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { POST as confirmReset } from '@/app/api/v1/account/password-reset/confirm/route';
 import { POST as requestReset } from '@/app/api/v1/account/password-reset/route';
 import { POST as signUpRoute } from '@/app/api/v1/account/sign-up/route';
+import { authOptions } from '@/app/lib/auth-options';
+import { runWithSocketPeer } from '@/app/lib/client-address';
 import { RATE_LIMITED_CODE, signInWithPassword } from '@/app/lib/password-sign-in';
 import { resetAllLimits } from '@/app/lib/rate-limit';
 import { TABLES } from '@/db/tables';
@@ -60,7 +62,7 @@ describe('passwords', () => {
 
   it('are refused by field when too short or over bcrypt’s 72 bytes', async () => {
     const short = await callRoute(signUpRoute, { body: { name: 'S', email: 's@world.test', password: 'short' } });
-    expect(short.json.issues).toEqual([{ path: 'password', message: 'Password (password) must be at least 10 characters' }]);
+    expect(short.json.issues).toEqual([{ path: 'password', message: 'Password must be at least 10 characters' }]);
     const long = await callRoute(signUpRoute, { body: { name: 'L', email: 'l@world.test', password: 'é'.repeat(40) } });
     expect(long.json.issues).toEqual([{ path: 'password', message: expect.stringContaining('at most 72 bytes') }]);
   });
@@ -93,11 +95,30 @@ describe('sign-in', () => {
     expect(JSON.parse(rows[0].detail)).toEqual({ address: '198.51.100.4' });
   });
 
-  it('locks an account after 5 failed attempts, even with the right password, from any address', async () => {
+  it('locks an account for one client address after 5 failed attempts, not for the owner elsewhere', async () => {
+    // Issue 11, hole 7: five wrong passwords from an attacker's address (RFC 5737 documentation ranges).
     const { email } = world.users.technician;
-    for (let i = 0; i < 5; i++) {
-      expect(await signInWithPassword({ email, password: 'wrong password' }, `192.0.2.${i}`)).toBeNull();
-    }
+    for (let i = 0; i < 5; i++) expect(await signInWithPassword({ email, password: 'wrong password' }, '203.0.113.66')).toBeNull();
+    // The sixth, from the same address, is refused even with the right password…
+    await expect(signInWithPassword({ email, password: WORLD_PASSWORD }, '203.0.113.66')).rejects.toThrow(RATE_LIMITED_CODE);
+    // …and a sixth wrong one from a second address does not lock the owner at the first (their own) address out.
+    expect(await signInWithPassword({ email, password: 'wrong password' }, '198.51.100.77')).toBeNull();
+    expect(await signInWithPassword({ email, password: WORLD_PASSWORD }, '192.0.2.10')).not.toBeNull();
+  });
+
+  it('counts the socket address, so rotating a forged X-Forwarded-For does not escape the limit (issue 11, hole 4)', async () => {
+    type Authorize = (credentials: unknown, req: { headers: Record<string, string> }) => Promise<unknown>;
+    const provider = authOptions.providers[0] as unknown as { options: { authorize: Authorize } };
+    const { email } = world.users.technician;
+    const attempt = (password: string, i: number) =>
+      runWithSocketPeer('203.0.113.9', () => provider.options.authorize({ email, password }, { headers: { 'x-forwarded-for': `198.51.100.${i}` } }));
+    for (let i = 0; i < 5; i++) expect(await attempt('wrong password', i)).toBeNull();
+    await expect(attempt(WORLD_PASSWORD, 99)).rejects.toThrow(RATE_LIMITED_CODE);
+  });
+
+  it('still caps one account at 100 failures an hour spread over many addresses', async () => {
+    const { email } = world.users.technician;
+    for (let i = 0; i < 100; i++) await signInWithPassword({ email, password: 'wrong' }, `10.0.${Math.floor(i / 4)}.${i % 4}`);
     await expect(signInWithPassword({ email, password: WORLD_PASSWORD }, '192.0.2.99')).rejects.toThrow(RATE_LIMITED_CODE);
     // Another account is not affected.
     expect(await signInWithPassword({ email: world.users.viewer.email, password: WORLD_PASSWORD }, '192.0.2.99')).not.toBeNull();

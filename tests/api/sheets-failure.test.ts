@@ -13,7 +13,7 @@ describe('POST /api/v1/sheets when drawing fails', () => {
   it('answers 500 in the JSON error shape, without the message or a stack', async () => {
     vi.spyOn(console, 'error').mockImplementation(() => {});
     const response = await POST(
-      new Request('http://localhost/api/v1/sheets', { method: 'POST', body: JSON.stringify({ kind: 'wheel', diameterMm: 100 }) }),
+      new Request('http://localhost/api/v1/sheets', { method: 'POST', headers: { 'content-type': 'application/json' }, body: JSON.stringify({ kind: 'wheel', diameterMm: 100 }) }),
     );
     expect(response.status).toBe(500);
     expect(response.headers.get('content-type')).toMatch(/application\/json/);

@@ -93,6 +93,66 @@ describe('POST /api/v1/sheets refuses bad requests by field, with the allowed ra
   });
 });
 
+/**
+ * Requests inside every allowed range, written out from the sheet request schema (lib/sheet/sheet-request.ts):
+ * diameters 20–600 mm, hub hole under the disc, ring inner under outer, strip width 6–40 mm, paper 0–0.5 mm,
+ * advance marks 0–60° BTDC, scribe chart 0–180° in steps of 0.1–10°, printer scale 0.9–1.1.
+ */
+const mm = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+const common = {
+  rotation: fc.constantFrom('cw', 'ccw'),
+  carrier: fc.constantFrom('rotating', 'stationary'),
+  numbering: fc.constantFrom('split', 'full'),
+  paper: fc.constantFrom('A4', 'A3', 'Letter', 'Legal', 'Tabloid'),
+  orientation: fc.constantFrom('portrait', 'landscape'),
+  printerScaleX: mm(0.9, 1.1),
+  printerScaleY: mm(0.9, 1.1),
+  advanceMarksDeg: fc.array(mm(0, 60), { maxLength: 8 }),
+  title: fc.string({ maxLength: 80 }),
+};
+const validRequest = fc.oneof(
+  fc.record({ kind: fc.constant('wheel'), diameterMm: mm(20, 600), ...common }).chain((wheel) =>
+    mm(0, wheel.diameterMm * 0.9).map((hubHoleMm) => ({ ...wheel, hubHoleMm })),
+  ),
+  fc.record({ kind: fc.constant('ring'), innerDiameterMm: mm(20, 590), ...common }).chain((ring) =>
+    mm(ring.innerDiameterMm + 1, 600).map((outerDiameterMm) => ({ ...ring, outerDiameterMm })),
+  ),
+  fc.record({ kind: fc.constant('strip'), diameterMm: mm(20, 600), stripWidthMm: mm(6, 40), paperThicknessMm: mm(0, 0.5), ...common }),
+  fc.record({ kind: fc.constant('scribe'), diameterMm: mm(20, 600), fromDeg: mm(0, 90), stepDeg: mm(1, 10), ...common }).chain((chart) =>
+    mm(chart.fromDeg, 180).map((toDeg) => ({ ...chart, toDeg })),
+  ),
+  fc.record({ kind: fc.constant('check'), ...common }),
+);
+
+describe('POST /api/v1/sheets draws every valid request (fast-check)', () => {
+  it('answers 200 with a true-scale SVG for any request inside the allowed ranges', async () => {
+    await fc.assert(
+      fc.asyncProperty(validRequest, async (body) => {
+        const response = await post({ ...body, format: 'svg' });
+        const text = await response.text();
+        expect(response.status, text.slice(0, 300)).toBe(200);
+        expect(response.headers.get('content-type')).toMatch(/^image\/svg\+xml/);
+        expect(text).toMatch(/^<svg[^>]* width="[\d.]+mm" height="[\d.]+mm"/); // CSS absolute length unit mm
+        expect(text).not.toMatch(/NaN|Infinity/);
+      }),
+      { numRuns: 60 },
+    );
+  });
+
+  it('answers 200 with a PDF for requests inside the allowed ranges', async () => {
+    await fc.assert(
+      fc.asyncProperty(validRequest, async (body) => {
+        const response = await post({ ...body, format: 'pdf' });
+        expect(response.status).toBe(200);
+        expect(response.headers.get('content-type')).toBe('application/pdf');
+        const bytes = new Uint8Array(await response.arrayBuffer());
+        expect(new TextDecoder().decode(bytes.slice(0, 5))).toBe('%PDF-'); // ISO 32000-1 §7.5.2 file header
+      }),
+      { numRuns: 8 },
+    );
+  });
+});
+
 describe('POST /api/v1/sheets answers sheets', () => {
   it('a PDF by default, as an attachment named after kind, diameter and title, not cached', async () => {
     const response = await post({ kind: 'wheel', diameterMm: 100, advanceMarksDeg: [18], title: 'Büro Rad "7" <b>' });
@@ -115,6 +175,15 @@ describe('POST /api/v1/sheets answers sheets', () => {
     expect(svg.startsWith('<svg')).toBe(true);
     expect(svg).toMatch(/^<svg[^>]* width="[\d.]+mm" height="[\d.]+mm"/); // CSS absolute length unit mm
     expect(svg).not.toContain('NaN');
+  });
+
+  it('says in its answer what it could not draw and why (X-Sheet-Layout-Notes), and nothing when all is drawn', async () => {
+    const response = await post({ kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10], advanceMarksDeg: [18, 55], format: 'svg' });
+    expect(response.status).toBe(200);
+    const notes = JSON.parse(decodeURIComponent(response.headers.get('x-sheet-layout-notes') ?? '')) as string[];
+    expect(notes.find((note) => note.startsWith('Not drawn, outside the window'))).toContain('advance mark 55° BTDC');
+    const plain = await post({ kind: 'wheel', diameterMm: 150, advanceMarksDeg: [18], portEvents: [{ name: 'EX', opensCrankDeg: 98, closesCrankDeg: 262 }], format: 'svg' });
+    expect(JSON.parse(decodeURIComponent(plain.headers.get('x-sheet-layout-notes') ?? ''))).toEqual([]);
   });
 
   it('a check sheet has no diameter in its file name', async () => {

@@ -72,12 +72,16 @@ export const TEMPLATE_ROUTE_CASES: RouteCase[] = [
     ...guardedBy('template.edit', 200),
   },
   { file: `${T}/[id]/photos/route.ts`, method: 'GET', call: withTemplate(), ...guardedBy('template.read', 200) },
-  // A JSON body passes the role check and is then refused as not a form upload (415).
-  { file: `${T}/[id]/photos/route.ts`, method: 'POST', call: withTemplate({ body: {} }), ...guardedBy('template.edit', 415) },
+  // A form upload without a photo passes the role check and is then refused (400).
+  {
+    file: `${T}/[id]/photos/route.ts`,
+    method: 'POST',
+    call: withTemplate({ raw: { type: 'multipart/form-data; boundary=matrix', body: '--matrix\r\nContent-Disposition: form-data; name="caption"\r\n\r\nx\r\n--matrix--\r\n' } }),
+    ...guardedBy('template.edit', 400),
+  },
   { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'GET', call: withPhoto, ...guardedBy('template.read', 200) },
   { file: `${T}/[id]/photos/[photoId]/route.ts`, method: 'DELETE', call: withPhoto, ...guardedBy('template.edit', 204) },
   { file: `${T}/[id]/sheet/route.ts`, method: 'GET', call: withTemplate({ search: '?kind=strip&format=svg' }), ...guardedBy('sheet.print', 200) },
-  // JSON is not CSV: past the role check the import answers 415.
-  { file: `${T}/import/route.ts`, method: 'POST', call: () => ({ body: {} }), ...guardedBy('template.import', 415) },
+  { file: `${T}/import/route.ts`, method: 'POST', call: () => ({ raw: { type: 'text/csv', body: 'name\nMatrix import\n' } }), ...guardedBy('template.import', 201) },
   { file: `${T}/export/route.ts`, method: 'GET', ...guardedBy('template.read', 200) },
 ];

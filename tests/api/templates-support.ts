@@ -44,11 +44,19 @@ export const api = {
     photo.GET(json('GET', `${BASE}/${ws}/templates/${id}/photos/${photoId}${size ? `?size=${size}` : ''}`), p({ workspace: ws, id: String(id), photoId: String(photoId) })),
   deletePhoto: (ws: string, id: number | string, photoId: number) =>
     photo.DELETE(json('DELETE', `${BASE}/${ws}/templates/${id}/photos/${photoId}`), p({ workspace: ws, id: String(id), photoId: String(photoId) })),
-  importCsv: (ws: string, csv: string) =>
-    importRoute.POST(new Request(`${BASE}/${ws}/templates/import`, { method: 'POST', headers: { 'content-type': 'text/csv' }, body: csv }), p({ workspace: ws })),
-  importForm: (ws: string, csv: string) => {
+  importCsv: (ws: string, csv: string | Uint8Array, options: { query?: string; headers?: Record<string, string> } = {}) =>
+    importRoute.POST(
+      new Request(`${BASE}/${ws}/templates/import${options.query ?? ''}`, {
+        method: 'POST',
+        headers: { 'content-type': 'text/csv', ...options.headers },
+        body: csv as BodyInit,
+      }),
+      p({ workspace: ws }),
+    ),
+  importForm: (ws: string, csv: string, fields: Record<string, string> = {}) => {
     const form = new FormData();
     form.set('file', new Blob([csv], { type: 'text/csv' }), 'templates.csv');
+    for (const [name, value] of Object.entries(fields)) form.set(name, value);
     return importRoute.POST(new Request(`${BASE}/${ws}/templates/import`, { method: 'POST', body: form }), p({ workspace: ws }));
   },
   exportCsv: (ws: string) => exportRoute.GET(json('GET', `${BASE}/${ws}/templates/export`), p({ workspace: ws })),

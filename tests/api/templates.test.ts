@@ -96,7 +96,7 @@ describe('template validation', () => {
     const body = await response.json();
     expect(body.error).toBe('Some fields are not valid');
     const byPath = Object.fromEntries(body.issues.map((i: { path: string; message: string }) => [i.path, i.message]));
-    expect(byPath.boreMm).toMatch(/Bore \(boreMm\) must be at most 150 mm \(allowed 10–150 mm\)/);
+    expect(byPath.boreMm).toMatch(/Bore must be at most 150 mm \(allowed 10–150 mm\)/);
     expect(byPath.rotation).toMatch(/cw, ccw/);
     expect(byPath.name).toMatch(/must not be empty/);
   });

@@ -75,6 +75,24 @@ describe('owners manage members', () => {
     expect(await roleOf(world.users.viewer.id)).toBeUndefined();
   });
 
+  it('the invitation e-mail says until when it is valid, in the inviter\'s language and the stated zone', async () => {
+    vi.useFakeTimers({ toFake: ['Date'] });
+    vi.setSystemTime(new Date('2026-12-01T12:00:00Z'));
+    try {
+      const res = await callRoute(inviteRoute, {
+        params: { workspace: world.shop.slug },
+        body: { email: 'dated@world.test', role: 'viewer' },
+        headers: { 'accept-language': 'en-GB,en;q=0.8' },
+      });
+      expect(res.status).toBe(201);
+    } finally {
+      vi.useRealTimers();
+    }
+    const [message] = await mail.inbox('dated@world.test');
+    // Invitations last 7 days (lib/one-time-token.ts): 1 Dec 12:00 UTC + 7 days, in CLDR en-GB "d MMM y, HH:mm z".
+    expect(message?.text).toContain('valid for 7 days, until 8 Dec 2026, 12:00 UTC, once');
+  });
+
   it('a role outside the three is refused by field', async () => {
     const res = await callRoute(roleRoute, {
       method: 'PATCH',
@@ -82,7 +100,7 @@ describe('owners manage members', () => {
       body: { role: 'admin' },
     });
     expect(res.status).toBe(400);
-    expect(res.json.issues).toEqual([{ path: 'role', message: 'Role (role) must be one of: viewer, technician, owner' }]);
+    expect(res.json.issues).toEqual([{ path: 'role', message: 'Role must be one of: viewer, technician, owner' }]);
   });
 
   it('members of one workspace cannot reach another workspace’s members through their own', async () => {
@@ -118,7 +136,7 @@ describe('printer profiles per workspace', () => {
       body: { name: 'Bad', printerScaleX: 1.5, printerScaleY: 1 },
     });
     expect(res.status).toBe(400);
-    expect(res.json.issues).toEqual([{ path: 'printerScaleX', message: 'Printer scale X (printerScaleX) must be at most 1.1 (allowed 0.9–1.1)' }]);
+    expect(res.json.issues).toEqual([{ path: 'printerScaleX', message: 'Printer scale X must be at most 1.1 (allowed 0.9–1.1)' }]);
   });
 
   it('of another workspace are 404 through one’s own workspace, and stay where they are', async () => {

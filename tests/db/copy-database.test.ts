@@ -2,8 +2,11 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { copySqliteToPostgres } from '@/db/copy-database';
 import { seed as seedShop } from '@/db/seeds/01_demo_shop';
 import { seed as seedTemplates } from '@/db/seeds/02_demo_templates';
+import { seed as seedBuilds } from '@/db/seeds/03_demo_builds';
 import { TABLES } from '@/db/tables';
 import { createTempDb, testPostgresUrl, type TempDb } from '../support/temp-db';
+
+if (!testPostgresUrl()) throw new Error('Run this file in the PostgreSQL pass: bash scripts/test-postgres.sh');
 
 const made: TempDb[] = [];
 afterEach(async () => {
@@ -19,6 +22,7 @@ async function sqliteWithDemoData(): Promise<TempDb> {
     made.push(temp);
     await seedShop(temp.knex);
     await seedTemplates(temp.knex);
+    await seedBuilds(temp.knex);
     return temp;
   } finally {
     if (saved !== undefined) process.env.RIMSCALE_TEST_DATABASE_URL = saved;
@@ -44,11 +48,16 @@ function comparable(row: Record<string, unknown>): Record<string, unknown> {
   );
 }
 
-describe.skipIf(!testPostgresUrl())('copying the demo shop from SQLite to PostgreSQL (npm run db:copy-to-postgres)', () => {
+describe('copying the demo shop from SQLite to PostgreSQL (npm run db:copy-to-postgres)', () => {
   it('copies every row of every table unchanged, and new rows get fresh ids afterwards', async () => {
     const sqlite = await sqliteWithDemoData();
+    // Workspaces and printer profiles refer to each other: the copy must fill this in after both exist.
+    const profile = await sqlite.knex(TABLES.printerProfiles).first();
+    await sqlite.knex(TABLES.workspaces).where({ id: profile.workspace_id }).update({ default_printer_profile_id: profile.id });
     const postgres = await emptyPostgres();
     const report = await copySqliteToPostgres(sqlite.knex, postgres.knex);
+    const copiedShop = await postgres.knex(TABLES.workspaces).where({ id: profile.workspace_id }).first();
+    expect(copiedShop.default_printer_profile_id).toBe(profile.id);
 
     const templates = report.find((r) => r.table === TABLES.templates);
     expect(templates?.rows).toBe(12);

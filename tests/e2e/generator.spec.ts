@@ -22,7 +22,7 @@ test('the preview follows the diameter and the kind as you type', async ({ page 
   await expect(page.getByRole('heading', { level: 1 })).toBeVisible();
   const diameter = page.getByLabel('Diameter', { exact: true });
 
-  // PRODUCT.md §2: graduations every 0.5° when the pitch allows → 360 / 0.5 = 720 lines on a
+  // DEVELOPERS.md, "Graduation levels": graduations every 0.5° when the pitch allows → 360 / 0.5 = 720 lines on a
   // 300 mm wheel (0.5° of arc at r ≈ 150 mm is ≈ 1.3 mm, over the 0.6 mm minimum).
   await diameter.fill('300');
   await expect(graduations(page)).toHaveCount(720, { timeout: 15_000 });
@@ -34,7 +34,7 @@ test('the preview follows the diameter and the kind as you type', async ({ page 
   await expect(page.getByTestId('layout-warnings')).toBeVisible();
 
   // A rim strip for D = 100 mm, t = 0.10 mm: 1° along π·(D + t) is π·100.1 / 360 ≈ 0.874 mm (kept, ≥ 0.6 mm)
-  // and 0.5° is ≈ 0.437 mm (dropped), so the graduations sit at 360 distinct crank angles (PRODUCT.md §2–3).
+  // and 0.5° is ≈ 0.437 mm (dropped), so the graduations sit at 360 distinct crank angles (DEVELOPERS.md, "Graduation levels").
   await page.getByRole('radio', { name: /^Rim strip/ }).check();
   await expect(page.getByLabel('Strip width')).toBeVisible();
   await diameter.fill('100');
@@ -96,7 +96,7 @@ test('a 700 mm diameter is refused beside the field with the schema’s range', 
   const errorId = (await diameter.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
   expect(errorId).toBeTruthy();
   const error = page.locator(`[id="${errorId}"]`);
-  await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
+  await expect(error).toHaveText(/Diameter must be at most 600 mm \(allowed 20–600 mm\)/);
   await expect(error).toHaveAttribute('aria-live', 'polite');
   await expect(diameter).toHaveAttribute('aria-invalid', 'true');
   // The preview keeps the last good drawing, dimmed, and lists what it waits for.
@@ -105,7 +105,7 @@ test('a 700 mm diameter is refused beside the field with the schema’s range', 
 
   // An empty field gets the schema's message too, never NaN.
   await diameter.fill('');
-  await expect(error).toHaveText(/Diameter \(diameterMm\) must be a number, 20–600 mm/);
+  await expect(error).toHaveText(/Diameter must be a number, 20–600 mm/);
   await expect(page.getByText('NaN')).toHaveCount(0);
 
   // Downloading with the bad field keeps the user on the form with a message.
@@ -135,7 +135,7 @@ test('with the inch toggle a too-large diameter is refused with the range in inc
   await diameter.fill('30');
   await page.getByRole('radio', { name: 'mm', exact: true }).check({ force: true });
   await expect(diameter).toHaveValue('762');
-  await expect(error).toHaveText(/Diameter \(diameterMm\) must be at most 600 mm \(allowed 20–600 mm\)/);
+  await expect(error).toHaveText(/Diameter must be at most 600 mm \(allowed 20–600 mm\)/);
 });
 
 test('Download PDF gives a PDF of the chosen page size (Letter landscape = 792 × 612 pt)', async ({ page }) => {
@@ -202,14 +202,14 @@ test('a 400 answer from the sheet API is listed field by field', async ({ page }
     route.fulfill({
       status: 400,
       contentType: 'application/json',
-      body: JSON.stringify({ error: 'Some fields are not valid', issues: [{ path: 'diameterMm', message: 'Diameter (diameterMm) must be at most 600 mm (allowed 20–600 mm)' }] }),
+      body: JSON.stringify({ error: 'Some fields are not valid', issues: [{ path: 'diameterMm', message: 'Diameter must be at most 600 mm (allowed 20–600 mm)' }] }),
     }),
   );
   await page.goto('/');
   await page.getByRole('button', { name: 'Download SVG' }).click();
   const alert = page.getByRole('region', { name: 'Download' }).getByRole('alert');
   await expect(alert).toContainText('Some fields are not valid');
-  await expect(alert).toContainText('diameterMm: Diameter (diameterMm) must be at most 600 mm');
+  await expect(alert).toContainText('diameterMm: Diameter must be at most 600 mm');
 });
 
 test('the page shows the print-size line and the safety cautions', async ({ page }) => {

@@ -2,7 +2,7 @@ import { readFile } from 'node:fs/promises';
 import { expect, test } from '@playwright/test';
 import { PDFParse } from 'pdf-parse';
 
-// The expected factors follow the scale-check sheet's own definition (PRODUCT.md §3,
+// The expected factors follow the scale-check sheet's own definition (DEVELOPERS.md, "Sheets",
 // issue 3): 100 mm bars, factor = measured ÷ 100, bars outside 90–110 mm refused.
 
 test('measuring 98 and 100 mm stores a profile that the sheet maker offers and sends', async ({ page }) => {
@@ -57,7 +57,7 @@ test('a bar of 80 mm is refused: the printer is probably scaling to fit the page
   await page.getByLabel('Vertical bar measures').fill('100');
   await page.getByRole('button', { name: 'Save profile' }).click();
   const errorId = (await horizontal.getAttribute('aria-describedby'))?.split(' ').find((id) => id.endsWith('-error'));
-  await expect(page.locator(`[id="${errorId}"]`)).toHaveText(/under 90 mm \(allowed 90–110 mm\).*probably scaling to fit the page/);
+  await expect(page.locator(`[id="${errorId}"]`)).toHaveText(/Horizontal bar must be at least 90 mm \(allowed 90–110 mm\).*probably scaling to fit the page/);
   await expect(horizontal).toHaveAttribute('aria-invalid', 'true');
   await expect(page.getByText('No printer profiles saved in this browser yet.')).toBeVisible();
 });

@@ -1,3 +1,5 @@
+import { readFileSync } from 'node:fs';
+import path from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { ACTIONS, can, weakestRoleFor } from '@/lib/access-policy';
 import { ROLES } from '@/lib/roles';
@@ -31,5 +33,17 @@ describe('the role policy', () => {
     expect(can('viewer', 'sheet.print')).toBe(true);
     expect(can('viewer', 'template.edit')).toBe(false);
     expect(can('technician', 'template.delete')).toBe(false);
+  });
+
+  it('agrees with the role table in DEVELOPERS.md, "Roles", row for row', () => {
+    const table = [
+      `| action | ${ROLES.join(' | ')} |`,
+      `| --- | ${ROLES.map(() => '---').join(' | ')} |`,
+      ...ACTIONS.map((action) => `| \`${action}\` | ${ROLES.map((role) => (can(role, action) ? 'yes' : '—')).join(' | ')} |`),
+    ].join('\n');
+    const guide = readFileSync(path.join(process.cwd(), 'DEVELOPERS.md'), 'utf8');
+    const roles = guide.slice(guide.indexOf('## Roles'), guide.indexOf('## Layers'));
+    const written = roles.split('\n').filter((line) => line.startsWith('|')).join('\n');
+    expect(written, `DEVELOPERS.md, "Roles" should hold this table:\n${table}\n`).toBe(table);
   });
 });

@@ -55,7 +55,7 @@ describe('prefillFromSearchParams', () => {
   it('ignores bad JSON in portEvents without throwing', () => {
     const { values, ignored } = prefillFromSearchParams(new URLSearchParams({ portEvents: '[{"name":' }));
     expect(values.portEvents).toBeUndefined();
-    expect(ignored).toEqual([{ param: 'portEvents', message: 'Port events (portEvents) are not valid JSON' }]);
+    expect(ignored).toEqual([{ param: 'portEvents', message: 'Port events are not valid JSON' }]);
   });
 
   it('keeps the valid port events and drops the broken ones', () => {
@@ -67,14 +67,14 @@ describe('prefillFromSearchParams', () => {
     const { values, ignored } = prefillFromSearchParams(new URLSearchParams({ portEvents: JSON.stringify(events) }));
     expect(values.portEvents).toEqual([events[0]]);
     expect(ignored).toHaveLength(2);
-    expect(ignored[0]?.message).toMatch(/opensCrankDeg.*360/);
+    expect(ignored[0]?.message).toMatch(/Port opening angle.*360/);
   });
 
   it('refuses out-of-range numbers (diameter 700 mm) and names the field and range', () => {
     const { values, ignored } = prefillFromSearchParams(new URLSearchParams({ diameterMm: '700', hubHoleMm: '-3' }));
     expect(values).toEqual({});
     expect(ignored.map((i) => i.param)).toEqual(['diameterMm', 'hubHoleMm']);
-    expect(ignored[0]?.message).toMatch(/diameterMm.*600 mm/);
+    expect(ignored[0]?.message).toMatch(/Diameter.*600 mm/);
   });
 
   it('refuses non-numbers and unknown choices', () => {

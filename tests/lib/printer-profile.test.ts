@@ -8,7 +8,7 @@ import {
   scaleFromMeasuredMm,
 } from '@/lib/printer-profile';
 
-// Source for every expected factor: the scale-check sheet's own definition (PRODUCT.md §3
+// Source for every expected factor: the scale-check sheet's own definition (DEVELOPERS.md, "Sheets"
 // and issue 3): the bars are 100 mm long, the profile holds measured ÷ true length per axis,
 // and a bar under 90 or over 110 mm means the printer scaled the page to fit.
 
@@ -43,7 +43,7 @@ describe('profileFromMeasurement', () => {
     if (result.ok) return;
     expect(result.issues).toHaveLength(1);
     expect(result.issues[0]?.path).toBe('measuredXMm');
-    expect(result.issues[0]?.message).toMatch(/measuredXMm/);
+    expect(result.issues[0]?.message).toMatch(/^Horizontal bar must be at least 90 mm/);
     expect(result.issues[0]?.message).toMatch(/90–110 mm/);
     expect(result.issues[0]?.message).toMatch(/probably scaling to fit the page/);
   });
@@ -51,7 +51,7 @@ describe('profileFromMeasurement', () => {
   it('refuses a vertical bar over 110 mm with the same hint', () => {
     const result = profileFromMeasurement({ name: 'Stretcher', measuredXMm: 100, measuredYMm: 110.1 });
     expect(!result.ok && result.issues.map((i) => i.path)).toEqual(['measuredYMm']);
-    expect(!result.ok && result.issues[0]?.message).toMatch(/over 110 mm.*probably scaling to fit the page/);
+    expect(!result.ok && result.issues[0]?.message).toMatch(/^Vertical bar must be at most 110 mm.*probably scaling to fit the page/);
   });
 
   it('refuses NaN, text and a blank name with messages instead of throwing', () => {

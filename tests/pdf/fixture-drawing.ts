@@ -1,6 +1,5 @@
 import type { Drawing, LineShape, PageLayout, Shape } from '@/lib/sheet/drawing';
 import { pageSizeMm, type Orientation, type PaperName } from '@/lib/sheet/paper';
-import { MM_PER_INCH } from '@/lib/units';
 
 /**
  * Hand-made drawings for the PDF renderer tests, independent of the layout code:
@@ -19,7 +18,7 @@ function tick(crankDeg: number, scaleX = 1, scaleY = 1): LineShape {
 }
 
 function checkBars(x0: number, y0: number, scaleX: number, scaleY: number): Shape[] {
-  const inchMm = 4 * MM_PER_INCH;
+  const inchMm = 101.6; // 4 in × 25.4 mm, the international inch of 1959
   return [
     { type: 'line', x1Mm: x0, y1Mm: y0, x2Mm: x0 + 100 * scaleX, y2Mm: y0, strokeMm: 0.25, data: { checkMm: 100, axis: 'x' } },
     { type: 'line', x1Mm: x0, y1Mm: y0 + 6, x2Mm: x0 + inchMm * scaleX, y2Mm: y0 + 6, strokeMm: 0.25, data: { checkMm: inchMm, axis: 'x' } },

@@ -12,6 +12,7 @@ import { HOLDING_ROLE, type Action } from '@/lib/access-policy';
 import type { AccessWorld } from './access-world';
 import { guardedBy, type Actor } from './policy-expectations';
 import { TEMPLATE_ROUTE_CASES } from '../api/templates-route-cases';
+import { BUILD_ROUTE_CASES } from '../api/builds-route-cases';
 
 export { ACTORS, type Actor } from './policy-expectations';
 export type Method = 'GET' | 'POST' | 'PUT' | 'PATCH' | 'DELETE';
@@ -20,6 +21,8 @@ export type RouteCall = {
   /** Values of the route's dynamic segments; `workspace` defaults to the world's shop. */
   params?: Record<string, string>;
   body?: unknown;
+  /** A body that is not JSON, sent as is with its Content-Type. */
+  raw?: { type: string; body: string };
   /** Appended to the URL, e.g. '?q=50'. */
   search?: string;
 };
@@ -81,6 +84,11 @@ export const ROUTE_MATRIX: RouteCase[] = [
     file: `${V1}/account/verify-email/resend/route.ts`,
     method: 'POST',
     expected: { signedOut: 401, viewer: 202, technician: 202, owner: 202, outsider: 202 },
+  },
+  {
+    file: `${V1}/account/sign-out-everywhere/route.ts`,
+    method: 'POST',
+    expected: { signedOut: 401, viewer: 200, technician: 200, owner: 200, outsider: 200 },
   },
   {
     file: `${V1}/account/password-reset/route.ts`,
@@ -180,9 +188,19 @@ export const ROUTE_MATRIX: RouteCase[] = [
     },
     ...guardedBy('printer-profile.edit', 204),
   },
+  { file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`, method: 'GET', ...guardedBy('printer-profile.read', 200) },
+  {
+    file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`,
+    method: 'PUT',
+    call: () => ({ body: { profileId: null } }),
+    ...guardedBy('printer-profile.set-default', 200),
+  },
 
   // Template library (issue 6).
   ...TEMPLATE_ROUTE_CASES,
+
+  // Build records (issue 9).
+  ...BUILD_ROUTE_CASES,
 ];
 
 /** Server actions that check the session; empty while every write goes through a route handler. */

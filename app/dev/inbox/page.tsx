@@ -1,13 +1,13 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
-import { fakeInbox, mailFakeUrl } from '@/app/lib/mail-fake-inbox';
+import { fakeInbox, inboxForThisRequest } from '@/app/lib/mail-fake-inbox';
 
 export const metadata: Metadata = { title: 'Development inbox', robots: { index: false } };
 export const dynamic = 'force-dynamic';
 
-/** Mail caught by the local SMTP fake (scripts/mail-fake.ts); absent unless MAIL_FAKE_URL is set. */
+/** Mail caught by the local SMTP fake (scripts/mail-fake.ts): only with the fake in use, only to this machine. */
 export default async function DevInboxPage() {
-  const base = mailFakeUrl();
+  const base = inboxForThisRequest();
   if (!base) notFound();
   let messages: Awaited<ReturnType<typeof fakeInbox>> = [];
   let problem: string | undefined;

@@ -1,6 +1,8 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
+import { formatDate, formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
 import { WorkspaceProfiles } from '@/components/printer-check/workspace-profiles';
 import { ShopNameForm } from '@/components/workspace/create-shop-form';
@@ -27,11 +29,13 @@ export default async function WorkspaceHomePage({ params }: Props) {
     settings: can(role, 'workspace.settings'),
     audit: can(role, 'workspace.audit'),
   };
-  const [members, invitations, audit] = await Promise.all([
+  const [members, pending, audit, dateFormat] = await Promise.all([
     membersOf(workspace.id),
     may.invite ? pendingInvitations(workspace.id) : Promise.resolve([]),
     may.audit ? auditOf(workspace.id, 20) : Promise.resolve([]),
+    requestDateFormat(),
   ]);
+  const invitations = pending.map(({ expiresAt, ...invitation }) => ({ ...invitation, expiresOn: formatDate(expiresAt, dateFormat) }));
   return (
     <section className="space-y-8">
       <div>
@@ -42,6 +46,9 @@ export default async function WorkspaceHomePage({ params }: Props) {
         <nav aria-label="Workspace" className="mt-3 flex gap-4 text-sm">
           <Link href={`/w/${workspace.slug}/templates`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
             Engine templates
+          </Link>
+          <Link href={`/w/${workspace.slug}/builds`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
+            Build records
           </Link>
           <Link href="/printer-check" className="font-medium text-gauge-700 underline dark:text-gauge-300">
             Printer check
@@ -56,7 +63,7 @@ export default async function WorkspaceHomePage({ params }: Props) {
 
       <div className="space-y-2">
         <h2 className="text-lg font-semibold">Printer profiles</h2>
-        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} />
+        <WorkspaceProfiles workspaceSlug={workspace.slug} canEdit={can(role, 'printer-profile.edit')} canSetDefault={can(role, 'printer-profile.set-default')} />
       </div>
 
       {may.settings || may.invite || may.audit ? (
@@ -86,7 +93,7 @@ export default async function WorkspaceHomePage({ params }: Props) {
               <ul className="space-y-1 text-xs text-steel-600 dark:text-steel-300">
                 {audit.map((entry) => (
                   <li key={entry.id}>
-                    {entry.createdAt} · {entry.actorName ?? 'someone'} · {entry.action} {entry.detail === '{}' ? '' : entry.detail}
+                    <time dateTime={entry.createdAt}>{formatDateTime(entry.createdAt, dateFormat)}</time> · {entry.actorName ?? 'someone'} · {entry.action} {entry.detail === '{}' ? '' : entry.detail}
                   </li>
                 ))}
               </ul>

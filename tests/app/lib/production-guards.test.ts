@@ -1,7 +1,8 @@
 import { afterEach, describe, expect, it, vi } from 'vitest';
 import { appOrigin } from '@/app/lib/app-origin';
 import { authSecret } from '@/app/lib/auth-secret';
-import { mailFakeUrl } from '@/app/lib/mail-fake-inbox';
+import { runWithSocketPeer } from '@/app/lib/client-address';
+import { inboxForThisRequest, mailFakeUrl } from '@/app/lib/mail-fake-inbox';
 import { smtpUrl } from '@/app/lib/mailer';
 
 afterEach(() => {
@@ -56,5 +57,23 @@ describe('the development inbox guard', () => {
     expect(mailFakeUrl()?.port).toBe('2580');
     vi.stubEnv('MAIL_FAKE_URL', 'http://localhost:2580');
     expect(mailFakeUrl()?.hostname).toBe('localhost');
+  });
+});
+
+describe('the development inbox for a request', () => {
+  it('opens to loopback socket peers only, and only while the fake takes the mail', () => {
+    vi.stubEnv('NODE_ENV', 'production');
+    vi.stubEnv('MAIL_FAKE_URL', 'http://127.0.0.1:2580');
+    vi.stubEnv('SMTP_URL', 'smtp://127.0.0.1:2525');
+    expect(runWithSocketPeer('127.0.0.1', inboxForThisRequest)?.port).toBe('2580');
+    expect(runWithSocketPeer('::1', inboxForThisRequest)).not.toBeNull();
+    // Anyone else on the shop's network (RFC 5737 documentation addresses stand in).
+    expect(runWithSocketPeer('192.0.2.44', inboxForThisRequest)).toBeNull();
+    expect(runWithSocketPeer('::ffff:198.51.100.7', inboxForThisRequest)).toBeNull();
+    // A production server not started by scripts/server.mjs does not know the peer: closed.
+    expect(inboxForThisRequest()).toBeNull();
+    // Real mail configured: the fake is not in use, so no inbox even for this machine.
+    vi.stubEnv('SMTP_URL', 'smtp://mail.example:587');
+    expect(runWithSocketPeer('127.0.0.1', inboxForThisRequest)).toBeNull();
   });
 });

@@ -1,15 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
-import { DEFAULT_FORM_VALUES, convertLengths, formValuesFromPrefill, toSheetRequestInput } from '@/components/generator/form-values';
+import { DEFAULT_FORM_VALUES, formValuesFromPrefill, toSheetRequestInput } from '@/components/generator/form-values';
 
-// 1 in = 25.4 mm exactly (international inch, 1959). Field ranges from the shared sheet schema.
+// Field ranges from the shared sheet schema.
 
 describe('toSheetRequestInput', () => {
-  it('converts inch lengths to mm before validation: 4 in → 101.6 mm, 0.5 in → 12.7 mm', () => {
-    const request = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'strip', lengthUnit: 'in', diameterMm: 4, stripWidthMm: 0.5 });
-    expect(request.diameterMm).toBeCloseTo(101.6, 9);
-    expect(request.stripWidthMm).toBeCloseTo(12.7, 9);
-    expect(request.paperThicknessMm).toBe(0.1); // paper thickness is always entered in mm
+  it('sends the lengths in mm whatever unit the form shows them in', () => {
+    const request = toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'strip', lengthUnit: 'in', diameterMm: 101.6, stripWidthMm: 12.7 });
+    expect(request).toMatchObject({ diameterMm: 101.6, stripWidthMm: 12.7, paperThicknessMm: 0.1 });
   });
 
   it('sends only the fields of the chosen kind', () => {
@@ -26,7 +24,7 @@ describe('toSheetRequestInput', () => {
     expect(request.advanceMarksDeg?.slice(0, 2)).toEqual([16, 18]);
     const result = sheetRequestSchema.safeParse(request);
     expect(result.success).toBe(false);
-    expect(result.error?.issues[0]?.message).toMatch(/Advance mark \(advanceMarksDeg\) must be a number, 0–60° BTDC/);
+    expect(result.error?.issues[0]?.message).toMatch(/Advance mark must be a number, 0–60° BTDC/);
   });
 
   it('treats a blank window or band as none, and a half-filled one as an error', () => {
@@ -37,20 +35,7 @@ describe('toSheetRequestInput', () => {
 
   it('an empty diameter (NaN from valueAsNumber) gets the schema message naming field and range', () => {
     const result = sheetRequestSchema.safeParse(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, diameterMm: Number.NaN }));
-    expect(result.error?.issues[0]?.message).toBe('Diameter (diameterMm) must be a number, 20–600 mm');
-  });
-});
-
-describe('convertLengths', () => {
-  it('turns 101.6 mm into 4 in and back', () => {
-    const inches = convertLengths({ ...DEFAULT_FORM_VALUES, diameterMm: 101.6 }, 'in');
-    expect(inches.diameterMm).toBe(4);
-    const back = convertLengths({ ...DEFAULT_FORM_VALUES, ...inches, lengthUnit: 'in' }, 'mm');
-    expect(back.diameterMm).toBe(101.6);
-  });
-
-  it('leaves blank fields blank', () => {
-    expect(convertLengths({ ...DEFAULT_FORM_VALUES, hubHoleMm: Number.NaN }, 'in').hubHoleMm).toBeNaN();
+    expect(result.error?.issues[0]?.message).toBe('Diameter must be a number, 20–600 mm');
   });
 });
 

@@ -141,7 +141,7 @@ describe('crankAnglesFromDropMm with an offset (closed form)', () => {
   });
 
   it('refuses a drop beyond the true stroke with the allowed range', () => {
-    expect(() => crankAnglesFromDropMm({ ...offset, dropMm: 54.01 })).toThrow(/dropMm.*allowed 0–54\.003 mm/);
+    expect(() => crankAnglesFromDropMm({ ...offset, dropMm: 54.01 })).toThrow(/Piston drop.*allowed 0–54\.003 mm/);
   });
 });
 
@@ -159,6 +159,6 @@ describe('offsetCrankGeometryProblem', () => {
       message: expect.stringMatching(/less than con-rod length minus crank throw \(3 mm\)/),
     });
     expect(offsetCrankGeometryProblem({ strokeMm: 54, rodMm: 30, pinOffsetMm: -2.9 })).toBeNull();
-    expect(() => offsetPistonDropMm({ strokeMm: 54, rodMm: 30, pinOffsetMm: -3, crankDeg: 10 })).toThrow(/pinOffsetMm/);
+    expect(() => offsetPistonDropMm({ strokeMm: 54, rodMm: 30, pinOffsetMm: -3, crankDeg: 10 })).toThrow(/Wrist-pin offset/);
   });
 });

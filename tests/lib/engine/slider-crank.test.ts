@@ -120,22 +120,22 @@ describe('crankDegFromDropMm (exact inverse)', () => {
 describe('impossible geometry is refused with a message naming the field', () => {
   it('refuses a rod not longer than the crank throw', () => {
     expect(crankGeometryProblem({ strokeMm: 54, rodMm: 27 })?.field).toBe('rodMm');
-    expect(() => pistonDropMm({ strokeMm: 54, rodMm: 20, crankDeg: 90 })).toThrow(/rodMm.*more than 27 mm/);
-    expect(() => crankDegFromDropMm({ strokeMm: 54, rodMm: 27, dropMm: 10 })).toThrow(/rodMm/);
+    expect(() => pistonDropMm({ strokeMm: 54, rodMm: 20, crankDeg: 90 })).toThrow(/Con-rod length.*more than 27 mm/);
+    expect(() => crankDegFromDropMm({ strokeMm: 54, rodMm: 27, dropMm: 10 })).toThrow(/Con-rod length/);
   });
 
   it('refuses a negative or zero stroke', () => {
     expect(crankGeometryProblem({ strokeMm: -54, rodMm: 105 })?.field).toBe('strokeMm');
-    expect(() => pistonDropMm({ strokeMm: 0, rodMm: 105, crankDeg: 10 })).toThrow(/strokeMm/);
+    expect(() => pistonDropMm({ strokeMm: 0, rodMm: 105, crankDeg: 10 })).toThrow(/Stroke/);
   });
 
   it('refuses a drop outside 0..stroke instead of answering NaN', () => {
-    expect(() => crankDegFromDropMm({ ...small, dropMm: 54.01 })).toThrow(/dropMm.*0–54 mm/);
-    expect(() => crankDegFromDropMm({ ...small, dropMm: -0.1 })).toThrow(/dropMm/);
-    expect(() => crankDegFromDropMm({ ...small, dropMm: Number.NaN })).toThrow(/dropMm/);
+    expect(() => crankDegFromDropMm({ ...small, dropMm: 54.01 })).toThrow(/Piston drop.*0–54 mm/);
+    expect(() => crankDegFromDropMm({ ...small, dropMm: -0.1 })).toThrow(/Piston drop/);
+    expect(() => crankDegFromDropMm({ ...small, dropMm: Number.NaN })).toThrow(/Piston drop/);
   });
 
   it('refuses a crank angle that is not a number', () => {
-    expect(() => pistonDropMm({ ...small, crankDeg: Number.NaN })).toThrow(/crankDeg/);
+    expect(() => pistonDropMm({ ...small, crankDeg: Number.NaN })).toThrow(/Crank angle/);
   });
 });

@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import { crankOrderDeg, signedTurnDeg, tdcFromStops } from '@/lib/engine/tdc-from-stops';
 
 // TDC lies midway between two positive-stop readings because the piston touches the
-// stop at equal angles either side of TDC (common practice; PRODUCT.md §1).
+// stop at equal angles either side of TDC (common practice; DEVELOPERS.md, "Angles").
 
 describe('tdcFromStops, full numbering', () => {
   it('finds TDC at 0 from readings 25° either side, across the 0/360 seam', () => {
@@ -83,7 +83,7 @@ describe('tdcFromStops, split numbering', () => {
 });
 
 describe('angle helpers', () => {
-  it('maps split readings to crank order (x° BTDC = 360 − x, PRODUCT.md §2)', () => {
+  it('maps split readings to crank order (x° BTDC = 360 − x, DEVELOPERS.md, "Angles")', () => {
     expect(crankOrderDeg(18, 'split', 'BTDC')).toBe(342);
     expect(crankOrderDeg(18, 'split', 'ATDC')).toBe(18);
     expect(crankOrderDeg(365, 'full')).toBe(5);

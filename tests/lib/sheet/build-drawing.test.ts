@@ -7,8 +7,8 @@ import { FIXED_DATE, req } from './svg-measure';
 
 describe('buildDrawing', () => {
   it('refuses a request that skipped validation with the schema’s message naming the field and range', () => {
-    expect(() => buildDrawing({ kind: 'wheel' } as SheetRequest)).toThrow(/diameterMm.*20–600 mm/);
-    expect(() => buildDrawing({ ...req({ kind: 'wheel', diameterMm: 100 }), diameterMm: Number.NaN })).toThrow(/diameterMm/);
+    expect(() => buildDrawing({ kind: 'wheel' } as SheetRequest)).toThrow(/Diameter.*20–600 mm/);
+    expect(() => buildDrawing({ ...req({ kind: 'wheel', diameterMm: 100 }), diameterMm: Number.NaN })).toThrow(/Diameter must be a number/);
   });
 
   it('is pure: the same request and date give the same SVG, byte for byte', () => {

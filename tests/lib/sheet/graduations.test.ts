@@ -2,7 +2,8 @@
 // lib/sheet/wheel-layout.ts, measured through the SVG.
 import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
-import { arcPitchMm, chooseLevels, graduationNumber, levelOfHalfDegIndex, ticksInAlongRange } from '@/lib/sheet/graduations';
+import { arcLengthMm } from '@/lib/engine/arc-chord';
+import { chooseLevels, graduationNumber, levelOfHalfDegIndex, ticksInAlongRange } from '@/lib/sheet/graduations';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { FIXED_DATE, isTick, lines, parseSvg, req } from './svg-measure';
 
@@ -22,10 +23,6 @@ describe('graduation levels', () => {
     const ticks = ticksInAlongRange(0, 719, 0.5, 'stationary');
     expect(ticks).toHaveLength(720);
     ticks.forEach((tick, i) => expect(tick.crankDeg).toBe(i * 0.5));
-  });
-
-  it('arc pitch is π·d·step/360 (e.g. 100 mm, 1°: 0.8727 mm)', () => {
-    expect(arcPitchMm(100, 1)).toBeCloseTo(0.872665, 6);
   });
 
   it('drops 0.5° on a 100 mm wheel (0.44 mm < 0.6 mm) and says so', () => {
@@ -55,15 +52,15 @@ describe('graduation levels', () => {
   it('is exact at the boundary: pitch equal to the minimum is kept, a hair less is dropped', () => {
     // 0.5° pitch = 0.6 mm when d = 0.6·360/(π·0.5) = 137.50987 mm.
     const boundary = (0.6 * 360) / (Math.PI * 0.5);
-    expect(chooseLevels(arcPitchMm(boundary, 1), 0.6).finestLevel).toBe(0.5);
-    expect(chooseLevels(arcPitchMm(boundary - 0.001, 1), 0.6).finestLevel).toBe(1);
+    expect(chooseLevels(arcLengthMm(boundary, 1), 0.6).finestLevel).toBe(0.5);
+    expect(chooseLevels(arcLengthMm(boundary - 0.001, 1), 0.6).finestLevel).toBe(1);
     expect(tickLevels(boundary).levels).toHaveLength(720);
     expect(tickLevels(boundary - 0.001).levels).toHaveLength(360);
     expect(tickLevels(boundary).drawing.warnings.filter((w) => w.includes('left out'))).toEqual([]);
   });
 
   it('always keeps the numbered 10° level, with a warning when even that is below the minimum', () => {
-    const choice = chooseLevels(arcPitchMm(20, 1), 5);
+    const choice = chooseLevels(arcLengthMm(20, 1), 5);
     expect(choice.keptLevels).toEqual([10]);
     expect(choice.warnings[0]).toBe('10° graduations kept although only 1.75 mm apart at this diameter, below the 5 mm minimum');
   });

@@ -1,7 +1,7 @@
 // Source under test: label placement in lib/sheet/polar-scale.ts (side labels, mark labels) and
 // lib/sheet/strip-layout.ts, checked on the SVG output read back with @xmldom/xmldom. Text boxes are
 // estimated in ./text-boxes.ts (size × characters × 0.6 wide). BTDC = 360 − crank angle, ATDC =
-// crank angle (PRODUCT.md §2, the trade's convention).
+// crank angle (DEVELOPERS.md, "Angles", the trade's convention).
 import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
@@ -107,10 +107,19 @@ describe('advance marks 1° apart keep legible labels', () => {
     const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'advance-label');
     expect(new Set(labels.map((t) => t.textContent))).toEqual(new Set(ADVANCE.map((d) => `${d}° BTDC`)));
     expect(overlappingTexts(svg, inRows)).toEqual([]);
-    // Each label's leader starts on its own mark's lower end (the strip's edge) at the mark's x.
+    // Each label is joined to its own mark: a leader starts on the mark's lower end, or the label
+    // stands right under that end, its box centred on the mark's x.
     const marks = svg.all('line').filter((l) => l.getAttribute('data-role') === 'advance');
     const leaders = svg.all('line').filter((l) => l.getAttribute('data-role') === 'label-leader');
-    for (const mark of marks) expect(leaders.some((l) => Math.abs(n(l, 'x1') - n(mark, 'x1')) < 1e-3 && Math.abs(n(l, 'y1') - n(mark, 'y2')) < 1e-3)).toBe(true);
+    const centreX = (el: Parameters<typeof textBox>[0]) => {
+      const xs = textBox(el).corners.map(([x]) => x);
+      return (Math.min(...xs) + Math.max(...xs)) / 2;
+    };
+    for (const mark of marks) {
+      const led = leaders.some((l) => Math.abs(n(l, 'x1') - n(mark, 'x1')) < 1e-3 && Math.abs(n(l, 'y1') - n(mark, 'y2')) < 1e-3);
+      const under = labels.some((t) => t.getAttribute('data-segment') === mark.getAttribute('data-segment') && Math.abs(centreX(t) - n(mark, 'x1')) < 0.3 && n(t, 'y') > n(mark, 'y2'));
+      expect(led || under).toBe(true);
+    }
   });
 });
 

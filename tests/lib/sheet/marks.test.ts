@@ -84,10 +84,52 @@ describe('port events', () => {
     expect(labels.sort()).toEqual(['Exhaust closes 264°', 'Exhaust opens 96°']);
   });
 
-  it('are left off split wheels with a warning saying why', () => {
-    const drawing = buildDrawing(req({ kind: 'wheel', diameterMm: 200, portEvents: ports, paper: 'A3' }), { date: FIXED_DATE });
-    expect(drawing.shapes.some((s) => s.data?.role === 'port')).toBe(false);
-    expect(drawing.warnings.some((w) => w.startsWith('Port events are drawn on full-numbered scales only'))).toBe(true);
+  // Analytic angles from the direction rule (PRODUCT.md §2 digest in lib/sheet/scale-direction.ts is
+  // what is under test, so the expectation is worked out here by hand): rotating cw, crank c lies
+  // (360 − c)° clockwise from TDC as seen.
+  it.each([
+    ['cw', 'rotating', (c: number) => (360 - c) % 360],
+    ['ccw', 'rotating', (c: number) => c % 360],
+    ['cw', 'stationary', (c: number) => c % 360],
+    ['ccw', 'stationary', (c: number) => (360 - c) % 360],
+  ] as const)('are drawn on split wheels too (%s, %s), at their analytic angles ±0.01°, labelled ATDC / BTDC', (rotation, carrier, expectedCw) => {
+    const drawing = buildDrawing(req({ kind: 'wheel', diameterMm: 200, portEvents: [{ name: 'EX', opensCrankDeg: 97.5, closesCrankDeg: 262.5 }], rotation, carrier, paper: 'A3' }), { date: FIXED_DATE });
+    const svg = parseSvg(renderSvg(drawing));
+    const centre = centreOf(svg);
+    const marks = lines(svg, (el) => el.getAttribute('data-role') === 'port');
+    expect(marks).toHaveLength(2);
+    for (const mark of marks) {
+      const crank = n(mark.el, 'data-crank-deg');
+      const seen = clockwiseDeg(centre, mark.x1, mark.y1);
+      expect(Math.abs(((seen - expectedCw(crank) + 540) % 360) - 180)).toBeLessThanOrEqual(0.01);
+    }
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'port-label').map((t) => t.textContent);
+    expect(labels.sort()).toEqual(['EX closes 97.5° BTDC', 'EX opens 97.5° ATDC']);
+    expect(drawing.warnings.some((w) => /port/i.test(w))).toBe(false);
+  });
+
+  it('are drawn on split strips at (seam − crank)·π(D + t)/360 along the arrow ±0.01°, labelled', () => {
+    const drawing = buildDrawing(req({ kind: 'strip', diameterMm: 50, portEvents: [{ name: 'TR', opensCrankDeg: 118, closesCrankDeg: 242 }] }), { date: FIXED_DATE });
+    const svg = parseSvg(renderSvg(drawing));
+    const mmPerDeg = (Math.PI * 50.1) / 360;
+    const seam = lines(svg, (el) => el.getAttribute('data-role') === 'seam')[0]!;
+    const marks = lines(svg, (el) => el.getAttribute('data-role') === 'port');
+    expect(marks.map((m) => n(m.el, 'data-crank-deg')).sort((a, b) => a - b)).toEqual([118, 242]);
+    // Rotating strip, seam at BDC (180): crank c sits (180 − c) mod 360 degrees along the arrow.
+    for (const mark of marks) expect(Math.abs((mark.x1 - seam.x1) / mmPerDeg - ((((180 - n(mark.el, 'data-crank-deg')) % 360) + 360) % 360))).toBeLessThanOrEqual(0.01);
+    const labels = svg.all('text').filter((t) => t.getAttribute('data-role') === 'port-label').map((t) => t.textContent);
+    expect(labels.sort()).toEqual(['TR closes 118° BTDC', 'TR opens 118° ATDC']);
+  });
+
+  it('outside a window strip are named in the warnings, not dropped silently', () => {
+    const drawing = buildDrawing(req({ kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10], advanceMarksDeg: [18, 55], portEvents: ports }), { date: FIXED_DATE });
+    const note = drawing.warnings.find((w) => w.startsWith('Not drawn, outside the window'));
+    expect(note).toContain('advance mark 55° BTDC');
+    expect(note).toContain('Exhaust opens 96° ATDC');
+    expect(note).not.toContain('18°');
+    // …and the same words are printed on the sheet itself.
+    const svg = parseSvg(renderSvg(drawing));
+    expect(svg.all('text').filter((t) => t.getAttribute('data-role') === 'layout-notes').map((t) => t.textContent).join(' ')).toContain('outside the window');
   });
 
   it('appear on full-numbered strips too', () => {

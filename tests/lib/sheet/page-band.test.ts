@@ -1,6 +1,6 @@
 // Source under test: lib/sheet/page-band.ts and the page order in lib/sheet/page-layout.ts and
 // lib/sheet/build-drawing.ts, read back from the SVG with @xmldom/xmldom.
-// Page sizes: ISO 216 (A4 210 × 297 mm). Minimum margin 6 mm: PRODUCT.md §3.
+// Page sizes: ISO 216 (A4 210 × 297 mm). Minimum margin 6 mm: DEVELOPERS.md, "Sheets".
 import type { Element as XmlElement } from '@xmldom/xmldom';
 import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';

@@ -46,6 +46,17 @@ describe('renderSvg', () => {
     expect(() => assertFiniteDrawing(bad)).toThrow('shapes[0] (line).x2Mm');
   });
 
+  it('the builder guard names a bad path point, stroke or data value, and passes finite shapes', () => {
+    const point = tiny([{ type: 'path', pointsMm: [[0, 0], [1, Infinity]], closed: false, fill: 'none', strokeMm: 0.2 }]);
+    expect(() => assertFiniteDrawing(point)).toThrow('shapes[0] (path).pointsMm[1][1]');
+    const stroke = tiny([{ type: 'rect', xMm: 0, yMm: 0, widthMm: 1, heightMm: 1, strokeMm: Number.NaN, fill: 'none' }]);
+    expect(() => assertFiniteDrawing(stroke)).toThrow('shapes[0] (rect).strokeMm');
+    const data = tiny([{ type: 'line', x1Mm: 0, y1Mm: 0, x2Mm: 1, y2Mm: 1, strokeMm: 0.2, data: { crankDeg: Number.NaN } }]);
+    expect(() => assertFiniteDrawing(data)).toThrow('shapes[0] (line).data.crankDeg');
+    const fine = tiny([{ type: 'text', xMm: 1, yMm: 2, text: '10', sizeMm: 3, anchor: 'middle', rotateDeg: 0, weight: 'normal', font: 'ui' }]);
+    expect(assertFiniteDrawing(fine)).toBe(fine);
+  });
+
   it('writes hatch fills through an SVG pattern and grey15 as #d9d9d9, strokes in mm user units', () => {
     const svg = parseSvg(
       renderSvg(

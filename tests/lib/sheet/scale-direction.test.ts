@@ -1,4 +1,4 @@
-// Source under test: lib/sheet/scale-direction.ts, the one rule placing crank angles (PRODUCT.md §2:
+// Source under test: lib/sheet/scale-direction.ts, the one rule placing crank angles (DEVELOPERS.md, "Rotation and carrier":
 // crankDeg 0 = TDC, x° BTDC = 360 − x; rotating scales carry BTDC with the rotation, stationary against it).
 import { describe, expect, it } from 'vitest';
 import { alongRotationDeg, btdcToCrankDeg, crankFromAlongDeg, crankIndexFromAlongIndex, wheelAngleDeg } from '@/lib/sheet/scale-direction';

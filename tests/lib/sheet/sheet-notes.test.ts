@@ -1,5 +1,5 @@
 // Source under test: lib/sheet/sheet-notes.ts and lib/sheet/info-panel.ts (title block, print line,
-// cautions of PRODUCT.md §6, the "which way" note and diagram), read back from the SVG with @xmldom/xmldom.
+// cautions of DEVELOPERS.md, "Cautions", the "which way" note and diagram), read back from the SVG with @xmldom/xmldom.
 import { describe, expect, it } from 'vitest';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
@@ -9,6 +9,20 @@ function sheetText(input: Parameters<typeof req>[0]) {
   const svg = parseSvg(renderSvg(buildDrawing(req(input), { date: FIXED_DATE })));
   return { svg, words: svg.all('text').map((t) => t.textContent).join(' ') };
 }
+
+describe('the sheet date', () => {
+  it('is written in the reader\'s locale and the stated time zone', () => {
+    // 2026-12-01T23:30Z is already 2 December in Berlin (UTC+1 in winter, IANA tz database); CLDR de "d. MMM y".
+    const late = new Date('2026-12-01T23:30:00Z');
+    const at = (locale: string, timeZone: string) =>
+      parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 118 }), { date: late, dateFormat: { locale, timeZone } })))
+        .all('text')
+        .map((t) => t.textContent)
+        .join(' ');
+    expect(at('en-US', 'UTC')).toContain('Date Dec 1, 2026'); // CLDR en-US "MMM d, y"
+    expect(at('de-DE', 'Europe/Berlin')).toContain('Date 2. Dez. 2026');
+  });
+});
 
 describe('every sheet says what it is and how to print it', () => {
   it.each(['wheel', 'ring', 'strip', 'scribe', 'check'] as const)('%s: title block, print line, cautions and which-way note', (kind) => {
@@ -28,13 +42,14 @@ describe('every sheet says what it is and how to print it', () => {
     expect(words).toContain('Carrier: rotating');
     expect(words).toContain('Rotation: clockwise');
     expect(words).toContain('Numbering: split');
-    expect(words).toContain('Date 2026-12-01');
+    // The default date format, en-GB in UTC: day, abbreviated month, year (Unicode CLDR en-GB "d MMM y").
+    expect(words).toContain('Date 1 Dec 2026');
     expect(words).toContain('paper Letter portrait');
     expect(words).toContain('Printer profile: Office laser');
     expect(words).toContain('printer scale x 0.990');
     expect(words).toContain('Note: checked twice');
     expect(words).toContain('Print at 100 % / actual size — turn off fit-to-page');
-    // PRODUCT.md §6, in short.
+    // DEVELOPERS.md, "Cautions", in short.
     for (const caution of ['plug lead off', 'positive stop by hand only', 'clear of the flywheel and fan', 'ventilation', 'detonation', 'maker’s manual'])
       expect(words).toContain(caution);
     expect(words).toContain('Which way:');

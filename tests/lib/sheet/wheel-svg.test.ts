@@ -10,7 +10,7 @@ function wheelSvg(input: Parameters<typeof req>[0]) {
   return { drawing, svg: parseSvg(renderSvg(drawing)) };
 }
 
-/** Where PRODUCT.md §2 puts a crank angle, clockwise as seen from TDC at the top (written out independently). */
+/** Where a crank angle sits (DEVELOPERS.md, "Rotation and carrier"), clockwise as seen from TDC at the top (written out independently). */
 function expectedClockwiseDeg(crankDeg: number, rotation: 'cw' | 'ccw', carrier: 'rotating' | 'stationary'): number {
   // Rotating scale: BTDC (crank just below 360) lies from TDC in the direction of rotation,
   // so increasing crank runs against rotation; stationary: with it. cw rotation = clockwise on the page.
@@ -91,7 +91,7 @@ describe('degree wheel SVG, measured', () => {
     expect(2 * n(ring, 'r')).toBeCloseTo(1, 4); // the 1 mm centring ring
   });
 
-  describe('the 18° BTDC mark: all four rotation × carrier combinations (PRODUCT.md §2)', () => {
+  describe('the 18° BTDC mark: all four rotation × carrier combinations (DEVELOPERS.md, "Rotation and carrier")', () => {
     const cases = [
       ['cw', 'rotating', 18],
       ['cw', 'stationary', 342],

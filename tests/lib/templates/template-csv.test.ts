@@ -39,7 +39,7 @@ describe('CSV cells', () => {
 describe('parseTemplatesCsv', () => {
   it('accepts columns in any order, a BOM, and header case and spaces', () => {
     const result = parseTemplatesCsv('\uFEFF Bore_MM ,NAME\n45,Shop single');
-    expect(result).toEqual({ ok: true, templates: [{ ...EMPTY_TEMPLATE, name: 'Shop single', boreMm: 45 }] });
+    expect(result).toMatchObject({ ok: true, templates: [{ ...EMPTY_TEMPLATE, name: 'Shop single', boreMm: 45 }], delimiter: ',' });
   });
 
   it('reports a row with too many cells by its spreadsheet row', () => {
@@ -95,7 +95,7 @@ describe('templatesToCsv → parseTemplatesCsv', () => {
     fc.assert(
       fc.property(fc.array(templateArb, { minLength: 1, maxLength: 5 }), (templates) => {
         const csv = templatesToCsv(templates);
-        expect(parseTemplatesCsv(csv)).toEqual({ ok: true, templates });
+        expect(parseTemplatesCsv(csv)).toMatchObject({ ok: true, templates, fields: CSV_COLUMN_SPECS.map((s) => s.field) });
         // papaparse, read independently, sees one record per template and the documented header.
         const parsed = Papa.parse(csv, { header: true, skipEmptyLines: 'greedy' });
         expect(parsed.data).toHaveLength(templates.length);

@@ -15,8 +15,8 @@ describe('templateSchema', () => {
     const issues = toFieldIssues(result.error!);
     expect(issues).toEqual(
       expect.arrayContaining([
-        { path: 'strokeMm', message: 'Stroke (strokeMm) must be at least 10 mm (allowed 10–150 mm)' },
-        { path: 'staticAdvanceDeg', message: 'Static advance (staticAdvanceDeg) must be at most 60° BTDC (allowed 0–60° BTDC)' },
+        { path: 'strokeMm', message: 'Stroke must be at least 10 mm (allowed 10–150 mm)' },
+        { path: 'staticAdvanceDeg', message: 'Static advance must be at most 60° BTDC (allowed 0–60° BTDC)' },
         { path: 'advanceMarksDeg.1', message: expect.stringMatching(/at least 0° BTDC/) },
         { path: 'portTargets.0.closesCrankDeg', message: expect.stringMatching(/at most 360°/) },
       ]),

@@ -3,7 +3,7 @@ import { prefillFromSearchParams } from '@/lib/generator-prefill';
 import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
 import { generatorHref } from '@/lib/templates/generator-href';
 import { availableSheetKinds, templateSheetRequest } from '@/lib/templates/template-sheet';
-import { EMPTY_TEMPLATE, RING_CLEARANCE_MM } from '@/lib/templates/template-schema';
+import { EMPTY_TEMPLATE } from '@/lib/templates/template-schema';
 
 const base = {
   ...EMPTY_TEMPLATE,
@@ -37,7 +37,8 @@ describe('templateSheetRequest', () => {
 
   it('builds a stationary ring from rim + clearance to the flange diameter', () => {
     const request = templateSheetRequest(base, 'ring')!;
-    expect(request).toMatchObject({ kind: 'ring', innerDiameterMm: 128 + RING_CLEARANCE_MM, outerDiameterMm: 150, carrier: 'stationary' });
+    // Rim 128 mm + 1 mm clearance (common practice: the ring must clear the flywheel by about 1–2 mm) = 129 mm.
+    expect(request).toMatchObject({ kind: 'ring', innerDiameterMm: 129, outerDiameterMm: 150, carrier: 'stationary' });
     expect(sheetRequestSchema.safeParse(request).success).toBe(true);
   });
 

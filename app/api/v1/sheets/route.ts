@@ -1,4 +1,6 @@
 import { jsonError, parseJsonBody } from '@/app/lib/api';
+import { dateFormatOf } from '@/app/lib/date-format';
+import { guarded } from '@/app/lib/route-handler';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
 
@@ -10,16 +12,18 @@ export const dynamic = 'force-dynamic';
  * POST /api/v1/sheets: a sheet request (JSON, lib/sheet/sheet-request.ts) in, the
  * drawing as a PDF (default) or SVG download out.
  * Public on purpose, so no session or role check: the generator serves visitors
- * without an account (PRODUCT.md §1, issue 3), and it reads and writes no stored data.
+ * without an account (DEVELOPERS.md, "Public pages"), and it reads and writes no stored data.
  */
-export async function POST(request: Request): Promise<Response> {
-  try {
+export async function POST(incoming: Request): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const parsed = await parseJsonBody(request, sheetRequestSchema);
     if (!parsed.ok) return parsed.response;
-    return await sheetDownloadResponse(parsed.data);
-  } catch (error) {
-    // Never a stack trace to the caller; the message stays in the server log.
-    console.error('POST /api/v1/sheets failed:', error instanceof Error ? error.message : String(error));
-    return jsonError(500, 'The sheet could not be drawn. Try other values; if it keeps failing, report it.');
-  }
+    try {
+      return await sheetDownloadResponse(parsed.data, dateFormatOf(request));
+    } catch (error) {
+      // Never a stack trace to the caller; the message stays in the server log.
+      console.error('POST /api/v1/sheets failed:', error instanceof Error ? error.message : String(error));
+      return jsonError(500, 'The sheet could not be drawn. Try other values; if it keeps failing, report it.');
+    }
+  });
 }

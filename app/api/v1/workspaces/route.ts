@@ -14,8 +14,8 @@ export async function GET() {
 }
 
 /** POST { name }: any signed-in user creates a shop workspace and becomes its owner. */
-export async function POST(request: Request) {
-  return guarded(async () => {
+export async function POST(incoming: Request) {
+  return guarded(incoming, {}, async (request) => {
     const user = await requireUser();
     const parsed = await parseJsonBody(request, createShopSchema);
     if (!parsed.ok) return parsed.response;

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
 import { can } from '@/lib/access-policy';
 import { TemplateList } from '@/components/templates/template-list';
@@ -43,7 +44,7 @@ export default async function TemplatesPage({ params }: Props) {
           </a>
         </div>
       </div>
-      <TemplateList slug={slug} />
+      <TemplateList slug={slug} dateFormat={await requestDateFormat()} />
     </section>
   );
 }

@@ -6,8 +6,8 @@ import { acceptInvitationFor } from '@/app/lib/workspace-service';
 import { tokenSchema } from '@/lib/account-forms';
 
 /** POST { token }: the signed-in invitee joins the workspace with the invited role. */
-export async function POST(request: Request) {
-  return guarded(async () => {
+export async function POST(incoming: Request) {
+  return guarded(incoming, {}, async (request) => {
     const user = await requireUser();
     const parsed = await parseJsonBody(request, tokenSchema);
     if (!parsed.ok) return parsed.response;

@@ -15,8 +15,8 @@ export async function GET(_request: Request, { params }: Context) {
 }
 
 /** PATCH { name }: those who may change its settings rename the workspace (its settings). */
-export async function PATCH(request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function PATCH(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async (request) => {
     const access = await requireAction((await params).workspace, 'workspace.settings');
     const parsed = await parseJsonBody(request, createShopSchema);
     if (!parsed.ok) return parsed.response;

@@ -2,9 +2,11 @@ import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
 import Link from 'next/link';
 import { notFound } from 'next/navigation';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
+import { formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
-import { FIELD_LABELS, formatFieldValue, formatWhen } from '@/components/templates/field-labels';
+import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue } from '@/components/templates/field-labels';
 import { PhotoUpload } from '@/components/templates/photo-upload';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
@@ -12,6 +14,9 @@ import { TemplateHistory } from '@/components/templates/template-history';
 import { findTemplate } from '@/db/templates/find-template';
 import { listPhotos } from '@/db/templates/photos';
 import { listRevisions } from '@/db/templates/revisions';
+import { TemplateBuilds } from '@/components/builds/template-builds';
+import { defaultProfileOf } from '@/db/printer-profiles';
+import { listBuilds } from '@/db/builds/list-builds';
 import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
@@ -19,18 +24,6 @@ export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
 
-const FIGURES: TemplateFieldName[] = [
-  'boreMm',
-  'strokeMm',
-  'rodMm',
-  'rotation',
-  'rimDiameterMm',
-  'faceDiameterMm',
-  'flangeDiameterMm',
-  'hubHoleMm',
-  'staticAdvanceDeg',
-  'advanceMarksDeg',
-];
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
@@ -39,7 +32,15 @@ export default async function TemplatePage({ params }: Props) {
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
-  const [photos, revisions] = await Promise.all([listPhotos(template.id), listRevisions(template.id)]);
+  const [photos, revisions, builds, profile, dateFormat] = await Promise.all([
+    listPhotos(template.id),
+    listRevisions(template.id),
+    can(access.role, 'build.read')
+      ? listBuilds(access.workspace.id, { q: '', status: 'all', template: template.id, sort: 'updatedAt', dir: 'desc', page: 1, pageSize: 20 })
+      : Promise.resolve(null),
+    defaultProfileOf(access.workspace.id),
+    requestDateFormat(),
+  ]);
   const canEdit = can(access.role, 'template.edit');
   const api = `/api/v1/workspaces/${slug}/templates/${template.id}`;
 
@@ -57,7 +58,7 @@ export default async function TemplatePage({ params }: Props) {
           </h1>
           <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
           <p className="text-xs text-steel-500">
-            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatWhen(template.updatedAt)}
+            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
           </p>
         </div>
         {canEdit ? (
@@ -91,16 +92,21 @@ export default async function TemplatePage({ params }: Props) {
         </h2>
         <PrintLinks template={template} sheetUrl={`${api}/sheet`} />
         <p className="text-xs text-steel-500">
+          {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
+        </p>
+        <p className="text-xs text-steel-500">
           Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
         </p>
       </section>
+
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">
           Figures
         </h2>
         <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
-          {FIGURES.map((field) => (
+          {FIGURE_FIELDS.map((field) => (
             <div key={field} className="contents">
               <dt className="text-steel-600 dark:text-steel-300">{FIELD_LABELS[field]}</dt>
               <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field])}</dd>
@@ -157,7 +163,7 @@ export default async function TemplatePage({ params }: Props) {
         <h2 id="history-heading" className="text-lg font-semibold">
           History
         </h2>
-        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} />
+        <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} dateFormat={dateFormat} />
       </section>
     </article>
   );

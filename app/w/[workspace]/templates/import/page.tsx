@@ -29,8 +29,10 @@ export default async function ImportTemplatesPage({ params }: Props) {
       <div className="space-y-2">
         <h2 className="text-lg font-semibold">Columns</h2>
         <p className="text-sm">
-          Comma-separated, UTF-8, a header row naming the columns (any order; only <code>name</code> is required). Decimal point is “.”; an empty cell
-          means “not known”.
+          Separated by commas, semicolons or tabs (found from the header row), UTF-8 text, a header row naming the columns (any order; only{' '}
+          <code>name</code> is required). Decimal point is “.”; in a semicolon-separated file a decimal comma works too. An empty cell means “not
+          known”. Check the file first: you see how many rows are new and how many have the name of an existing template, and choose to skip those
+          rows or update the templates from them.
         </p>
         <table className="text-sm">
           <thead>

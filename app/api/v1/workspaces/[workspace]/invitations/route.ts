@@ -6,6 +6,7 @@ import { serviceResponse } from '@/app/lib/service-response';
 import { invite } from '@/app/lib/workspace-service';
 import { pendingInvitations } from '@/db/invitations';
 import { inviteSchema } from '@/lib/account-forms';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 type Context = { params: Promise<{ workspace: string }> };
 
@@ -18,11 +19,11 @@ export async function GET(_request: Request, { params }: Context) {
 }
 
 /** POST { email, role }: invitations.manage: invite someone by e-mail; the link is single-use and expires in 7 days. */
-export async function POST(request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async (request) => {
     const access = await requireAction((await params).workspace, 'invitations.manage');
     const parsed = await parseJsonBody(request, inviteSchema);
     if (!parsed.ok) return parsed.response;
-    return serviceResponse(await invite(access, parsed.data, appOrigin(request)), 201);
+    return serviceResponse(await invite(access, parsed.data, appOrigin(request), dateFormatOf(request)), 201);
   });
 }

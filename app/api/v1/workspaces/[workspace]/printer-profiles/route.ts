@@ -15,8 +15,8 @@ export async function GET(_request: Request, { params }: Context) {
 }
 
 /** POST { name, printerScaleX, printerScaleY }: members who may edit printer profiles save a profile. */
-export async function POST(request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async (request) => {
     const access = await requireAction((await params).workspace, 'printer-profile.edit');
     const parsed = await parseJsonBody(request, workspacePrinterProfileSchema);
     if (!parsed.ok) return parsed.response;

@@ -20,8 +20,8 @@ export async function GET(request: Request, { params }: WorkspaceParams): Promis
 }
 
 /** POST …/templates — create (template.edit); answers 201 with the template at version 1. */
-export async function POST(request: Request, { params }: WorkspaceParams): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: WorkspaceParams): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const { workspace } = await params;
     const access = await requireAction(workspace, 'template.edit');
     const body = await parseJsonBody(request, templateSchema);

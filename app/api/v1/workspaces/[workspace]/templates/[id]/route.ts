@@ -25,8 +25,8 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  * one the edit started from; if someone saved in between the answer is 409 and nothing is written.
  * `{ version, archived: true }` archives.
  */
-export async function PATCH(request: Request, { params }: TemplateParams): Promise<Response> {
-  return guarded(async () => {
+export async function PATCH(incoming: Request, { params }: TemplateParams): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const { workspace, id } = await params;
     const access = await requireAction(workspace, 'template.edit');
     const templateId = parsePathId(id);
@@ -39,8 +39,8 @@ export async function PATCH(request: Request, { params }: TemplateParams): Promi
 }
 
 /** DELETE …/templates/[id] — template.delete: removes the template, its history and its photo files. */
-export async function DELETE(_request: Request, { params }: TemplateParams): Promise<Response> {
-  return guarded(async () => {
+export async function DELETE(incoming: Request, { params }: TemplateParams): Promise<Response> {
+  return guarded(incoming, {}, async () => {
     const { workspace, id } = await params;
     const access = await requireAction(workspace, 'template.delete');
     const templateId = parsePathId(id);

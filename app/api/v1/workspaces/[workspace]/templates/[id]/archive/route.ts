@@ -13,8 +13,8 @@ const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.
  * POST …/templates/[id]/archive — technician or above. Body `{ version?, archived? }`:
  * archives (or with `archived: false` restores to the list); with a version, a stale one answers 409.
  */
-export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: TemplateParams): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const { access, template: current } = await templateFor(params, 'template.edit');
     // An empty body means "archive at whatever version it is now".
     const text = await request.text();

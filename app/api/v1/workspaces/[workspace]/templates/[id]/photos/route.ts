@@ -30,8 +30,8 @@ export async function GET(_request: Request, { params }: TemplateParams): Promis
  * 10 MB) and an optional `caption`; technician or above. The type is read from the content;
  * the stored file is re-encoded without metadata. Refusals: 413 too large, 415 not an image.
  */
-export async function POST(request: Request, { params }: TemplateParams): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: TemplateParams): Promise<Response> {
+  return guarded(incoming, { accepts: ['multipart'], maxBytes: MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES, tooLarge }, async (request) => {
     const { access, template } = await templateFor(params, 'template.edit');
     if (Number(request.headers.get('content-length') ?? '0') > MAX_PHOTO_BYTES + MULTIPART_OVERHEAD_BYTES) return tooLarge();
     if (!request.headers.get('content-type')?.startsWith('multipart/form-data'))
@@ -47,7 +47,7 @@ export async function POST(request: Request, { params }: TemplateParams): Promis
     if (!(file instanceof Blob)) return jsonError(400, 'No photo in the upload', [{ path: 'photo', message: 'Add a "photo" file field' }]);
     if (file.size > MAX_PHOTO_BYTES) return tooLarge();
     const caption = String(form.get('caption') ?? '').trim();
-    if (caption.length > 200) return jsonError(400, 'Some fields are not valid', [{ path: 'caption', message: 'Caption (caption) must be at most 200 characters' }]);
+    if (caption.length > 200) return jsonError(400, 'Some fields are not valid', [{ path: 'caption', message: 'Caption must be at most 200 characters' }]);
 
     const photo = await reencodePhoto(Buffer.from(await file.arrayBuffer()));
     // Whatever is not a readable JPEG, PNG or WebP is an unsupported media type.

@@ -34,8 +34,8 @@ export async function GET(request: Request, { params }: Params): Promise<Respons
 }
 
 /** DELETE …/photos/[photoId] — template.edit; removes the row and both files. */
-export async function DELETE(_request: Request, { params }: Params): Promise<Response> {
-  return guarded(async () => {
+export async function DELETE(incoming: Request, { params }: Params): Promise<Response> {
+  return guarded(incoming, {}, async () => {
     const photo = await locate(params, 'template.edit');
     if (!photo) return templateNotFound();
     await deletePhotoRow(photo.id);

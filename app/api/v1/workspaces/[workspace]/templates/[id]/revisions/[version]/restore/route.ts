@@ -17,8 +17,8 @@ const restoreSchema = z.object({ version: versionSchema }).strict();
  * POST …/templates/[id]/revisions/[version]/restore — body `{ version }` (the current version the
  * caller saw). Brings back the template as it was at revision [version], recorded as a new revision.
  */
-export async function POST(request: Request, { params }: Params): Promise<Response> {
-  return guarded(async () => {
+export async function POST(incoming: Request, { params }: Params): Promise<Response> {
+  return guarded(incoming, {}, async (request) => {
     const { access, template } = await templateFor(params, 'template.edit');
     const revision = parsePathId((await params).version);
     const snapshot = revision ? await revisionSnapshot(template.id, revision) : null;

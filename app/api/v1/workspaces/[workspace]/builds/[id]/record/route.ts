@@ -1,0 +1,28 @@
+import { jsonError } from '@/app/lib/api';
+import { customerCopyFileName } from '@/app/lib/customer-copy-service';
+import { guarded } from '@/app/lib/route-handler';
+import { toFieldIssues } from '@/lib/sheet/sheet-request';
+import { renderBuildRecordPdf } from '@/pdf/render-build-record-pdf';
+import { buildFor, type BuildParams } from '../../_shared/build-responses';
+import { copyQuerySchema } from '../../_shared/copy-query';
+
+export const runtime = 'nodejs';
+export const dynamic = 'force-dynamic';
+
+/** GET …/builds/[id]/record?format=pdf&paper=A4|Letter — the customer's copy (build.read: viewers may download it). */
+export async function GET(request: Request, { params }: BuildParams): Promise<Response> {
+  return guarded(async () => {
+    const { access, build } = await buildFor(params, 'build.read');
+    const query = copyQuerySchema.safeParse(Object.fromEntries(new URL(request.url).searchParams));
+    if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
+    const pdf = await renderBuildRecordPdf(build, access.workspace.name, query.data.paper);
+    return new Response(new Uint8Array(pdf), {
+      headers: {
+        'Content-Type': 'application/pdf',
+        'Content-Disposition': `attachment; filename="${customerCopyFileName(build)}"`,
+        'Cache-Control': 'no-store',
+        'X-Content-Type-Options': 'nosniff',
+      },
+    });
+  });
+}

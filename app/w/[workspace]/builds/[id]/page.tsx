@@ -1,0 +1,233 @@
+import type { Metadata } from 'next';
+import Link from 'next/link';
+import { notFound } from 'next/navigation';
+import { pageAction } from '@/app/lib/page-access';
+import { BuildPrintLinks } from '@/components/builds/build-print-links';
+import { BlowdownResult, PortResult, TdcResult, TimingResult, ToleranceNote } from '@/components/builds/result-texts';
+import { StatusBadge } from '@/components/builds/status-badge';
+import { ActionButton } from '@/components/templates/template-actions';
+import { findStoredBuild } from '@/db/builds/find-build';
+import { listBuildRevisions } from '@/db/builds/revisions';
+import { defaultProfileOf } from '@/db/printer-profiles';
+import { findTemplate } from '@/db/templates/find-template';
+import { can } from '@/lib/access-policy';
+import { buildFields, type BuildStatus } from '@/lib/builds/build-fields';
+import { statusChangeProblem } from '@/lib/builds/build-status';
+import { degText, mmText } from '@/lib/builds/customer-copy';
+import { parsePathId } from '@/lib/path-id';
+
+export const dynamic = 'force-dynamic';
+export const metadata: Metadata = { title: 'Build record' };
+
+type Props = { params: Promise<{ workspace: string; id: string }> };
+
+const STATUS_ACTIONS: Array<{ to: BuildStatus; label: string }> = [
+  { to: 'done', label: 'Mark done' },
+  { to: 'handed-over', label: 'Mark handed over' },
+  { to: 'open', label: 'Reopen' },
+];
+
+const F = buildFields;
+
+export default async function BuildPage({ params }: Props) {
+  const { workspace: slug, id } = await params;
+  const access = await pageAction(slug, 'build.read', `/w/${slug}/builds/${id}`);
+  if ('denied' in access) return <p role="alert">{access.denied}</p>;
+  const buildId = parsePathId(id);
+  const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
+  if (!stored) notFound();
+  const { build } = stored;
+  const [revisions, template, profile] = await Promise.all([
+    listBuildRevisions(build.id),
+    build.templateId ? findTemplate(access.workspace.id, build.templateId) : Promise.resolve(null),
+    defaultProfileOf(access.workspace.id),
+  ]);
+  const api = `/api/v1/workspaces/${slug}/builds/${build.id}`;
+  const finalForMe = build.status === 'handed-over' && !can(access.role, 'build.reopen-handed-over');
+  const canEdit = can(access.role, 'build.edit') && !finalForMe;
+  const canSend = can(access.role, 'build.send');
+
+  return (
+    <article className="space-y-8">
+      <header className="flex flex-wrap items-start justify-between gap-4">
+        <div>
+          <p className="text-sm">
+            <Link href={`/w/${slug}/builds`} className="text-gauge-700 underline dark:text-gauge-300">
+              Build records
+            </Link>
+          </p>
+          <h1 className="text-2xl font-bold">
+            {build.customerName} <StatusBadge status={build.status} />
+          </h1>
+          <p className="text-steel-600 dark:text-steel-300">
+            {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
+          </p>
+          <p className="text-xs text-steel-500">
+            Opened {build.openedOn}
+            {build.finishedOn ? ` · finished ${build.finishedOn}` : ''}
+            {build.handedOverOn ? ` · handed over ${build.handedOverOn}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
+            {build.updatedBy?.name ?? 'a removed user'} at {build.updatedAt}
+          </p>
+          {build.template ? (
+            <p className="text-xs text-steel-500">
+              From template{' '}
+              <Link href={`/w/${slug}/templates/${build.template.id}`} className="underline">
+                {build.template.name}
+              </Link>{' '}
+              version {build.template.version}
+            </p>
+          ) : null}
+          {finalForMe ? <p className="mt-1 text-sm">Handed over to the customer: only an owner can change or reopen this record.</p> : null}
+        </div>
+        <div className="flex flex-wrap items-start gap-2">
+          {canEdit ? (
+            <Link href={`/w/${slug}/builds/${build.id}/edit`} className="rounded-md bg-gauge-600 px-3 py-1.5 text-sm font-semibold text-white">
+              Edit
+            </Link>
+          ) : null}
+          {canEdit
+            ? STATUS_ACTIONS.filter((a) => a.to !== build.status && !statusChangeProblem(build.status, a.to)).map((a) => (
+                <ActionButton key={a.to} url={api} method="PATCH" body={{ version: build.version, status: a.to }} label={a.label} busyLabel="Saving…" />
+              ))
+            : null}
+          {can(access.role, 'build.delete') ? (
+            <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={`Delete the record of ${build.customerName} with its history? This cannot be undone.`} after={`/w/${slug}/builds`} />
+          ) : null}
+        </div>
+      </header>
+
+      <section aria-labelledby="copy-heading" className="space-y-2">
+        <h2 id="copy-heading" className="text-lg font-semibold">
+          Customer’s copy
+        </h2>
+        <div className="flex flex-wrap items-start gap-3 text-sm">
+          <a href={`${api}/record?format=pdf`} className="rounded-md border border-steel-300 px-3 py-1.5">
+            Download PDF (A4)
+          </a>
+          <a href={`${api}/record?format=pdf&paper=Letter`} className="rounded-md border border-steel-300 px-3 py-1.5">
+            Download PDF (Letter)
+          </a>
+          {canSend ? (
+            build.customerEmail ? (
+              <ActionButton url={`${api}/send`} label={`Send to ${build.customerEmail}`} busyLabel="Sending…" confirm={`Mail the customer’s copy to ${build.customerEmail}?`} />
+            ) : (
+              <span className="text-steel-600">Add the customer’s e-mail to send the copy.</span>
+            )
+          ) : null}
+        </div>
+        {build.sends.length > 0 ? (
+          <ul aria-label="Sent copies" className="text-sm">
+            {build.sends.map((send) => (
+              <li key={send.id}>
+                Sent to {send.to} at {send.sentAt} by {send.sentBy?.name ?? 'a removed user'}
+              </li>
+            ))}
+          </ul>
+        ) : (
+          <p className="text-sm text-steel-600">Not sent yet.</p>
+        )}
+      </section>
+
+      <section aria-labelledby="tdc-heading" className="space-y-1">
+        <h2 id="tdc-heading" className="text-lg font-semibold">
+          Top dead centre
+        </h2>
+        {build.stops ? (
+          <p className="text-sm">
+            {F.stops.label}: A <span className="font-mono">{degText(build.stops.readingADeg)}</span>
+            {build.stops.readingASide ? ` ${build.stops.readingASide}` : ''}, B <span className="font-mono">{degText(build.stops.readingBDeg)}</span>
+            {build.stops.readingBSide ? ` ${build.stops.readingBSide}` : ''} ({build.stops.numbering === 'full' ? '0–360° wheel' : '0–180° each side'})
+          </p>
+        ) : null}
+        <TdcResult tdc={build.tdc} />
+      </section>
+
+      <section aria-labelledby="timing-heading" className="space-y-1">
+        <h2 id="timing-heading" className="text-lg font-semibold">
+          Ignition timing
+        </h2>
+        <TimingResult results={build} />
+        <p className="text-sm text-steel-600 dark:text-steel-300">
+          Entered in {build.timingEnteredAs === 'mm' ? 'mm' : 'degrees'}
+          {build.advanceDeg !== null ? ` · specified ${degText(build.advanceDeg, '° BTDC')}` : ''}
+          {build.timingCheck ? ` · checked ${build.timingCheck}${build.timingCheck === 'strobe' && build.timingCheckRpm ? ` at ${build.timingCheckRpm} rpm` : ''}` : ' · not checked yet'}
+        </p>
+      </section>
+
+      <section aria-labelledby="ports-heading" className="space-y-2">
+        <h2 id="ports-heading" className="text-lg font-semibold">
+          Port timing
+        </h2>
+        <p className="text-sm">
+          Stroke {mmText(build.strokeMm)} · rod {mmText(build.rodMm)} · pin offset {mmText(build.pinOffsetMm)} · deck {mmText(build.deckMm)}
+        </p>
+        {build.ports.length === 0 ? (
+          <p className="text-sm text-steel-600">No ports measured.</p>
+        ) : (
+          <table className="text-sm">
+            <thead>
+              <tr className="text-left">
+                <th scope="col" className="pr-6">Port</th>
+                <th scope="col" className="pr-6">Edge depth</th>
+                <th scope="col">Result</th>
+              </tr>
+            </thead>
+            <tbody>
+              {build.ports.map((port, i) => (
+                <tr key={i}>
+                  <td className="pr-6">{port.name}</td>
+                  <td className="pr-6 font-mono">{mmText(port.heightMm)}</td>
+                  <td>
+                    <PortResult port={port} toleranceDeg={build.toleranceDeg} />
+                  </td>
+                </tr>
+              ))}
+            </tbody>
+          </table>
+        )}
+        <BlowdownResult results={build} />
+        <ToleranceNote toleranceDeg={build.toleranceDeg} />
+      </section>
+
+      <section aria-labelledby="other-heading" className="space-y-1">
+        <h2 id="other-heading" className="text-lg font-semibold">
+          Other measurements and notes
+        </h2>
+        <ul className="text-sm">
+          {build.squishMm !== null ? (
+            <li>
+              {F.squishMm.label}: <span className="font-mono">{mmText(build.squishMm)}</span>
+            </li>
+          ) : null}
+          {build.otherMeasurements.map((m, i) => (
+            <li key={i}>
+              {m.name}: <span className="font-mono">{[m.value, m.unit].filter(Boolean).join(' ')}</span>
+            </li>
+          ))}
+        </ul>
+        {build.notes ? <p className="whitespace-pre-line text-sm">{build.notes}</p> : null}
+      </section>
+
+      <section aria-labelledby="print-heading" className="space-y-2">
+        <h2 id="print-heading" className="text-lg font-semibold">
+          Print the sheets for this build
+        </h2>
+        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} />
+      </section>
+
+      <section aria-labelledby="history-heading" className="space-y-2">
+        <h2 id="history-heading" className="text-lg font-semibold">
+          History
+        </h2>
+        <ol className="space-y-1 text-sm">
+          {revisions.map((r) => (
+            <li key={r.id}>
+              Version {r.version} · {r.action} by {r.user?.name ?? 'a removed user'} at {r.createdAt}:{' '}
+              <span className="text-steel-600 dark:text-steel-300">{r.changes.map((c) => buildFields[c.field as keyof typeof buildFields]?.label ?? c.field).join(', ') || 'no field changes'}</span>
+            </li>
+          ))}
+        </ol>
+      </section>
+    </article>
+  );
+}

@@ -1,0 +1,51 @@
+import * as list from '@/app/api/v1/workspaces/[workspace]/builds/route';
+import * as one from '@/app/api/v1/workspaces/[workspace]/builds/[id]/route';
+import * as revisions from '@/app/api/v1/workspaces/[workspace]/builds/[id]/revisions/route';
+import * as record from '@/app/api/v1/workspaces/[workspace]/builds/[id]/record/route';
+import * as send from '@/app/api/v1/workspaces/[workspace]/builds/[id]/send/route';
+
+/** Calls the build record route handlers directly, as Next would, with JSON helpers. */
+const BASE = 'http://test.local/api/v1/workspaces';
+
+function json(method: string, url: string, body?: unknown): Request {
+  return new Request(url, {
+    method,
+    headers: body === undefined ? {} : { 'content-type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+}
+
+const p = <T>(value: T) => ({ params: Promise.resolve(value) });
+const idParams = (ws: string, id: number | string) => p({ workspace: ws, id: String(id) });
+
+export const buildApi = {
+  list: (ws: string, query = '') => list.GET(json('GET', `${BASE}/${ws}/builds${query}`), p({ workspace: ws })),
+  create: (ws: string, body: unknown) => list.POST(json('POST', `${BASE}/${ws}/builds`, body), p({ workspace: ws })),
+  get: (ws: string, id: number | string) => one.GET(json('GET', `${BASE}/${ws}/builds/${id}`), idParams(ws, id)),
+  patch: (ws: string, id: number | string, body: unknown) => one.PATCH(json('PATCH', `${BASE}/${ws}/builds/${id}`, body), idParams(ws, id)),
+  delete: (ws: string, id: number | string) => one.DELETE(json('DELETE', `${BASE}/${ws}/builds/${id}`), idParams(ws, id)),
+  revisions: (ws: string, id: number | string) => revisions.GET(json('GET', `${BASE}/${ws}/builds/${id}/revisions`), idParams(ws, id)),
+  record: (ws: string, id: number | string, query = '?format=pdf') => record.GET(json('GET', `${BASE}/${ws}/builds/${id}/record${query}`), idParams(ws, id)),
+  send: (ws: string, id: number | string) => send.POST(json('POST', `${BASE}/${ws}/builds/${id}/send`), idParams(ws, id)),
+};
+
+/**
+ * An invented customer's engine with the figures worked by hand in tests/lib/builds/build-results.test.ts
+ * (stroke 40 mm, rod 80 mm, Heywood eq. 2.5).
+ */
+export const BUILD_SAMPLE = {
+  customerName: 'Avery Quillfeather',
+  customerEmail: 'avery@customer.test',
+  engineNumber: 'QX-0042',
+  engineDescription: 'Invented 50 cc single',
+  strokeMm: 40,
+  rodMm: 80,
+  deckMm: 0.5,
+  stops: { numbering: 'full', readingADeg: 340, readingBDeg: 24 },
+  timingSetDegBTDC: 18,
+  timingCheck: 'static-light',
+  ports: [
+    { name: 'Exhaust', heightMm: 17.5 },
+    { name: 'Transfer', heightMm: 29.5 },
+  ],
+};
