@@ -78,7 +78,7 @@ describe('the template field table', () => {
       portTargets: [{ name: 'exhaust', opensCrankDeg: 92, closesCrankDeg: 268 }],
       archived: true,
     });
-    expect(parseTemplatesCsv(templatesToCsv([template]))).toEqual({ ok: true, templates: [template] });
+    expect(parseTemplatesCsv(templatesToCsv([template]))).toMatchObject({ ok: true, templates: [template] });
   });
 
   it('names fields on screen by their label and shows values in their unit', () => {

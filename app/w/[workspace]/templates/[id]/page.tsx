@@ -17,7 +17,6 @@ import { listRevisions } from '@/db/templates/revisions';
 import { TemplateBuilds } from '@/components/builds/template-builds';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { listBuilds } from '@/db/builds/list-builds';
-import type { TemplateFieldName } from '@/lib/templates/template-schema';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Engine template' };

@@ -9,9 +9,9 @@ type Context = { params: Promise<{ workspace: string }> };
 const defaultSchema = z
   .object({
     profileId: z
-      .number({ error: 'Default printer profile (profileId) must be the id of one of this workspace’s profiles, or null for none' })
-      .int('Default printer profile (profileId) must be a whole number')
-      .min(1, 'Default printer profile (profileId) must be a whole number from 1')
+      .number({ error: 'Default printer profile must be the id of one of this workspace’s profiles, or null for none' })
+      .int('Default printer profile must be a whole number')
+      .min(1, 'Default printer profile must be a whole number from 1')
       .nullable(),
   })
   .strict();
@@ -25,8 +25,8 @@ export async function GET(_request: Request, { params }: Context) {
 }
 
 /** PUT { profileId | null }: those allowed printer-profile.set-default choose the profile sheets are corrected with. */
-export async function PUT(request: Request, { params }: Context) {
-  return guarded(async () => {
+export async function PUT(incoming: Request, { params }: Context) {
+  return guarded(incoming, {}, async (request) => {
     const access = await requireAction((await params).workspace, 'printer-profile.set-default');
     const parsed = await parseJsonBody(request, defaultSchema);
     if (!parsed.ok) return parsed.response;
