@@ -7,7 +7,7 @@ set -euo pipefail
 cd "$(dirname "$0")/.."
 export NEXT_DIST_DIR="${NEXT_DIST_DIR:-.next-two-instances}"
 if [ ! -f "$NEXT_DIST_DIR/BUILD_ID" ]; then
-  echo "== production build into $NEXT_DIST_DIR (next start needs one)"
+  echo "== production build into $NEXT_DIST_DIR (the production server needs one)"
   npx next build >"${TMPDIR:-/tmp}/rimscale-two-instances-build.log" 2>&1 || { cat "${TMPDIR:-/tmp}/rimscale-two-instances-build.log"; exit 1; }
 else
   echo "== using the production build in $NEXT_DIST_DIR (delete it to rebuild)"
