@@ -1,14 +1,9 @@
-import fs from 'node:fs';
-import path from 'node:path';
 import type { Knex } from 'knex';
-import { databaseFile, sqliteConfig } from './db/config';
+import { databaseConfig } from './db/config';
 
-// DATABASE_URL is reserved for a future server database; today SQLite is the only engine.
-const filename = databaseFile();
-fs.mkdirSync(path.dirname(filename), { recursive: true });
-
+// DATABASE_URL=postgres://… selects PostgreSQL; unset, the embedded SQLite file (db/config.ts).
 const config: Knex.Config = {
-  ...sqliteConfig(filename),
+  ...databaseConfig(),
   migrations: { directory: './db/migrations', extension: 'ts', loadExtensions: ['.ts'] },
   seeds: { directory: './db/seeds', extension: 'ts', loadExtensions: ['.ts'] },
 };

@@ -2,7 +2,7 @@
 const nextConfig = {
   // knex's optional drivers (pg, mysql, oracledb…) break bundling; load it from node_modules.
   // piscina starts its workers from its own files in node_modules (the PDF pool, app/lib/pdf-pool.ts).
-  serverExternalPackages: ['knex', 'better-sqlite3', 'sharp', 'piscina'],
+  serverExternalPackages: ['knex', 'better-sqlite3', 'pg', 'sharp', 'piscina'],
   // Tests and parallel builds can use their own output folder.
   distDir: process.env.NEXT_DIST_DIR || '.next',
   poweredByHeader: false,

@@ -9,6 +9,7 @@ import * as addDefaultPrinterProfile from './migrations/20261203001000_add_defau
 import * as createBuildPhotos from './migrations/20261203001100_create_build_photos';
 import * as createImportReceipts from './migrations/20261203110000_create_import_receipts';
 import * as templateListSortIndexes from './migrations/20261203001400_template_list_sort_indexes';
+import * as createRateLimits from './migrations/20261203071500_create_rate_limits';
 
 type Migration = { up: (knex: Knex) => Promise<void>; down: (knex: Knex) => Promise<void> };
 
@@ -28,6 +29,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261203001100_create_build_photos.ts': createBuildPhotos,
   '20261203110000_create_import_receipts.ts': createImportReceipts,
   '20261203001400_template_list_sort_indexes.ts': templateListSortIndexes,
+  '20261203071500_create_rate_limits.ts': createRateLimits,
 };
 
 export const staticMigrationSource: Knex.MigrationSource<string> = {

@@ -15,4 +15,5 @@ export const TABLES = {
   buildRevisions: 'build_revisions',
   buildSends: 'build_sends',
   buildPhotos: 'build_photos',
+  rateLimits: 'rate_limits',
 } as const;

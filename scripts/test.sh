@@ -9,7 +9,9 @@ npm run --silent knip
 echo "== typecheck"
 npx next typegen >/dev/null # route types and next-env.d.ts, which tsc reads
 npx tsc --noEmit
-echo "== unit and integration tests"
+echo "== unit and integration tests (SQLite; storage on local disk and on the S3 fake)"
 npx vitest run
+echo "== data-layer and API tests on PostgreSQL"
+bash scripts/test-postgres.sh
 echo "== browser tests"
 bash scripts/test-e2e.sh

@@ -1,5 +1,6 @@
 import 'server-only';
-import { RateLimiterMemory, RateLimiterRes } from 'rate-limiter-flexible';
+import { RateLimiterRes } from 'rate-limiter-flexible';
+import { clearAllLimits, databaseLimiter } from './rate-limit-store';
 
 const MINUTE = 60;
 const HOUR = 60 * MINUTE;
@@ -8,7 +9,8 @@ const DAY = 24 * HOUR;
 /**
  * Every limit the app applies: its points per window. The keys each caller passes say what is
  * counted (an account, a target e-mail address, a client address from client-address.ts,
- * a workspace). In memory of one server process: a restart clears them.
+ * a workspace). The counters live in the database (rate-limit-store.ts): shared by every app
+ * instance and kept across restarts.
  */
 const LIMITS = {
   // Wrong passwords. Per account *and* client address, so an attacker elsewhere cannot lock the
@@ -36,14 +38,10 @@ const LIMITS = {
 
 export type LimitName = keyof typeof LIMITS;
 
-const globalForLimits = globalThis as unknown as { rimscaleLimiters?: Record<LimitName, RateLimiterMemory> };
-
-/** The one place the limiters (and their store) are built. */
-function limiters(): Record<LimitName, RateLimiterMemory> {
-  globalForLimits.rimscaleLimiters ??= Object.fromEntries(
-    Object.entries(LIMITS).map(([name, opts]) => [name, new RateLimiterMemory({ keyPrefix: name, ...opts })]),
-  ) as Record<LimitName, RateLimiterMemory>;
-  return globalForLimits.rimscaleLimiters;
+/** The limiters, built by rate-limit-store.ts (the one place that chooses their store). */
+function limiters(): Record<LimitName, ReturnType<typeof databaseLimiter>> {
+  const entries = Object.entries(LIMITS).map(([name, opts]) => [name, databaseLimiter({ keyPrefix: name, ...opts })]);
+  return Object.fromEntries(entries) as Record<LimitName, ReturnType<typeof databaseLimiter>>;
 }
 
 export class RateLimitedError extends Error {
@@ -83,6 +81,6 @@ export async function forgetKey(name: LimitName, key: string): Promise<void> {
 }
 
 /** Tests start each case with fresh limits. */
-export function resetAllLimits(): void {
-  globalForLimits.rimscaleLimiters = undefined;
+export async function resetAllLimits(): Promise<void> {
+  await clearAllLimits();
 }

@@ -1,41 +1,40 @@
 import 'server-only';
-import fs from 'node:fs/promises';
-import path from 'node:path';
+import { diskStore } from './storage-disk';
+import { s3Store, s3SettingsFromEnv } from './storage-s3';
 
 /**
- * Stored uploads on local disk: `RIMSCALE_UPLOAD_DIR` or `data/uploads`.
+ * Stored uploads (photos, and any stored file): in an S3-compatible bucket when
+ * S3_BUCKET is set, so every app instance sees the same files, else on local disk
+ * (`RIMSCALE_UPLOAD_DIR` or `data/uploads`).
  * Keys are ours (never a user's file name): lowercase letters, digits, `-`, `_`, `.` and `/`.
  */
-export function uploadRoot(): string {
-  return process.env.RIMSCALE_UPLOAD_DIR || path.join(process.cwd(), 'data', 'uploads');
-}
+export type ObjectStore = {
+  put: (key: string, data: Buffer, contentType?: string) => Promise<void>;
+  get: (key: string) => Promise<Buffer | null>;
+  delete: (key: string) => Promise<void>;
+};
 
 const KEY_PATTERN = /^[a-z0-9][a-z0-9_.-]*(\/[a-z0-9][a-z0-9_.-]*)*$/;
 
-function keyPath(key: string): string {
+function checkedKey(key: string): string {
   if (!KEY_PATTERN.test(key) || key.includes('..')) throw new Error(`Invalid storage key ${JSON.stringify(key)}`);
-  // The upload folder is chosen at run time; keep the bundler from tracing it.
-  return path.join(/*turbopackIgnore: true*/ uploadRoot(), key);
+  return key;
 }
 
-export async function putObject(key: string, data: Buffer): Promise<void> {
-  const file = keyPath(key);
-  await fs.mkdir(path.dirname(file), { recursive: true });
-  // Write then rename, so a reader never sees half a file.
-  const partial = `${file}.${process.pid}.partial`;
-  await fs.writeFile(partial, data);
-  await fs.rename(partial, file);
+/** The store the settings name now (read on every call, so tests and scripts can switch). */
+function store(): ObjectStore {
+  const s3 = s3SettingsFromEnv();
+  return s3 ? s3Store(s3) : diskStore();
+}
+
+export async function putObject(key: string, data: Buffer, contentType?: string): Promise<void> {
+  await store().put(checkedKey(key), data, contentType);
 }
 
 export async function getObject(key: string): Promise<Buffer | null> {
-  try {
-    return await fs.readFile(/*turbopackIgnore: true*/ keyPath(key));
-  } catch (err) {
-    if ((err as NodeJS.ErrnoException).code === 'ENOENT') return null;
-    throw err;
-  }
+  return store().get(checkedKey(key));
 }
 
 export async function deleteObject(key: string): Promise<void> {
-  await fs.rm(keyPath(key), { force: true });
+  await store().delete(checkedKey(key));
 }

@@ -1,5 +1,6 @@
 import 'server-only';
 import { db } from '@/db/knex';
+import { caseInsensitiveOrder, likeOperator } from '@/db/dialect';
 import { TABLES } from '@/db/tables';
 import type { Build, BuildPage } from '@/lib/builds/build';
 import { BUILD_FIELD_LIST, buildFields } from '@/lib/builds/build-fields';
@@ -25,8 +26,9 @@ export async function listBuilds(workspaceId: number, query: BuildListQuery): Pr
     if (query.template) q.andWhere('b.template_id', query.template);
     if (query.q) {
       const pattern = likePattern(query.q);
+      const like = likeOperator(knex);
       q.andWhere((w) => {
-        for (const column of SEARCH_COLUMNS) w.orWhereRaw(`b.${column} LIKE ? ESCAPE '\\'`, [pattern]);
+        for (const column of SEARCH_COLUMNS) w.orWhereRaw(`b.${column} ${like} ? ESCAPE '\\'`, [pattern]);
       });
     }
     return q;
@@ -36,7 +38,7 @@ export async function listBuilds(workspaceId: number, query: BuildListQuery): Pr
   const text = query.sort in buildFields && buildFields[query.sort as keyof typeof buildFields].kind === 'text';
   const idRows: Array<{ id: number }> = await filtered()
     .select('b.id')
-    .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
+    .orderByRaw(`${text ? caseInsensitiveOrder(knex, column) : column} ${query.dir}`)
     .orderBy('b.id', query.dir)
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);

@@ -1,6 +1,7 @@
 import 'server-only';
 import type { Knex } from 'knex';
 import { db } from '@/db/knex';
+import { caseInsensitiveOrder, likeOperator } from '@/db/dialect';
 import { TABLES } from '@/db/tables';
 import { TEMPLATE_SEARCH_FIELDS, type TemplateListQuery } from '@/lib/templates/list-query';
 import { searchWords } from '@/lib/templates/search-words';
@@ -28,11 +29,12 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   const knex = db();
   const filtered = () => {
     const q = knex(`${TABLES.templates} as t`).where('t.workspace_id', workspaceId);
-    if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true' ? 1 : 0);
+    if (query.archived !== 'all') q.andWhere('t.archived', query.archived === 'true');
+    const like = likeOperator(knex);
     for (const word of searchWords(query.q ?? '')) {
       const pattern = likePattern(word);
       q.andWhere((w) => {
-        for (const field of TEMPLATE_SEARCH_FIELDS) w.orWhereRaw(`t.${field.column} LIKE ? ESCAPE '\\'`, [pattern]);
+        for (const field of TEMPLATE_SEARCH_FIELDS) w.orWhereRaw(`t.${field.column} ${like} ? ESCAPE '\\'`, [pattern]);
       });
     }
     return q;
@@ -45,7 +47,7 @@ export async function listTemplates(workspaceId: number, query: TemplateListQuer
   // Unknown measurements last in either direction; columns that are never NULL skip the term, so an index can give the order.
   if (NULLABLE_SORT_KEYS.has(query.sort)) ids.orderByRaw(`${column} IS NULL`);
   const idRows: Array<{ id: number; total?: number }> = await ids
-    .orderByRaw(`${column}${text ? ' COLLATE NOCASE' : ''} ${query.dir}`)
+    .orderByRaw(`${text ? caseInsensitiveOrder(knex, column) : column} ${query.dir}`)
     .orderBy('t.id', query.dir)
     .limit(query.pageSize)
     .offset((query.page - 1) * query.pageSize);

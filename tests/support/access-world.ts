@@ -28,7 +28,7 @@ export const WORLD_PASSWORD = 'correct-horse-battery';
 export async function createAccessWorld(): Promise<AccessWorld> {
   await closeDb();
   const temp = await createTempDb();
-  process.env.RIMSCALE_DB_FILE = temp.file;
+  temp.useInApp();
   const { knex } = temp;
   // Cost 4 keeps the fixture fast; the app hashes with its own cost.
   const passwordHash = bcrypt.hashSync(WORLD_PASSWORD, 4);
@@ -63,7 +63,6 @@ export async function createAccessWorld(): Promise<AccessWorld> {
     cleanup: async () => {
       await closeDb();
       await temp.cleanup();
-      delete process.env.RIMSCALE_DB_FILE;
     },
   };
 }

@@ -91,7 +91,7 @@ describe('the authorization matrix covers every guarded route', () => {
 
 async function runRoute(row: (typeof ROUTE_MATRIX)[number], actor: Actor): Promise<{ status: number; body: string }> {
   const world = await createAccessWorld();
-  resetAllLimits();
+  await resetAllLimits();
   try {
     const call = (await row.call?.(world, actor)) ?? {};
     const params = { workspace: world.shop.slug, ...call.params };

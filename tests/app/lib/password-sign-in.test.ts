@@ -19,8 +19,8 @@ const PASSWORD = 'plain-text-marker-71-correct';
 const mail = useMailFakeForFile();
 const world = useAccessWorldPerTest();
 const consoleCalls: unknown[][] = [];
-beforeEach(() => {
-  resetAllLimits();
+beforeEach(async () => {
+  await resetAllLimits();
   consoleCalls.length = 0;
   for (const level of ['log', 'info', 'warn', 'error', 'debug'] as const) {
     vi.spyOn(console, level).mockImplementation((...args: unknown[]) => void consoleCalls.push(args));

@@ -7,7 +7,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import { DELETE as removeRoute, PATCH as roleRoute } from '@/app/api/v1/workspaces/[workspace]/members/[userId]/route';
 import { activityLine } from '@/components/workspace/activity-words';
 import { workspaceActivity } from '@/db/activity';
-import { api, SAMPLE } from '@/tests/api/templates-support';
+import { api, SAMPLE } from '@/tests/app/api/v1/workspaces/[workspace]/templates/templates-support';
 import { callRoute } from '@/tests/support/call-route';
 import { useAccessWorldPerTest } from '@/tests/support/route-test-hooks';
 import { actAs } from '@/tests/support/session';

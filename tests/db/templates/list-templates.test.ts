@@ -15,7 +15,8 @@ const BORES = [40, null, 38, null, 45];
 
 beforeAll(async () => {
   temp = await createTempDb();
-  process.env.RIMSCALE_DB_FILE = temp.file;
+  await closeDb();
+  temp.useInApp();
   const [row] = await temp.knex(TABLES.workspaces).insert({ slug: 'list-shop', name: 'List shop', kind: 'shop' }).returning('id');
   workspaceId = (row as { id: number }).id;
   const templates = NAMES.map((name, i) => ({ ...EMPTY_TEMPLATE, name, description: i % 2 ? 'kart engine' : 'moped engine', boreMm: BORES[i]! }));
@@ -24,7 +25,6 @@ beforeAll(async () => {
 
 afterAll(async () => {
   await closeDb();
-  delete process.env.RIMSCALE_DB_FILE;
   await temp.cleanup();
 });
 

@@ -8,13 +8,12 @@ afterEach(async () => {
   await closeDb();
   await cleanup?.();
   cleanup = undefined;
-  delete process.env.RIMSCALE_DB_FILE;
 });
 
 async function healthWith(options: { migrate: boolean }) {
   const temp = await createTempDb(options);
   cleanup = temp.cleanup;
-  process.env.RIMSCALE_DB_FILE = temp.file;
+  temp.useInApp();
   const response = await GET();
   return { status: response.status, body: await response.json() };
 }

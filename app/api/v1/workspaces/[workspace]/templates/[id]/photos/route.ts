@@ -30,8 +30,8 @@ export async function POST(incoming: Request, { params }: TemplateParams): Promi
     const base = `templates/${template.id}/${randomUUID()}`;
     const storageKey = `${base}.${PHOTO_EXTENSIONS[photo.contentType]}`;
     const thumbKey = `${base}-thumb.webp`;
-    await putObject(storageKey, photo.data);
-    await putObject(thumbKey, photo.thumbnail);
+    await putObject(storageKey, photo.data, photo.contentType);
+    await putObject(thumbKey, photo.thumbnail, 'image/webp');
     try {
       const stored = await insertPhoto({
         templateId: template.id,

@@ -13,7 +13,7 @@ const world = useAccessWorldPerTest();
 let ws: string;
 beforeEach(async () => {
   ws = world.shop.slug;
-  resetAllLimits();
+  await resetAllLimits();
   await fetch(`http://127.0.0.1:${mail.httpPort}/messages`, { method: 'DELETE' });
 });
 
