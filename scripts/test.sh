@@ -10,6 +10,7 @@ echo "== typecheck"
 npx next typegen >/dev/null # route types and next-env.d.ts, which tsc reads
 npx tsc --noEmit
 echo "== unit and integration tests (SQLite; storage on local disk and on the S3 fake)"
+bash scripts/ensure-tools.sh
 npx vitest run
 echo "== data-layer and API tests on PostgreSQL"
 bash scripts/test-postgres.sh
