@@ -248,7 +248,7 @@ function ScaleSection({ numbering }: { numbering: 'split' | 'full' }) {
         help={
           <>
             A disc on the face or a strip on the rim turns with the flywheel; a flange ring or a strip on the casing stays still.{' '}
-            <strong className="text-spark-600">Choosing the wrong one puts the marks after TDC instead of before.</strong>
+            <strong className="text-spark-700 dark:text-spark-400">Choosing the wrong one puts the marks after TDC instead of before.</strong>
           </>
         }
       />

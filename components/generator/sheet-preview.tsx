@@ -122,7 +122,7 @@ export function SheetPreview({
         {state.status === 'failed' ? <p className="text-red-700 dark:text-red-400">{state.message}</p> : null}
         {state.status === 'ready' && state.warnings.length > 0 ? (
           <div className="rounded-md border border-spark-400/60 bg-spark-400/10 p-3 text-steel-800 dark:text-steel-200">
-            <p className="text-xs font-bold uppercase tracking-wider text-spark-600">Layout notes</p>
+            <p className="text-xs font-bold uppercase tracking-wider text-spark-700 dark:text-spark-400">Layout notes</p>
             <ul data-testid="layout-warnings" className="mt-1 list-disc space-y-0.5 pl-5 text-xs">
               {state.warnings.map((warning) => (
                 <li key={warning}>{warning}</li>
