@@ -6,6 +6,7 @@ import * as createTemplates from './migrations/20261201000600_create_templates';
 import * as addSessionVersion from './migrations/20261201001500_add_session_version';
 import * as createBuilds from './migrations/20261203000900_create_builds';
 import * as addDefaultPrinterProfile from './migrations/20261203001000_add_default_printer_profile';
+import * as createBuildPhotos from './migrations/20261203001100_create_build_photos';
 import * as createImportReceipts from './migrations/20261203110000_create_import_receipts';
 import * as templateListSortIndexes from './migrations/20261203001400_template_list_sort_indexes';
 
@@ -24,6 +25,7 @@ const MIGRATIONS: Record<string, Migration> = {
   '20261201001500_add_session_version.ts': addSessionVersion,
   '20261203000900_create_builds.ts': createBuilds,
   '20261203001000_add_default_printer_profile.ts': addDefaultPrinterProfile,
+  '20261203001100_create_build_photos.ts': createBuildPhotos,
   '20261203110000_create_import_receipts.ts': createImportReceipts,
   '20261203001400_template_list_sort_indexes.ts': templateListSortIndexes,
 };

@@ -14,4 +14,5 @@ export const TABLES = {
   builds: 'builds',
   buildRevisions: 'build_revisions',
   buildSends: 'build_sends',
+  buildPhotos: 'build_photos',
 } as const;

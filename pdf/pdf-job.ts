@@ -13,7 +13,7 @@ import { renderSheetPdf } from './render-sheet-pdf';
  */
 export type PdfJob =
   | { kind: 'sheet'; props: { request: SheetRequest; day: string; locale: string } }
-  | { kind: 'buildRecord'; props: { build: Build; shopName: string; paper: CopyPaper } };
+  | { kind: 'buildRecord'; props: { build: Build; shopName: string; paper: CopyPaper; dateFormat: DateFormat } };
 
 /** The bytes, and what the layout could not draw as asked (a sheet's warnings; none for other documents). */
 export type RenderedPdf = { bytes: Uint8Array; notes: string[] };
@@ -34,8 +34,8 @@ const RENDERERS: Renderers = {
     const drawing = buildDrawing(request, { date: dayStart(day), dateFormat: dayFormat(locale) });
     return { bytes: await renderSheetPdf(drawing, { createdAt: dayStart(day) }), notes: drawing.warnings };
   },
-  async buildRecord({ build, shopName, paper }) {
-    return { bytes: await renderBuildRecordPdf(build, shopName, paper), notes: [] };
+  async buildRecord({ build, shopName, paper, dateFormat }) {
+    return { bytes: await renderBuildRecordPdf(build, shopName, paper, dateFormat), notes: [] };
   },
 };
 

@@ -9,6 +9,7 @@ import type { Access } from './authz';
 import { customerCopyMail } from './emails';
 import { sendMail } from './mailer';
 import { renderPdf } from './pdf-pool';
+import type { DateFormat } from '@/lib/format/date-format';
 
 /** The file name of a record's customer's copy. */
 export function customerCopyFileName(build: Build): string {
@@ -19,8 +20,8 @@ export function customerCopyFileName(build: Build): string {
  * Mails the customer's copy to the record's customer e-mail through the app's mailer, then
  * records the send on the record and in the audit log. Answers the record with the send.
  */
-export async function sendCustomerCopy(access: Access, build: Build, paper: CopyPaper): Promise<Build> {
-  const pdf = Buffer.from((await renderPdf({ kind: 'buildRecord', props: { build, shopName: access.workspace.name, paper } })).bytes);
+export async function sendCustomerCopy(access: Access, build: Build, paper: CopyPaper, dateFormat: DateFormat): Promise<Build> {
+  const pdf = Buffer.from((await renderPdf({ kind: 'buildRecord', props: { build, shopName: access.workspace.name, paper, dateFormat } })).bytes);
   const engine = [build.engineDescription, build.engineNumber].filter(Boolean).join(', ') || 'as recorded';
   await sendMail(
     customerCopyMail(

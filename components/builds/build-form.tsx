@@ -122,12 +122,14 @@ function TimingCheck() {
 function MeasuredPorts({ results, toleranceDeg }: { results: ReturnType<typeof liveResults>; toleranceDeg: number }) {
   const { control, register } = useFormContext<Input>();
   const { fields, append, remove } = useFieldArray({ control, name: 'ports' });
+  const typed = useWatch({ control, name: 'ports' }) ?? [];
   const error = useFieldError('ports');
   return (
     <div className="space-y-2">
       <p className="text-xs text-steel-500">Each port’s top edge measured down from the cylinder top (the port calculator’s figure). Rows left blank are not saved.</p>
       {fields.map((field, index) => {
-        const port = results.ports.find((p) => p.name === (field as { name?: string }).name) ?? undefined;
+        // Results are keyed by the name as typed now (rows without a height have none).
+        const port = results.ports.find((p) => p.name === (typed[index]?.name || 'Port'));
         return (
           <div key={field.id} className="grid items-end gap-2 sm:grid-cols-[10rem_8rem_1fr_auto]">
             <PortCell index={index} part="name" label="Port" register={register} />

@@ -10,6 +10,7 @@ import type { Build, BuildPage } from '@/lib/builds/build';
 import { BUILD_FIELD_LIST, BUILD_STATUSES } from '@/lib/builds/build-fields';
 import { buildListViewFromParams, buildListViewHref, buildListViewToParams, type BuildListView } from '@/lib/builds/list-view';
 import { StatusBadge } from './status-badge';
+import { formatDate, type DateFormat } from '@/lib/format/date-format';
 
 const features = tableFeatures({});
 const helper = createColumnHelper<typeof features, Build>();
@@ -65,7 +66,8 @@ function idOrUndefined(value: string): number | undefined {
 }
 
 /** The build records of a workspace: SWR reads each page from the JSON API (search, filters, sort and paging in SQL). */
-export function BuildList({ slug, technicians, templates }: { slug: string; technicians: Option[]; templates: Option[] }) {
+/** `dateFormat` comes from the page (the reader's locale and the deployment's time zone), so dates read as on the server. */
+export function BuildList({ slug, technicians, templates, dateFormat }: { slug: string; technicians: Option[]; templates: Option[]; dateFormat: DateFormat }) {
   const { view, show } = useListView();
   const { text, setText } = useSearchText(view.q, show);
   const params = buildListViewToParams(view);
@@ -76,7 +78,7 @@ export function BuildList({ slug, technicians, templates }: { slug: string; tech
     () =>
       helper.columns([
         ...FIELD_COLUMNS.map((c) =>
-          helper.accessor((row) => String(row[c.key as keyof Build] ?? ''), {
+          helper.accessor((row) => (c.key === 'openedOn' ? formatDate(row.openedOn, dateFormat) : String(row[c.key as keyof Build] ?? '')), {
             id: c.key,
             header: c.header,
             cell: (info) => {
@@ -94,9 +96,9 @@ export function BuildList({ slug, technicians, templates }: { slug: string; tech
         ),
         helper.accessor((row) => row.technician?.name ?? '', { id: 'technician', header: 'Technician' }),
         helper.accessor((row) => row.template?.name ?? '', { id: 'template', header: 'Template' }),
-        helper.accessor((row) => row.updatedAt.slice(0, 10), { id: 'updatedAt', header: 'Updated' }),
+        helper.accessor((row) => formatDate(row.updatedAt, dateFormat), { id: 'updatedAt', header: 'Updated' }),
       ]),
-    [slug],
+    [slug, dateFormat],
   );
   const sortable = new Set([...FIELD_COLUMNS.filter((c) => c.sortable).map((c) => c.key), 'updatedAt']);
 

@@ -8,7 +8,9 @@ import type { TemplateSheetKind } from '@/lib/templates/template-sheet';
 const KIND_LABELS: Record<TemplateSheetKind, string> = { wheel: 'degree wheel', ring: 'flange ring', strip: 'rim strip' };
 
 /** Open the sheet maker filled from the record: its template's diameters, the timing set as the mark, the TDC correction as the note. */
-export function BuildPrintLinks({ template, build, sheetUrl, profileName }: { template: Template | null; build: Build; sheetUrl: string; profileName: string | null }) {
+type Props = { template: Template | null; build: Build; sheetUrl: string; profileName: string | null; workspaceSlug: string };
+
+export function BuildPrintLinks({ template, build, sheetUrl, profileName, workspaceSlug }: Props) {
   if (!template) return <p className="text-sm text-steel-600">Choose the template this engine was built from to print its sheets from here.</p>;
   const kinds = buildSheetKinds(template);
   if (kinds.length === 0) return <p className="text-sm text-steel-600">The template has no flywheel diameters yet: add them to print from this record.</p>;
@@ -17,7 +19,7 @@ export function BuildPrintLinks({ template, build, sheetUrl, profileName }: { te
       <ul className="space-y-2">
         {kinds.map((kind) => (
           <li key={kind} className="flex flex-wrap items-center gap-3 text-sm">
-            <Link href={generatorHref(buildSheetRequest(template, build, kind)!)} className="rounded-md bg-spark-500 px-3 py-1.5 font-semibold text-steel-950 hover:bg-spark-400">
+            <Link href={`${generatorHref(buildSheetRequest(template, build, kind)!)}&workspace=${workspaceSlug}`} className="rounded-md bg-spark-500 px-3 py-1.5 font-semibold text-steel-950 hover:bg-spark-400">
               Print a {KIND_LABELS[kind]} for this engine
             </Link>
             <a href={`${sheetUrl}?kind=${kind}&format=pdf`} className="text-gauge-700 underline dark:text-gauge-300">

@@ -1,9 +1,10 @@
 import Link from 'next/link';
 import type { BuildPage } from '@/lib/builds/build';
 import { StatusBadge } from './status-badge';
+import { formatDate, type DateFormat } from '@/lib/format/date-format';
 
 /** The template page's list of the engines built from it, newest change first, with a link to start another. */
-export function TemplateBuilds({ slug, templateId, page, canCreate }: { slug: string; templateId: number; page: BuildPage; canCreate: boolean }) {
+export function TemplateBuilds({ slug, templateId, page, canCreate, dateFormat }: { slug: string; templateId: number; page: BuildPage; canCreate: boolean; dateFormat: DateFormat }) {
   return (
     <section aria-labelledby="builds-heading" className="space-y-2">
       <h2 id="builds-heading" className="text-lg font-semibold">
@@ -16,7 +17,7 @@ export function TemplateBuilds({ slug, templateId, page, canCreate }: { slug: st
             <Link href={`/w/${slug}/builds/${b.id}`} className="text-gauge-700 underline dark:text-gauge-300">
               {b.customerName}
             </Link>
-            <span className="text-steel-600">{[b.engineNumber, b.openedOn, `template version ${b.templateVersion ?? '—'}`].filter(Boolean).join(' · ')}</span>
+            <span className="text-steel-600">{[b.engineNumber, formatDate(b.openedOn, dateFormat), `template version ${b.templateVersion ?? '—'}`].filter(Boolean).join(' · ')}</span>
             <StatusBadge status={b.status} />
           </li>
         ))}

@@ -18,6 +18,21 @@ const SIDE_OPTIONS = [
   { value: 'ATDC', label: 'ATDC' },
 ] as const;
 
+/** One stop's reading, and on a split wheel the side of TDC it was read on. */
+function StopReading({ stop, which, split }: { stop: 'A' | 'B'; which: string; split: boolean }) {
+  return (
+    <div className="space-y-2">
+      <NumberField<TdcInput>
+        name={`reading${stop}Deg`}
+        label={`Reading ${stop} (${which})`}
+        unit="°"
+        help={split ? '0–180, as the pointer reads it.' : '0–360, as the pointer reads it.'}
+      />
+      {split ? <ChoiceGroup<TdcInput> name={`reading${stop}Side`} legend={`Reading ${stop} is on the`} options={SIDE_OPTIONS} /> : null}
+    </div>
+  );
+}
+
 /** Two positive-stop readings → where TDC really reads on the wheel, and how to correct it. */
 export function TdcCalculator() {
   const form = useForm<TdcInput, unknown, TdcRequest>({
@@ -46,24 +61,8 @@ export function TdcCalculator() {
             ]}
           />
           <div className="grid gap-4 sm:grid-cols-2">
-            <div className="space-y-2">
-              <NumberField<TdcInput>
-                name="readingADeg"
-                label="Reading A (first stop)"
-                unit="°"
-                help={split ? '0–180, as the pointer reads it.' : '0–360, as the pointer reads it.'}
-              />
-              {split ? <ChoiceGroup<TdcInput> name="readingASide" legend="Reading A is on the" options={SIDE_OPTIONS} /> : null}
-            </div>
-            <div className="space-y-2">
-              <NumberField<TdcInput>
-                name="readingBDeg"
-                label="Reading B (other stop)"
-                unit="°"
-                help={split ? '0–180, as the pointer reads it.' : '0–360, as the pointer reads it.'}
-              />
-              {split ? <ChoiceGroup<TdcInput> name="readingBSide" legend="Reading B is on the" options={SIDE_OPTIONS} /> : null}
-            </div>
+            <StopReading stop="A" which="first stop" split={split} />
+            <StopReading stop="B" which="other stop" split={split} />
           </div>
           <div className="rounded-md bg-steel-100 p-3 text-sm text-steel-700 dark:bg-steel-800 dark:text-steel-200">
             <p className="font-semibold">Quicker habit: read the sweep and halve it</p>

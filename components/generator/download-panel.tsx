@@ -2,7 +2,7 @@
 
 import Link from 'next/link';
 import { useState } from 'react';
-import { describeScale } from '@/lib/printer-profile';
+import { describeScale, type PrinterProfile } from '@/lib/printer-profile';
 import type { FieldIssue, SheetRequest } from '@/lib/sheet/sheet-request';
 import { usePrinterProfiles } from '@/components/printer-check/use-printer-profiles';
 import { downloadSheet } from './download-sheet';
@@ -11,6 +11,12 @@ import { inputClass } from './fields';
 type Status = { kind: 'idle' } | { kind: 'busy'; format: string } | { kind: 'saved'; fileName: string } | { kind: 'error'; error: string; issues: FieldIssue[] };
 
 const NO_CORRECTION = '';
+
+/** The printer profiles saved in the signed-in user's chosen workspace, and which one is its default. */
+export type WorkspacePrinterProfiles = { workspaceName: string; profiles: PrinterProfile[]; defaultId: string | null };
+
+/** Workspace profiles and browser profiles share one select: their ids are kept apart by a prefix. */
+const workspaceOptionId = (id: string) => `workspace:${id}`;
 
 /** The PDF is the main download; the SVG (for editors and cutters) is offered beside it. */
 const FORMATS = [
@@ -28,14 +34,19 @@ const FORMATS = [
  */
 export function DownloadPanel({
   validate,
+  workspace,
 }: {
   validate: (onValid: (request: SheetRequest) => void, onInvalid: () => void) => Promise<void>;
+  workspace?: WorkspacePrinterProfiles | null;
 }) {
-  const profiles = usePrinterProfiles();
+  const localProfiles = usePrinterProfiles();
+  const workspaceProfiles = (workspace?.profiles ?? []).map((p) => ({ ...p, id: workspaceOptionId(p.id) }));
+  const profiles = [...workspaceProfiles, ...localProfiles];
   const [chosenId, setChosenId] = useState<string | undefined>(undefined);
   const [status, setStatus] = useState<Status>({ kind: 'idle' });
-  // Until the user chooses, the newest profile is offered: it was made for this printer.
-  const selectedId = chosenId ?? profiles[0]?.id ?? NO_CORRECTION;
+  // Until the user chooses: the workspace's default profile, else the newest one kept in this browser (made for this printer).
+  const workspaceDefault = workspace?.defaultId ? workspaceOptionId(workspace.defaultId) : undefined;
+  const selectedId = chosenId ?? workspaceDefault ?? localProfiles[0]?.id ?? NO_CORRECTION;
   const profile = profiles.find((p) => p.id === selectedId);
 
   const download = (format: 'pdf' | 'svg') =>
@@ -59,7 +70,16 @@ export function DownloadPanel({
         </label>
         <select id="printer-profile" value={selectedId} onChange={(e) => setChosenId(e.target.value)} className={inputClass} aria-describedby="printer-profile-help">
           <option value={NO_CORRECTION}>No correction</option>
-          {profiles.map((p) => (
+          {workspace && workspaceProfiles.length > 0 ? (
+            <optgroup label={workspace.workspaceName}>
+              {workspaceProfiles.map((p) => (
+                <option key={p.id} value={p.id}>
+                  {p.name} ({describeScale(p)}){p.id === workspaceDefault ? ', workspace default' : ''}
+                </option>
+              ))}
+            </optgroup>
+          ) : null}
+          {localProfiles.map((p) => (
             <option key={p.id} value={p.id}>
               {p.name} ({describeScale(p)})
             </option>

@@ -12,7 +12,7 @@ import { sheetRequestFields as fields } from '@/lib/sheet/sheet-request-fields';
 import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
 import { toSheetRequestInput, usesField, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
-import { DownloadPanel } from './download-panel';
+import { DownloadPanel, type WorkspacePrinterProfiles } from './download-panel';
 import { PortEventsField } from './port-events-field';
 import { SheetPreview } from './sheet-preview';
 import { PrintAtActualSize, SafetyPanel } from './safety-panel';
@@ -41,7 +41,15 @@ const DIAMETER_HELP: Partial<Record<SheetKind, React.ReactNode>> = {
 };
 
 /** The sheet generator: form on the left, live preview and downloads on the right. */
-export function GeneratorForm({ defaultValues, ignored }: { defaultValues: GeneratorFormValues; ignored: IgnoredParam[] }) {
+export function GeneratorForm({
+  defaultValues,
+  ignored,
+  workspace = null,
+}: {
+  defaultValues: GeneratorFormValues;
+  ignored: IgnoredParam[];
+  workspace?: WorkspacePrinterProfiles | null;
+}) {
   const form = useForm<GeneratorFormValues, unknown, SheetRequest>({
     defaultValues,
     resolver: generatorResolver,
@@ -71,7 +79,7 @@ export function GeneratorForm({ defaultValues, ignored }: { defaultValues: Gener
         <div className="space-y-4 lg:sticky lg:top-4 lg:self-start">
           <SheetPreview request={request} describeIssue={(issue) => issueInUnit(issue, { ...defaultValues, ...values }, values.lengthUnit)} />
           <PrintAtActualSize />
-          <DownloadPanel validate={validate} />
+          <DownloadPanel validate={validate} workspace={workspace} />
           <SafetyPanel />
         </div>
       </div>

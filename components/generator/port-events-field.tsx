@@ -68,26 +68,18 @@ function PortEventRow({
         <td className="pr-2 align-top">
           <input aria-label={`Port ${index + 1} name`} aria-describedby={errorId} className={inputClass} placeholder="Exhaust" {...register(names.name)} />
         </td>
-        <td className="pr-2 align-top">
-          <input
-            aria-label={`Port ${index + 1} opening angle`}
-            aria-describedby={errorId}
-            type="number"
-            step="any"
-            className={`${inputClass} font-mono`}
-            {...register(names.opens, { valueAsNumber: true })}
-          />
-        </td>
-        <td className="pr-2 align-top">
-          <input
-            aria-label={`Port ${index + 1} closing angle`}
-            aria-describedby={errorId}
-            type="number"
-            step="any"
-            className={`${inputClass} font-mono`}
-            {...register(names.closes, { valueAsNumber: true })}
-          />
-        </td>
+        {(['opening', 'closing'] as const).map((event) => (
+          <td key={event} className="pr-2 align-top">
+            <input
+              aria-label={`Port ${index + 1} ${event} angle`}
+              aria-describedby={errorId}
+              type="number"
+              step="any"
+              className={`${inputClass} font-mono`}
+              {...register(event === 'opening' ? names.opens : names.closes, { valueAsNumber: true })}
+            />
+          </td>
+        ))}
         <td className="align-top">
           <button type="button" onClick={onRemove} className="rounded px-2 py-2 text-xs text-steel-600 hover:bg-steel-100 dark:text-steel-300 dark:hover:bg-steel-800">
             Remove<span className="sr-only"> port {index + 1}</span>

@@ -10,7 +10,7 @@ const KIND_LABELS: Record<TemplateSheetKind, string> = {
 };
 
 /** One row per sheet the template's diameters allow: open it in the sheet maker, or download PDF / SVG directly. */
-export function PrintLinks({ template, sheetUrl }: { template: Template; sheetUrl: string }) {
+export function PrintLinks({ template, sheetUrl, workspaceSlug }: { template: Template; sheetUrl: string; workspaceSlug?: string }) {
   const kinds = availableSheetKinds(template);
   if (kinds.length === 0)
     return <p className="text-sm text-steel-600">Add a flywheel face or rim diameter to print from this template.</p>;
@@ -19,7 +19,7 @@ export function PrintLinks({ template, sheetUrl }: { template: Template; sheetUr
       {kinds.map((kind) => (
         <li key={kind} className="flex flex-wrap items-center gap-3 text-sm">
           <Link
-            href={generatorHref(templateSheetRequest(template, kind)!)}
+            href={`${generatorHref(templateSheetRequest(template, kind)!)}${workspaceSlug ? `&workspace=${workspaceSlug}` : ''}`}
             className="rounded-md bg-spark-500 px-3 py-1.5 font-semibold text-steel-950 hover:bg-spark-400"
           >
             Print a {KIND_LABELS[kind]}

@@ -24,3 +24,7 @@ export async function workspaceToleranceDeg(knex: Knex | Knex.Transaction, works
   const row: { build_tolerance_deg: number } | undefined = await knex(TABLES.workspaces).where('id', workspaceId).first('build_tolerance_deg');
   return row?.build_tolerance_deg ?? 2;
 }
+
+export async function setWorkspaceToleranceDeg(knex: Knex | Knex.Transaction, workspaceId: number, toleranceDeg: number): Promise<void> {
+  await knex(TABLES.workspaces).where('id', workspaceId).update({ build_tolerance_deg: toleranceDeg });
+}

@@ -5,8 +5,8 @@ import { BUILD_FIELD_LIST } from './build-fields';
 
 /**
  * Build records as CSV: a column per field the field table gives a `csvColumn`, then the
- * measurements and results that are lists. Every cell, numbers included, goes through the
- * templates' formula guard, so no cell can start a spreadsheet formula.
+ * measurements and results that are lists. Every cell goes through the shared formula guard
+ * (lib/csv/formula-guard.ts), so no cell can start a spreadsheet formula.
  */
 
 type Column = { header: string; cell: (b: Build) => unknown };

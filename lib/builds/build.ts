@@ -1,6 +1,9 @@
-import type { FieldChange, UserRef } from '@/lib/templates/template';
+import type { FieldChange, TemplatePhoto, UserRef } from '@/lib/templates/template';
 import type { BuildFields } from './build-fields';
 import type { BuildPortResult, BuildResults } from './build-results';
+
+/** A photo of the engine as set up: stored like a template photo (content-checked, re-encoded, no metadata). */
+export type BuildPhoto = Omit<TemplatePhoto, 'templateId'> & { buildId: number };
 
 /** A send of the customer's copy: when, to whom, by whom. */
 export type BuildSend = { id: number; to: string; sentAt: string; sentBy: UserRef };

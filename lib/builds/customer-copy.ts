@@ -1,5 +1,6 @@
 import type { Build } from './build';
 import { buildFields, type BuildStatus } from './build-fields';
+import { DEFAULT_DATE_FORMAT, formatDate, type DateFormat } from '@/lib/format/date-format';
 
 /**
  * The words and figures of the customer's copy of a build record, in the order the page
@@ -117,7 +118,8 @@ function otherRows(build: Build): CopyRow[] {
   return rows;
 }
 
-export function customerCopy(build: Build, shopName: string): CustomerCopy {
+/** `dateFormat` writes the copy's date for its reader (DEVELOPERS.md, "Dates"). */
+export function customerCopy(build: Build, shopName: string, dateFormat: DateFormat = DEFAULT_DATE_FORMAT): CustomerCopy {
   const notes = build.notes.length > COPY_NOTES_MAX ? `${build.notes.slice(0, COPY_NOTES_MAX).trimEnd()} … (the full notes are kept in the shop’s record)` : build.notes;
   const portNotes = build.ports.filter((p) => p.status !== 'opens').map((p) => `${p.name}: ${p.note}`);
   if (build.blowdownDeg !== null) portNotes.unshift(`Blowdown (exhaust opens before the transfers): ${degText(build.blowdownDeg)}`);
@@ -125,7 +127,7 @@ export function customerCopy(build: Build, shopName: string): CustomerCopy {
     shopName,
     title: 'Engine timing record',
     reference: `Record ${build.id}, version ${build.version}`,
-    date: build.handedOverOn ?? build.finishedOn ?? build.openedOn,
+    date: formatDate(build.handedOverOn ?? build.finishedOn ?? build.openedOn, dateFormat),
     job: jobRows(build),
     tdc: tdcRows(build),
     timing: timingRows(build),

@@ -56,6 +56,9 @@ export function dateFormatFor(acceptLanguage: string | null | undefined, timeZon
   return { locale: localeFromAcceptLanguage(acceptLanguage), timeZone: timeZoneOrUtc(timeZone) };
 }
 
+// A calendar day as stored ("2026-12-01": opened on, finished on) is a date without a clock: written as it is, in no zone.
+const CALENDAR_DAY = /^\d{4}-\d{2}-\d{2}$/;
+
 // SQLite's CURRENT_TIMESTAMP (knex.fn.now()) is UTC written without a zone: "2026-12-01 12:00:00".
 const SQLITE_UTC = /^\d{4}-\d{2}-\d{2} \d{2}:\d{2}:\d{2}$/;
 
@@ -73,9 +76,10 @@ function written(value: string | Date, format: DateFormat, parts: Intl.DateTimeF
   return date ? new Intl.DateTimeFormat(format.locale, { ...parts, timeZone: format.timeZone }).format(date) : '';
 }
 
-/** The calendar day, e.g. "1 Dec 2026" (en-GB) or "Dec 1, 2026" (en-US); '' for no time. */
+/** The calendar day, e.g. "1 Dec 2026" (en-GB) or "Dec 1, 2026" (en-US); '' for no time. A stored day keeps its date. */
 export function formatDate(value: string | Date, format: DateFormat): string {
-  return written(value, format, DATE_PARTS);
+  const day = typeof value === 'string' && CALENDAR_DAY.test(value);
+  return written(value, day ? { ...format, timeZone: 'UTC' } : format, DATE_PARTS);
 }
 
 /** The day and the time with its zone, e.g. "1 Dec 2026, 12:00 UTC" (en-GB); '' for no time. */

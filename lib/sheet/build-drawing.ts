@@ -14,12 +14,13 @@ import { ringLayout, wheelLayout } from './wheel-layout';
 import { scribeLayout } from './scribe-chart';
 import { stripLayout } from './strip-layout';
 import { formatDeg } from './scale-marks';
+import { howToSteps } from './how-to';
 
 /** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"). */
 export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
-export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean };
+export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean; howToOnPiece?: boolean };
 
 /** Pre-scales by the printer correction (before any placing or tiling) and frames the result. */
 function correctedBlock(shapes: readonly Shape[], req: SheetRequest, padMm: number, centreMm?: [number, number]): Block {
@@ -33,7 +34,7 @@ function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): S
     case 'wheel':
     case 'ring': {
       const polar = req.kind === 'wheel' ? wheelLayout(req) : ringLayout(req);
-      return { blocks: [correctedBlock(polar.shapes, req, 1, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false };
+      return { blocks: [correctedBlock(polar.shapes, req, 1, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false, howToOnPiece: polar.howToOnPiece };
     }
     case 'strip': {
       const strip = stripLayout(req, printable);
@@ -140,25 +141,20 @@ export function labelWarnings(shapes: readonly Shape[]): string[] {
  * so a bad one fails with the schema's field messages rather than drawing nonsense.
  */
 export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): Drawing {
-  const request = sheetRequestSchema.parse(input);
-  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, MIN_MARGIN_MM) };
-  const title = sheetTitle(request);
-  const contentFor = (layout?: ScaleLayout): InfoContent => ({
-    title,
-    request,
-    notes: layout ? [...layout.warnings, ...labelWarnings(layout.blocks.flatMap((block) => block.parts.flatMap((part) => part.shapes)))] : [],
-    lines: titleBlockLines(request, {
-      date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
-      ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
-      ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
-    }),
-  });
-  // The scribe chart's first page holds what the info panel leaves; its lines do not depend on the table.
-  const infoHeightMm = request.kind === 'scribe' ? infoBlock(contentFor(), request, printableMm(page).widthMm).heightMm : 0;
-  let layout = scaleLayout(request, page, infoHeightMm);
-  const content = contentFor(layout);
-  const infoAt = infoByWidth(content, request);
-  const plain = arrange(page, layout, infoAt);
+  const asked = sheetRequestSchema.parse(input);
+  let chosen = planSheet(asked, options);
+  let orientationNote: string[] = [];
+  if (chosen.plain.multiPage) {
+    // A sheet that fits one page the other way round is laid out that way, and says so.
+    const turned: SheetRequest = { ...asked, orientation: asked.orientation === 'portrait' ? 'landscape' : 'portrait' };
+    const other = planSheet(turned, options);
+    if (!other.plain.multiPage) {
+      chosen = other;
+      orientationNote = [`Laid out on ${asked.paper} ${turned.orientation}: it fits one page that way, not ${asked.orientation}`];
+    }
+  }
+  const { request, page, title, infoAt, infoHeightMm, plain } = chosen;
+  let { layout } = chosen;
   let paged: PagedDrawing;
   if (!plain.multiPage) paged = plain.place();
   else {
@@ -167,8 +163,36 @@ export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): D
     if (request.kind === 'scribe') layout = scaleLayout(request, banded, infoHeightMm);
     paged = addPageBands(arrange(banded, layout, infoAt).place(), banded, title, request);
   }
-  const warnings = [...layout.warnings, ...labelWarnings(paged.shapes), ...paged.warnings];
+  const warnings = [...orientationNote, ...layout.warnings, ...labelWarnings(paged.shapes), ...paged.warnings];
   const drawing: Drawing = { sizeMm: paged.sizeMm, shapes: paged.shapes, pages: paged.pages, warnings, title };
   if (paged.centreMm) drawing.centreMm = paged.centreMm;
   return assertFiniteDrawing(drawing);
+}
+
+/** The graduation levels left out are said in the title block's own line; the notes keep the rest. */
+function sheetNotes(layout: ScaleLayout): string[] {
+  const shapes = layout.blocks.flatMap((block) => block.parts.flatMap((part) => part.shapes));
+  return [...layout.warnings.filter((w) => !/graduations left out/.test(w)), ...labelWarnings(shapes)];
+}
+
+/** Pieces, info panel and their arrangement on one orientation, before anything is placed. */
+function planSheet(request: SheetRequest, options: BuildOptions) {
+  const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, MIN_MARGIN_MM) };
+  const title = sheetTitle(request);
+  const contentFor = (layout?: ScaleLayout): InfoContent => ({
+    title,
+    request,
+    notes: layout ? sheetNotes(layout) : [],
+    howTo: layout?.howToOnPiece ? [] : howToSteps(request),
+    lines: titleBlockLines(request, {
+      date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
+      ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
+      ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
+    }),
+  });
+  // The scribe chart's first page holds what the info panel leaves; its lines do not depend on the table.
+  const infoHeightMm = request.kind === 'scribe' ? infoBlock(contentFor(), request, printableMm(page).widthMm).heightMm : 0;
+  const layout = scaleLayout(request, page, infoHeightMm);
+  const infoAt = infoByWidth(contentFor(layout), request);
+  return { request, page, title, layout, infoAt, infoHeightMm, plain: arrange(page, layout, infoAt) };
 }

@@ -8,14 +8,15 @@ import { CAUTIONS, PRINT_AT_100, whichWayNote } from './sheet-notes';
 import { arrow, circle, line, path, rect, text } from './shapes';
 import { STROKE_MM, TEXT_MM } from './sheet-style';
 import { wrapText } from './text-wrap';
+import { howToRows, howToShapes } from './how-to';
 
 /** Title block, print line, "which way" note with its small diagram, cautions and the scale check. */
 
 /** `notes`: what the layout could not draw as asked, and why (printed on the sheet as well as returned). */
-export type InfoContent = { title: string; lines: string[]; request: SheetRequest; notes: string[] };
+export type InfoContent = { title: string; lines: string[]; request: SheetRequest; notes: string[]; howTo: string[] };
 
-const LINE_GAP = 1.38; // line height as a share of the text size
-const GUTTER_MM = 5;
+const LINE_GAP = 1.3; // line height as a share of the text size
+const GUTTER_MM = 4;
 const MIN_TEXT_COLUMN_MM = 58;
 
 function paragraph(shapes: Shape[], content: string, x: number, y: number, sizeMm: number, widthMm: number, weight: 'normal' | 'bold' = 'normal', role?: string): number {
@@ -68,17 +69,29 @@ function textColumn(content: InfoContent, widthMm: number): { shapes: Shape[]; h
   y += 0.6;
   for (const row of content.lines) y = paragraph(shapes, row, 1.5, y, TEXT_MM.small, widthMm - 3);
   shapes.push(rect(0, boxTop - 0.4, widthMm, y - boxTop + 1, STROKE_MM.fine, 'none', { role: 'title-block' }));
-  y += 2.5;
+  y += 1.8;
   if (content.notes.length) {
     y = paragraph(shapes, `Layout notes: ${content.notes.join(' · ')}`, 0, y, TEXT_MM.small, widthMm, 'normal', 'layout-notes');
     y += 1;
   }
   y = paragraph(shapes, PRINT_AT_100, 0, y, TEXT_MM.body, widthMm, 'bold', 'print-at-100');
-  y += 1;
-  y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
-  const diagram = whichWayDiagram(content.request, 4, y);
-  shapes.push(...diagram.shapes);
-  y += diagram.heightMm + 1;
+  y += 0.5;
+  if (content.howTo.length) {
+    shapes.push(...howToShapes(content.howTo, widthMm, 0, y));
+    y += howToRows(content.howTo, widthMm).heightMm + 1.5;
+  }
+  if (content.request.kind === 'strip') {
+    y = paragraph(shapes, whichWayNote(content.request), 0, y, TEXT_MM.small, widthMm, 'normal', 'which-way-note');
+    const diagram = whichWayDiagram(content.request, 4, y);
+    shapes.push(...diagram.shapes);
+    y += diagram.heightMm;
+  } else {
+    // The round diagram (about 34 mm wide with its labels) stands left of the note, which wraps beside it.
+    const diagram = whichWayDiagram(content.request, 6, y);
+    shapes.push(...diagram.shapes);
+    const noteEnd = paragraph(shapes, whichWayNote(content.request), 37, y, TEXT_MM.small, widthMm - 37, 'normal', 'which-way-note');
+    y = Math.max(noteEnd, y + diagram.heightMm);
+  }
   y = paragraph(shapes, CAUTIONS, 0, y, TEXT_MM.small, widthMm, 'normal', 'cautions');
   return { shapes, heightMm: y };
 }

@@ -111,14 +111,16 @@ export function tileOversized(info: Block, big: Block, page: PageSpec): PagedDra
   const ys = tileStarts(big.heightMm, window.heightMm, TILE_OVERLAP_MM);
   const viewWidth = Math.min(window.widthMm, big.widthMm);
   const viewHeight = Math.min(window.heightMm, big.heightMm);
-  // Crosses in the middle of every overlap, once per neighbouring row or column.
+  // Crosses in every overlap, once per neighbouring row or column: in its middle and near both of
+  // the tile's corners, so neighbours line up along the whole seam, not only near the centre.
+  const along = (start: number, length: number) => (length > 40 ? [start + 8, start + length / 2, start + length - 8] : [start + length / 2]);
   for (let i = 0; i + 1 < xs.length; i += 1) {
     const xc = bx + (xs[i + 1]! + xs[i]! + viewWidth) / 2;
-    for (const y of ys) shapes.push(...registrationCross(xc, by + y + viewHeight / 2));
+    for (const y of ys) for (const yc of along(by + y, viewHeight)) shapes.push(...registrationCross(xc, yc));
   }
   for (let j = 0; j + 1 < ys.length; j += 1) {
     const yc = by + (ys[j + 1]! + ys[j]! + viewHeight) / 2;
-    for (const x of xs) shapes.push(...registrationCross(bx + x + viewWidth / 2, yc));
+    for (const x of xs) for (const xc of along(bx + x, viewWidth)) shapes.push(...registrationCross(xc, yc));
   }
   const pages: PageLayout[] = [];
   const tileNames: Array<string | undefined> = [];

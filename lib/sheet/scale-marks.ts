@@ -90,7 +90,25 @@ export function bandIntervals(bandDeg: readonly [number, number], range: ScaleMa
 }
 
 function nearAny(alongDeg: number, marks: readonly PlacedMark[], withinDeg: number): boolean {
-  return marks.some((mark) => Math.abs(mark.alongDeg - alongDeg) < withinDeg);
+  return marks.some((mark) => Math.abs(mark.alongDeg - alongDeg) < withinDeg - 1e-9);
+}
+
+/**
+ * Where a numeral goes: on its tick, or, when a heavy mark would strike it through, offset just
+ * clear of that mark (the side its tick is on first); only a numeral boxed in by marks on both
+ * sides is left off.
+ */
+function numeralAlongDeg(tickAlongDeg: number, marks: readonly PlacedMark[], clearDeg: number, numeralPitchDeg: number): number | undefined {
+  if (!nearAny(tickAlongDeg, marks, clearDeg)) return tickAlongDeg;
+  const nearest = marks.reduce((best, mark) => (Math.abs(mark.alongDeg - tickAlongDeg) < Math.abs(best.alongDeg - tickAlongDeg) ? mark : best));
+  const side = tickAlongDeg >= nearest.alongDeg ? 1 : -1;
+  for (const s of [side, -side]) {
+    const candidate = nearest.alongDeg + s * clearDeg;
+    // A numeral is about 2 × clearDeg wide: the offset one must still clear its neighbours' numerals.
+    const shift = Math.abs(candidate - tickAlongDeg);
+    if (shift <= 2 * clearDeg && numeralPitchDeg - shift >= 2.1 * clearDeg && !nearAny(candidate, marks, clearDeg)) return candidate;
+  }
+  return undefined;
 }
 
 export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
@@ -124,10 +142,14 @@ export function scaleMarks(options: ScaleMarksOptions): ScaleMarks {
   );
 
   const stride20 = 20 * options.numberStride;
+  const clearDeg = options.numberClearDeg ?? 1.5;
+  const marked = [...advance, ...ports];
   const numbers: PlacedMark[] = ticks
     .filter((tick) => tick.level === 10 && tick.crankIndex % stride20 === 0)
-    .filter((tick) => !nearAny(tick.alongDeg, advance, options.numberClearDeg ?? 1.5) && !nearAny(tick.alongDeg, ports, options.numberClearDeg ?? 1.5))
-    .map((tick) => ({ alongDeg: tick.alongDeg, crankDeg: tick.crankDeg, label: graduationNumber(tick.crankDeg, options.numbering) }));
+    .flatMap((tick) => {
+      const alongDeg = numeralAlongDeg(tick.alongDeg, marked, clearDeg, 10 * options.numberStride);
+      return alongDeg === undefined ? [] : [{ alongDeg, crankDeg: tick.crankDeg, label: graduationNumber(tick.crankDeg, options.numbering) }];
+    });
 
   const bands = options.advanceBandDeg ? bandIntervals(options.advanceBandDeg, range, carrier) : [];
   return { ticks, numbers, advance, ports, bands };

@@ -129,7 +129,13 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   const startData: ShapeData = { role: startRole };
   if (index === 0) startData.crankDeg = crankFromAlongDeg(segment.startAlongDeg, req.carrier);
   shapes.push(line(0, top, 0, top + w, STROKE_MM.heavy, tag(startData)));
-  if (!last) shapes.push(line(segment.markedMm, top - 1.5, segment.markedMm, top + w + 1.5, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
+  if (!last) {
+    // The join line breaks round the numeral row, so it never runs through a numeral at the join.
+    const rowTop = top + depths.numeralBaseline - 0.8 * depths.numeralSize - 0.3;
+    const rowBottom = top + depths.numeralBaseline + 0.25 * depths.numeralSize + 0.3;
+    shapes.push(line(segment.markedMm, top - 1.5, segment.markedMm, rowTop, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
+    shapes.push(line(segment.markedMm, rowBottom, segment.markedMm, top + w + 1.5, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
+  }
   else {
     const endAlong = segment.startAlongDeg + segment.markedMm / plan.mmPerDeg;
     shapes.push(line(segment.markedMm, top, segment.markedMm, top + w, STROKE_MM.heavy, tag({ role: plan.window ? 'window-end' : 'seam', crankDeg: crankFromAlongDeg(endAlong, req.carrier) })));

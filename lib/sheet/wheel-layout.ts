@@ -5,11 +5,14 @@ import { polarScaleShapes, POLAR_DEPTH_MM, TICK_DEPTH_MM } from './polar-scale';
 import { numberStrideFor, scaleMarks } from './scale-marks';
 import type { SheetRequest } from './sheet-request';
 import { circle, line } from './shapes';
+import { textCornersMm } from './bounds';
+import { howToInCircle, howToSteps } from './how-to';
 import { STROKE_MM, textWidthMm } from './sheet-style';
 
 /** Degree wheels (ticks inward from the cut edge) and flange rings (ticks outward from the inner edge). */
 
-export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[] };
+/** `howToOnPiece`: the "how to use" steps are drawn in the free middle (else the info panel carries them). */
+export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[]; howToOnPiece: boolean };
 
 const MIN_DEPTH_SCALE = 0.02;
 // Ticks, numerals, band and one lane of mark labels inside the annulus.
@@ -66,7 +69,10 @@ export function wheelLayout(req: SheetRequest): PolarLayout {
   ];
   if (hubRadiusMm > 0) shapes.push(circle(0, 0, hubRadiusMm, STROKE_MM.outline, { role: 'hub-hole' }));
   shapes.push(...scale.shapes);
-  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings };
+  // The steps go in the blank middle of the scale, below the centre cross or hub hole, when they fit.
+  const howTo = howToInCircle(howToSteps(req), [0, 0], nearestInkMm(scale.shapes) - 1.5, Math.max(crossMm, hubRadiusMm) + 1.5);
+  if (howTo) shapes.push(...howTo);
+  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings, howToOnPiece: howTo !== undefined };
 }
 
 /** A flange ring centred on (0, 0): two cut circles, ticks outward from the inner edge where the flywheel mark reads. */
@@ -80,5 +86,19 @@ export function ringLayout(req: SheetRequest): PolarLayout {
     circle(0, 0, innerRadiusMm, STROKE_MM.outline, { role: 'cut-line-inner' }),
     ...scale.shapes,
   ];
-  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings };
+  // The hole is cut away, so the steps may fill it: read before cutting.
+  const howTo = howToInCircle(howToSteps(req), [0, 0], innerRadiusMm - 2, 0);
+  if (howTo) shapes.push(...howTo);
+  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings, howToOnPiece: howTo !== undefined };
+}
+
+/** How near to the centre (0, 0) any of the scale's ink comes. */
+function nearestInkMm(shapes: readonly Shape[]): number {
+  let nearest = Infinity;
+  for (const shape of shapes) {
+    const points: Array<readonly [number, number]> =
+      shape.type === 'text' ? textCornersMm(shape) : shape.type === 'line' ? [[shape.x1Mm, shape.y1Mm], [shape.x2Mm, shape.y2Mm]] : shape.type === 'path' ? shape.pointsMm : [];
+    for (const [x, y] of points) nearest = Math.min(nearest, Math.hypot(x, y));
+  }
+  return nearest;
 }

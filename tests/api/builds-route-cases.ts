@@ -1,3 +1,6 @@
+import os from 'node:os';
+import path from 'node:path';
+import { putObject } from '@/app/lib/storage';
 import type { AccessWorld } from '@/tests/support/access-world';
 import { guardedBy, type Actor } from '@/tests/support/policy-expectations';
 import type { RouteCase } from '@/tests/support/route-matrix';
@@ -49,6 +52,18 @@ async function withBuildFromTemplate(world: AccessWorld, actor: Actor) {
   return { params: { workspace: workspaceFor(world, actor), id: String(await seedBuild(world, { template_id: templateId, template_version: 1 })) }, search: '?kind=strip&format=svg' };
 }
 
+async function withBuildPhoto(world: AccessWorld, actor: Actor) {
+  process.env.RIMSCALE_UPLOAD_DIR = path.join(os.tmpdir(), 'rimscale-matrix-uploads');
+  const buildId = await seedBuild(world);
+  const key = `builds/${buildId}/matrix-${actor.toLowerCase()}`;
+  await putObject(`${key}.png`, Buffer.from('stored bytes'));
+  await putObject(`${key}-thumb.webp`, Buffer.from('thumb bytes'));
+  const [row] = await world.knex(TABLES.buildPhotos)
+    .insert({ build_id: buildId, storage_key: `${key}.png`, thumb_key: `${key}-thumb.webp`, content_type: 'image/png', width_px: 1, height_px: 1, bytes: 12, created_at: new Date().toISOString() })
+    .returning('id');
+  return { params: { workspace: workspaceFor(world, actor), id: String(buildId), photoId: String(row.id) } };
+}
+
 export const BUILD_ROUTE_CASES: RouteCase[] = [
   { file: `${B}/route.ts`, method: 'GET', ...guardedBy('build.read', 200) },
   { file: `${B}/route.ts`, method: 'POST', call: () => ({ body: { customerName: 'Matrix new' } }), ...guardedBy('build.edit', 201) },
@@ -59,6 +74,16 @@ export const BUILD_ROUTE_CASES: RouteCase[] = [
   { file: `${B}/[id]/revisions/route.ts`, method: 'GET', call: withBuild(), ...guardedBy('build.read', 200) },
   { file: `${B}/[id]/record/route.ts`, method: 'GET', call: withBuild({ search: '?format=pdf' }), ...guardedBy('build.read', 200) },
   { file: `${B}/[id]/sheet/route.ts`, method: 'GET', call: withBuildFromTemplate, ...guardedBy('sheet.print', 200) },
+  { file: `${B}/[id]/photos/route.ts`, method: 'GET', call: withBuild(), ...guardedBy('build.read', 200) },
+  // A form upload without a photo passes the role check and is then refused (400).
+  {
+    file: `${B}/[id]/photos/route.ts`,
+    method: 'POST',
+    call: withBuild({ raw: { type: 'multipart/form-data; boundary=matrix', body: '--matrix\r\nContent-Disposition: form-data; name="caption"\r\n\r\nx\r\n--matrix--\r\n' } }),
+    ...guardedBy('build.edit', 400),
+  },
+  { file: `${B}/[id]/photos/[photoId]/route.ts`, method: 'GET', call: withBuildPhoto, ...guardedBy('build.read', 200) },
+  { file: `${B}/[id]/photos/[photoId]/route.ts`, method: 'DELETE', call: withBuildPhoto, ...guardedBy('build.edit', 204) },
   // Without a customer e-mail the send stops past the role check with 400, so the matrix mails nobody.
   { file: `${B}/[id]/send/route.ts`, method: 'POST', call: withBuild({}, { customer_email: '' }), ...guardedBy('build.send', 400) },
 ];

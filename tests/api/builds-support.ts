@@ -3,6 +3,8 @@ import * as one from '@/app/api/v1/workspaces/[workspace]/builds/[id]/route';
 import * as revisions from '@/app/api/v1/workspaces/[workspace]/builds/[id]/revisions/route';
 import * as record from '@/app/api/v1/workspaces/[workspace]/builds/[id]/record/route';
 import * as send from '@/app/api/v1/workspaces/[workspace]/builds/[id]/send/route';
+import * as photos from '@/app/api/v1/workspaces/[workspace]/builds/[id]/photos/route';
+import * as photo from '@/app/api/v1/workspaces/[workspace]/builds/[id]/photos/[photoId]/route';
 
 /** Calls the build record route handlers directly, as Next would, with JSON helpers. */
 const BASE = 'http://test.local/api/v1/workspaces';
@@ -26,6 +28,13 @@ export const buildApi = {
   delete: (ws: string, id: number | string) => one.DELETE(json('DELETE', `${BASE}/${ws}/builds/${id}`), idParams(ws, id)),
   revisions: (ws: string, id: number | string) => revisions.GET(json('GET', `${BASE}/${ws}/builds/${id}/revisions`), idParams(ws, id)),
   record: (ws: string, id: number | string, query = '?format=pdf') => record.GET(json('GET', `${BASE}/${ws}/builds/${id}/record${query}`), idParams(ws, id)),
+  upload: (ws: string, id: number | string, file: Blob, fileName: string) => {
+    const form = new FormData();
+    form.set('photo', file, fileName);
+    return photos.POST(new Request(`${BASE}/${ws}/builds/${id}/photos`, { method: 'POST', body: form }), idParams(ws, id));
+  },
+  photo: (ws: string, id: number | string, photoId: number, size = '') =>
+    photo.GET(json('GET', `${BASE}/${ws}/builds/${id}/photos/${photoId}${size ? `?size=${size}` : ''}`), p({ workspace: ws, id: String(id), photoId: String(photoId) })),
   send: (ws: string, id: number | string) => send.POST(json('POST', `${BASE}/${ws}/builds/${id}/send`), idParams(ws, id)),
 };
 

@@ -1,6 +1,7 @@
 import { beforeEach, describe, expect, it, vi } from 'vitest';
 import * as portCalc from '@/app/api/v1/calc/port-events/route';
 import * as pistonDropCalc from '@/app/api/v1/calc/piston-drop/route';
+import * as buildSettings from '@/app/api/v1/workspaces/[workspace]/build-settings/route';
 import * as tdcCalc from '@/app/api/v1/calc/tdc/route';
 import { TABLES } from '@/db/tables';
 import { insertTemplates } from '@/db/templates/insert-templates';
@@ -111,6 +112,22 @@ describe('build records: computed results', () => {
     const templateId = await seedTemplate(world.shop.id);
     const build = await createAs(world.users.owner.id, { ...BUILD_SAMPLE, templateId });
     expect(build.toleranceDeg).toBe(0.5);
+    expect(build.ports[0].withinTolerance).toBe(false);
+  });
+
+  it('takes the tolerance from the workspace setting, which only those allowed its settings change, within its range', async () => {
+    const put = (toleranceDeg: unknown) => callRoute(buildSettings.PUT, { method: 'PUT', body: { toleranceDeg }, params: { workspace: ws } });
+    actAs(world.users.technician.id);
+    expect((await put(1)).status).toBe(403);
+    actAs(world.users.owner.id);
+    const tooWide = await put(20);
+    expect(tooWide.status).toBe(400);
+    expect(tooWide.json.issues).toEqual([{ path: 'toleranceDeg', message: 'Port duration tolerance must be at most 10° (allowed 0.5–10°)' }]);
+    expect((await put(1)).status).toBe(200);
+    const templateId = await seedTemplate(world.shop.id);
+    // Exhaust +1.06° from its target: within ±2° (the default, common practice) but outside ±1°.
+    const build = await createAs(world.users.technician.id, { ...BUILD_SAMPLE, templateId });
+    expect(build.toleranceDeg).toBe(1);
     expect(build.ports[0].withinTolerance).toBe(false);
   });
 

@@ -132,7 +132,8 @@ describe('concurrent edits (optimistic concurrency by version)', () => {
     const won = (await winner.json()).template;
     const lost = await loser.json();
     expect(won.version).toBe(2);
-    expect(lost.error).toMatch(new RegExp(`changed by ${won.updatedBy.name} at ${won.updatedAt.replace(/[.]/g, '\\.')}.*— reload`));
+    // The time is written for people: en-GB (no Accept-Language) in UTC, CLDR "d MMM y, HH:mm z", e.g. "3 Dec 2026, 07:58 UTC".
+    expect(lost.error).toMatch(new RegExp(`changed by ${won.updatedBy.name} at \\d{1,2} [A-Z][a-z]{2} \\d{4}, \\d{2}:\\d{2} UTC \\(now version 2\\) — reload`));
     expect(lost.issues[0].path).toBe('version');
     // The loser gets the current state back to re-apply its edit on: nothing silently overwritten.
     expect(lost.current).toEqual(won);

@@ -13,13 +13,13 @@ async function signIn(page: Page, email: string, password: string) {
   await expect(page).not.toHaveURL(/\/sign-in/);
 }
 
-/** Every page of the app (app/**\/page.tsx), dynamic segments filled with `params` (or 1). */
+/** Every page of the app (app/**\/page.tsx), a dynamic segment filled from `params` by "parent/[name]" or "[name]" (else 1). */
 function pagePaths(params: Record<string, string>): string[] {
   const walk = (dir: string): string[] =>
     fs.readdirSync(dir, { withFileTypes: true }).flatMap((e) => (e.isDirectory() ? walk(path.join(dir, e.name)) : e.name === 'page.tsx' ? [dir] : []));
   return walk(path.join(process.cwd(), 'app'))
     .map((dir) => path.relative(path.join(process.cwd(), 'app'), dir).split(path.sep).filter((s) => s && !/^\(.*\)$/.test(s)))
-    .map((segments) => `/${segments.map((s) => s.replace(/^\[(.+)\]$/, (_, name: string) => params[name] ?? '1')).join('/')}`)
+    .map((segments) => `/${segments.map((s, i) => params[`${segments[i - 1]}/${s}`] ?? params[s] ?? s.replace(/^\[.+\]$/, '1')).join('/')}`)
     .sort();
 }
 
@@ -34,8 +34,8 @@ test('every page passes its Content-Security-Policy and carries the security hea
   });
 
   await signIn(page, OWNER.email, OWNER.password);
-  const list = await (await page.request.get('/api/v1/workspaces/harbour-lane/templates?pageSize=1')).json();
-  const paths = pagePaths({ workspace: 'harbour-lane', id: String(list.items[0].id) });
+  const firstId = async (what: string) => String((await (await page.request.get(`/api/v1/workspaces/harbour-lane/${what}?pageSize=1`)).json()).items[0].id);
+  const paths = pagePaths({ '[workspace]': 'harbour-lane', 'templates/[id]': await firstId('templates'), 'builds/[id]': await firstId('builds') });
   expect(paths.length).toBeGreaterThan(15);
 
   for (const pathname of paths) {

@@ -160,7 +160,7 @@ describe('page sizes', () => {
     ['Legal', 'portrait', 612, 1008],
     ['Tabloid', 'landscape', 1224, 792],
   ] as const)('%s %s is %s × %s pt on every page', async (paper, orientation, widthPt, heightPt) => {
-    const { drawing } = sheet({ kind: 'wheel', diameterMm: 120, paper, orientation });
+    const { drawing } = sheet({ kind: 'wheel', diameterMm: 80, paper, orientation });
     const { pages } = await readPdfText(await renderSheetPdf(drawing));
     expect(pages.length).toBeGreaterThanOrEqual(1);
     for (const page of pages) {
@@ -174,7 +174,8 @@ describe('tiled sheets', () => {
   it.each([
     ['a 400 mm wheel on A4', { kind: 'wheel', diameterMm: 400 }],
     ['a 300 mm rim strip, 40 mm wide, on A4', { kind: 'strip', diameterMm: 300, stripWidthMm: 40 }],
-    ['a 300 mm rim strip on A4 landscape', { kind: 'strip', diameterMm: 300, orientation: 'landscape' }],
+    // (a 300 mm strip now fits one A4 portrait page, so the landscape case is a longer strip)
+    ['a 600 mm rim strip on A4 landscape', { kind: 'strip', diameterMm: 600, orientation: 'landscape' }],
   ] as Array<[string, SheetRequestInput]>)('%s takes several pages, each of the chosen size, none blank', async (_, input) => {
     const { drawing } = sheet(input);
     const pdf = await renderSheetPdf(drawing);

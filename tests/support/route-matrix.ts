@@ -188,6 +188,13 @@ export const ROUTE_MATRIX: RouteCase[] = [
     },
     ...guardedBy('printer-profile.edit', 204),
   },
+  { file: `${V1}/workspaces/[workspace]/build-settings/route.ts`, method: 'GET', ...guardedBy('build.read', 200) },
+  {
+    file: `${V1}/workspaces/[workspace]/build-settings/route.ts`,
+    method: 'PUT',
+    call: () => ({ body: { toleranceDeg: 1.5 } }),
+    ...guardedBy('workspace.settings', 200),
+  },
   { file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`, method: 'GET', ...guardedBy('printer-profile.read', 200) },
   {
     file: `${V1}/workspaces/[workspace]/printer-profiles/default/route.ts`,

@@ -12,6 +12,9 @@ import { PendingInvitations } from '@/components/workspace/pending-invitations';
 import { membersOf } from '@/db/accounts';
 import { auditOf } from '@/db/audit-log';
 import { pendingInvitations } from '@/db/invitations';
+import { BuildSettingsForm } from '@/components/builds/build-settings-form';
+import { workspaceToleranceDeg } from '@/db/builds/references';
+import { db } from '@/db/knex';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Workspace' };
@@ -29,11 +32,12 @@ export default async function WorkspaceHomePage({ params }: Props) {
     settings: can(role, 'workspace.settings'),
     audit: can(role, 'workspace.audit'),
   };
-  const [members, pending, audit, dateFormat] = await Promise.all([
+  const [members, pending, audit, dateFormat, toleranceDeg] = await Promise.all([
     membersOf(workspace.id),
     may.invite ? pendingInvitations(workspace.id) : Promise.resolve([]),
     may.audit ? auditOf(workspace.id, 20) : Promise.resolve([]),
     requestDateFormat(),
+    workspaceToleranceDeg(db(), workspace.id),
   ]);
   const invitations = pending.map(({ expiresAt, ...invitation }) => ({ ...invitation, expiresOn: formatDate(expiresAt, dateFormat) }));
   return (
@@ -84,6 +88,8 @@ export default async function WorkspaceHomePage({ params }: Props) {
             <div className="space-y-2">
               <h3 className="font-medium">Name</h3>
               <ShopNameForm renameSlug={workspace.slug} currentName={workspace.name} />
+              <h3 className="pt-2 font-medium">Build records</h3>
+              <BuildSettingsForm slug={workspace.slug} settings={{ toleranceDeg }} />
             </div>
           ) : null}
           {may.audit ? (

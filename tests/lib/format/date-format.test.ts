@@ -63,6 +63,12 @@ describe('formatDate and formatDateTime', () => {
     expect(formatDateTime(noon, utc('en-US')).replace(/\s/g, ' ')).toBe('Dec 1, 2026, 12:00 PM UTC');
   });
 
+  it('keeps a stored calendar day (opened on 2026-12-01) on its date in any zone: it has no clock to shift', () => {
+    // New York is UTC−5 in December (IANA tz database): midnight UTC would read as 30 November there.
+    expect(formatDate('2026-12-01', { locale: 'en-GB', timeZone: 'America/New_York' })).toBe('1 Dec 2026');
+    expect(formatDate('2026-12-01T00:00:00Z', { locale: 'en-GB', timeZone: 'America/New_York' })).toBe('30 Nov 2026');
+  });
+
   it('turns the day over in the stated zone: 23:30 UTC on 1 December is 00:30 on the 2nd in Berlin (UTC+1 in winter)', () => {
     const late = '2026-12-01 23:30:00';
     expect(formatDate(late, utc('en-GB'))).toBe('1 Dec 2026');

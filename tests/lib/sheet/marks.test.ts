@@ -84,7 +84,7 @@ describe('port events', () => {
     expect(labels.sort()).toEqual(['Exhaust closes 264°', 'Exhaust opens 96°']);
   });
 
-  // Analytic angles from the direction rule (PRODUCT.md §2 digest in lib/sheet/scale-direction.ts is
+  // Analytic angles from the direction rule (DEVELOPERS.md, "Rotation and carrier"; lib/sheet/scale-direction.ts is
   // what is under test, so the expectation is worked out here by hand): rotating cw, crank c lies
   // (360 − c)° clockwise from TDC as seen.
   it.each([
@@ -135,5 +135,24 @@ describe('port events', () => {
   it('appear on full-numbered strips too', () => {
     const drawing = buildDrawing(req({ kind: 'strip', diameterMm: 50, numbering: 'full', portEvents: ports }), { date: FIXED_DATE });
     expect(drawing.shapes.filter((s) => s.data?.role === 'port')).toHaveLength(2);
+  });
+});
+
+describe('numerals next to a mark', () => {
+  it('are offset clear of the heavy line, not dropped: 100, 260 and 340 stay on a full wheel with ports at 98/262 and 18° BTDC', () => {
+    const svg = parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 150, numbering: 'full', advanceMarksDeg: [18], portEvents: [{ name: 'EX', opensCrankDeg: 98, closesCrankDeg: 262 }] }), { date: FIXED_DATE })));
+    const numerals = svg.all('text').filter((t) => t.getAttribute('data-role') === 'numeral');
+    expect(numerals.map((t) => t.textContent).sort((a, b) => Number(a) - Number(b))).toEqual(Array.from({ length: 36 }, (_, i) => String(i * 10)));
+    const centre = centreOf(svg);
+    const markDeg = lines(svg, (el) => ['port', 'advance'].includes(el.getAttribute('data-role') ?? '')).map((m) => clockwiseDeg(centre, m.x1, m.y1));
+    // Each numeral's anchor keeps at least half its width (at its radius) from every mark: the line misses it.
+    for (const numeral of numerals) {
+      const x = n(numeral, 'x');
+      const y = n(numeral, 'y');
+      const r = Math.hypot(x - centre[0], y - centre[1]);
+      const halfDeg = ((n(numeral, 'font-size') * 0.6 * (numeral.textContent ?? '').length) / 2 / r) * (180 / Math.PI);
+      const at = clockwiseDeg(centre, x, y);
+      for (const deg of markDeg) expect(Math.abs(((at - deg + 540) % 360) - 180)).toBeGreaterThan(halfDeg * 0.95);
+    }
   });
 });

@@ -18,7 +18,8 @@ describe('pages', () => {
     ['Legal', 'landscape', 355.6, 215.9],
     ['Tabloid', 'portrait', 279.4, 431.8],
   ] as const)('%s %s pages are %s × %s mm', (paper, orientation, w, h) => {
-    const drawing = build({ kind: 'wheel', diameterMm: 120, paper, orientation });
+    // Small enough to fit one page either way round, so the orientation asked for is kept.
+    const drawing = build({ kind: 'wheel', diameterMm: 80, paper, orientation });
     for (const page of drawing.pages) expect(page.sizeMm).toEqual({ widthMm: w, heightMm: h });
     expectPagesPrintable(drawing);
   });
@@ -72,5 +73,44 @@ describe('pages', () => {
     const drawing = build({ kind: 'strip', diameterMm: 600, stripWidthMm: 40 });
     expect(drawing.pages.length).toBeGreaterThan(1);
     expectPagesPrintable(drawing);
+  });
+});
+
+describe('no spurious tiling', () => {
+  it('a 130/160 mm flange ring on A4 portrait is one page, ring and info panel together, untiled', () => {
+    const drawing = build({ kind: 'ring', innerDiameterMm: 130, outerDiameterMm: 160, advanceMarksDeg: [18], advanceBandDeg: [16, 20] });
+    expect(drawing.pages).toHaveLength(1);
+    expect(drawing.pages[0]!.sizeMm).toEqual({ widthMm: 210, heightMm: 297 }); // ISO 216 A4 portrait
+    expect(drawing.warnings.some((w) => /tiles|Laid out/.test(w))).toBe(false);
+    expectPagesPrintable(drawing);
+  });
+
+  it('turns the page when the other orientation holds the sheet on one page, and says so', () => {
+    // A 150 mm wheel asked on A4 landscape: 194 mm of printable height takes the wheel but not the panel
+    // below it, nor beside it; A4 portrait holds both.
+    const drawing = build({ kind: 'wheel', diameterMm: 150, orientation: 'landscape', advanceMarksDeg: [18] });
+    expect(drawing.pages).toHaveLength(1);
+    expect(drawing.pages[0]!.sizeMm).toEqual({ widthMm: 210, heightMm: 297 });
+    expect(drawing.warnings).toContain('Laid out on A4 portrait: it fits one page that way, not landscape');
+    expectPagesPrintable(drawing);
+  });
+
+  it('a 500 mm wheel still tiles on A4, its cut circle exactly 500 mm, with registration crosses near every tile corner that has neighbours', () => {
+    const drawing = build({ kind: 'wheel', diameterMm: 500 });
+    const tiles = drawing.pages.slice(0, -1);
+    expect(tiles.length).toBeGreaterThan(1);
+    const cut = drawing.shapes.find((s) => s.type === 'ellipse' && s.data?.role === 'cut-line');
+    expect(cut?.type === 'ellipse' && cut.rxMm).toBe(250);
+    const crosses = drawing.shapes.flatMap((s) => (s.type === 'ellipse' && s.data?.role === 'registration' ? [[s.cxMm, s.cyMm] as const] : []));
+    for (const a of tiles)
+      for (const b of tiles) {
+        const va = a.viewportMm;
+        const vb = b.viewportMm;
+        // Horizontal neighbours (same row, overlapping columns): crosses in the overlap within 12 mm of the top and bottom corners.
+        if (va.yMm !== vb.yMm || !(vb.xMm > va.xMm && vb.xMm < va.xMm + va.widthMm)) continue;
+        const inOverlap = crosses.filter(([x]) => x > vb.xMm && x < va.xMm + va.widthMm);
+        expect(inOverlap.some(([, y]) => y - va.yMm < 12 && y > va.yMm)).toBe(true);
+        expect(inOverlap.some(([, y]) => va.yMm + va.heightMm - y < 12 && y < va.yMm + va.heightMm)).toBe(true);
+      }
   });
 });

@@ -77,3 +77,24 @@ describe('every sheet says what it is and how to print it', () => {
     expect(sheetText({ kind: 'strip', diameterMm: 50, carrier: 'stationary' }).words).toContain('the BTDC marks lie behind TDC (against the arrow)');
   });
 });
+
+describe('how to use this sheet', () => {
+  it.each([
+    ['wheel', { kind: 'wheel', diameterMm: 150 }, ['Cut on the outer line', 'positive stop', 'pointer reads 0', 'Read the advance']],
+    ['ring', { kind: 'ring', innerDiameterMm: 130, outerDiameterMm: 160 }, ['outer and the inner circle', 'positive stop', '0 sits at the flywheel', 'Read the advance']],
+    ['strip', { kind: 'strip', diameterMm: 90 }, ['arrow pointing the way the rim moves', 'seam at BDC', 'glue tail under the start', 'positive stop']],
+    ['window strip', { kind: 'strip', diameterMm: 150, windowCrankDeg: [320, 10] }, ['arrow pointing the way the rim moves', 'positive stop']],
+    ['scribe chart', { kind: 'scribe', diameterMm: 120 }, ['dividers', 'positive stop', 'scribe the advance mark']],
+  ] as const)('%s: numbered steps under the heading, in the trade’s words', (_, input, phrases) => {
+    const { svg } = sheetText(input as unknown as Parameters<typeof sheetText>[0]);
+    expect(svg.all('text').some((t) => t.getAttribute('data-role') === 'how-to-heading' && t.textContent === 'How to use this sheet')).toBe(true);
+    const steps = svg.all('text').filter((t) => t.getAttribute('data-role') === 'how-to').map((t) => t.textContent).join(' ');
+    expect(steps).toMatch(/^1\. Print at 100 %/);
+    expect(steps).toContain(' 2. ');
+    for (const phrase of phrases) expect(steps).toContain(phrase);
+  });
+
+  it('the scale-check sheet has none', () => {
+    expect(sheetText({ kind: 'check' }).svg.all('text').some((t) => t.getAttribute('data-role') === 'how-to-heading')).toBe(false);
+  });
+});

@@ -5,6 +5,7 @@ import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { planStrip, STRIP_OVERLAP_MM, stripRange, windowSpanDeg } from '@/lib/sheet/strip-layout';
 import { FIXED_DATE, isTick, lines, n, parseSvg, req, type Line } from './svg-measure';
+import { textBox } from './text-boxes';
 
 function stripSvg(input: Omit<Parameters<typeof req>[0], 'kind'>) {
   const drawing = buildDrawing(req({ ...input, kind: 'strip' }), { date: FIXED_DATE });
@@ -162,5 +163,20 @@ describe('rim strip', () => {
     const lengths = plan.segments.map((s) => s.markedMm + s.extensionMm);
     expect(Math.max(...lengths)).toBeLessThanOrEqual(193);
     expect(plan.segments.reduce((sum, s) => sum + s.markedMm, 0)).toBeCloseTo(Math.PI * 200.1, 9);
+  });
+
+  it.each([120, 150, 300])('D = %s mm: the dashed join lines stop short of every numeral (no numeral box crossed)', (D) => {
+    const { svg } = stripSvg({ diameterMm: D });
+    const joins = lines(svg, (el) => el.getAttribute('data-role') === 'join');
+    expect(joins.length).toBeGreaterThan(0);
+    const numerals = svg.all('text').filter((t) => t.getAttribute('data-role') === 'numeral').map(textBox);
+    for (const join of joins)
+      for (const box of numerals) {
+        const xs = box.corners.map(([x]) => x);
+        const ys = box.corners.map(([, y]) => y);
+        const crossesX = join.x1 > Math.min(...xs) && join.x1 < Math.max(...xs);
+        const crossesY = Math.max(join.y1, join.y2) > Math.min(...ys) && Math.min(join.y1, join.y2) < Math.max(...ys);
+        expect(crossesX && crossesY, `join at x ${join.x1} through "${box.text}"`).toBe(false);
+      }
   });
 });

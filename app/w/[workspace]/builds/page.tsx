@@ -4,6 +4,7 @@ import { buildPageData } from '@/app/lib/build-page-data';
 import { pageAction } from '@/app/lib/page-access';
 import { BuildList } from '@/components/builds/build-list';
 import { can } from '@/lib/access-policy';
+import { requestDateFormat } from '@/app/lib/date-format';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Build records' };
@@ -38,7 +39,7 @@ export default async function BuildsPage({ params }: Props) {
           </a>
         </div>
       </div>
-      <BuildList slug={slug} technicians={technicians} templates={templates.map((t) => ({ id: t.id, name: t.name }))} />
+      <BuildList slug={slug} technicians={technicians} templates={templates.map((t) => ({ id: t.id, name: t.name }))} dateFormat={await requestDateFormat()} />
     </section>
   );
 }

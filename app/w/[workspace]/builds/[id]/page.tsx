@@ -8,6 +8,8 @@ import { StatusBadge } from '@/components/builds/status-badge';
 import { ActionButton } from '@/components/templates/template-actions';
 import { findStoredBuild } from '@/db/builds/find-build';
 import { listBuildRevisions } from '@/db/builds/revisions';
+import { listBuildPhotos } from '@/db/builds/photos';
+import { PhotoUpload } from '@/components/templates/photo-upload';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { findTemplate } from '@/db/templates/find-template';
 import { can } from '@/lib/access-policy';
@@ -15,6 +17,8 @@ import { buildFields, type BuildStatus } from '@/lib/builds/build-fields';
 import { statusChangeProblem } from '@/lib/builds/build-status';
 import { degText, mmText } from '@/lib/builds/customer-copy';
 import { parsePathId } from '@/lib/path-id';
+import { requestDateFormat } from '@/app/lib/date-format';
+import { formatDate, formatDateTime } from '@/lib/format/date-format';
 
 export const dynamic = 'force-dynamic';
 export const metadata: Metadata = { title: 'Build record' };
@@ -37,10 +41,12 @@ export default async function BuildPage({ params }: Props) {
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();
   const { build } = stored;
-  const [revisions, template, profile] = await Promise.all([
+  const [revisions, template, profile, photos, dateFormat] = await Promise.all([
     listBuildRevisions(build.id),
     build.templateId ? findTemplate(access.workspace.id, build.templateId) : Promise.resolve(null),
     defaultProfileOf(access.workspace.id),
+    listBuildPhotos(build.id),
+    requestDateFormat(),
   ]);
   const api = `/api/v1/workspaces/${slug}/builds/${build.id}`;
   const finalForMe = build.status === 'handed-over' && !can(access.role, 'build.reopen-handed-over');
@@ -63,10 +69,10 @@ export default async function BuildPage({ params }: Props) {
             {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
           </p>
           <p className="text-xs text-steel-500">
-            Opened {build.openedOn}
-            {build.finishedOn ? ` · finished ${build.finishedOn}` : ''}
-            {build.handedOverOn ? ` · handed over ${build.handedOverOn}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
-            {build.updatedBy?.name ?? 'a removed user'} at {build.updatedAt}
+            Opened {formatDate(build.openedOn, dateFormat)}
+            {build.finishedOn ? ` · finished ${formatDate(build.finishedOn, dateFormat)}` : ''}
+            {build.handedOverOn ? ` · handed over ${formatDate(build.handedOverOn, dateFormat)}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
+            {build.updatedBy?.name ?? 'a removed user'} at {formatDateTime(build.updatedAt, dateFormat)}
           </p>
           {build.template ? (
             <p className="text-xs text-steel-500">
@@ -119,7 +125,7 @@ export default async function BuildPage({ params }: Props) {
           <ul aria-label="Sent copies" className="text-sm">
             {build.sends.map((send) => (
               <li key={send.id}>
-                Sent to {send.to} at {send.sentAt} by {send.sentBy?.name ?? 'a removed user'}
+                Sent to {send.to} at {formatDateTime(send.sentAt, dateFormat)} by {send.sentBy?.name ?? 'a removed user'}
               </li>
             ))}
           </ul>
@@ -208,11 +214,31 @@ export default async function BuildPage({ params }: Props) {
         {build.notes ? <p className="whitespace-pre-line text-sm">{build.notes}</p> : null}
       </section>
 
+      <section aria-labelledby="photos-heading" className="space-y-3">
+        <h2 id="photos-heading" className="text-lg font-semibold">
+          Photos
+        </h2>
+        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
+        <ul className="flex flex-wrap gap-4">
+          {photos.map((photo) => (
+            <li key={photo.id} className="space-y-1">
+              <a href={`${api}/photos/${photo.id}`}>
+                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
+                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of the engine of ${build.customerName}`} className="h-40 rounded border border-steel-200 object-contain" />
+              </a>
+              <p className="max-w-60 text-xs">{photo.caption}</p>
+              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm="Delete this photo?" /> : null}
+            </li>
+          ))}
+        </ul>
+        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
+      </section>
+
       <section aria-labelledby="print-heading" className="space-y-2">
         <h2 id="print-heading" className="text-lg font-semibold">
           Print the sheets for this build
         </h2>
-        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} />
+        <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} workspaceSlug={slug} />
       </section>
 
       <section aria-labelledby="history-heading" className="space-y-2">
@@ -222,7 +248,7 @@ export default async function BuildPage({ params }: Props) {
         <ol className="space-y-1 text-sm">
           {revisions.map((r) => (
             <li key={r.id}>
-              Version {r.version} · {r.action} by {r.user?.name ?? 'a removed user'} at {r.createdAt}:{' '}
+              Version {r.version} · {r.action} by {r.user?.name ?? 'a removed user'} at {formatDateTime(r.createdAt, dateFormat)}:{' '}
               <span className="text-steel-600 dark:text-steel-300">{r.changes.map((c) => buildFields[c.field as keyof typeof buildFields]?.label ?? c.field).join(', ') || 'no field changes'}</span>
             </li>
           ))}

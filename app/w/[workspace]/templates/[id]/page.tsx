@@ -23,7 +23,6 @@ export const metadata: Metadata = { title: 'Engine template' };
 
 type Props = { params: Promise<{ workspace: string; id: string }> };
 
-
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
   const access = await pageAction(slug, 'template.read', `/w/${slug}/templates/${id}`);
@@ -89,7 +88,7 @@ export default async function TemplatePage({ params }: Props) {
         <h2 id="print-heading" className="text-lg font-semibold">
           Print from this template
         </h2>
-        <PrintLinks template={template} sheetUrl={`${api}/sheet`} />
+        <PrintLinks template={template} sheetUrl={`${api}/sheet`} workspaceSlug={slug} />
         <p className="text-xs text-steel-500">
           {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
         </p>
@@ -98,7 +97,7 @@ export default async function TemplatePage({ params }: Props) {
         </p>
       </section>
 
-      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} /> : null}
+      {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} dateFormat={dateFormat} /> : null}
 
       <section aria-labelledby="figures-heading" className="space-y-2">
         <h2 id="figures-heading" className="text-lg font-semibold">

@@ -1,6 +1,7 @@
 import { jsonError, parseJsonBody } from '@/app/lib/api';
 import { NOT_FOUND_MESSAGE, requireAction } from '@/app/lib/authz';
 import { guarded } from '@/app/lib/route-handler';
+import { deleteObject } from '@/app/lib/storage';
 import { deleteBuild } from '@/db/builds/delete-build';
 import { updateBuild } from '@/db/builds/update-build';
 import { can } from '@/lib/access-policy';
@@ -31,13 +32,15 @@ export async function PATCH(incoming: Request, { params }: BuildParams): Promise
   });
 }
 
-/** DELETE …/builds/[id] — build.delete: removes the record, its history and its sends. */
+/** DELETE …/builds/[id] — build.delete: removes the record, its history, its sends and its photo files. */
 export async function DELETE(incoming: Request, { params }: BuildParams): Promise<Response> {
   return guarded(incoming, {}, async () => {
     const { workspace, id } = await params;
     const access = await requireAction(workspace, 'build.delete');
     const buildId = parsePathId(id);
-    if (!buildId || !(await deleteBuild(access.workspace.id, buildId))) return jsonError(404, NOT_FOUND_MESSAGE);
+    const keys = buildId ? await deleteBuild(access.workspace.id, buildId) : null;
+    if (!keys) return jsonError(404, NOT_FOUND_MESSAGE);
+    await Promise.all(keys.map(deleteObject));
     return new Response(null, { status: 204 });
   });
 }

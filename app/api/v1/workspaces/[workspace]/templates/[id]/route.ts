@@ -10,6 +10,7 @@ import { guarded } from '@/app/lib/route-handler';
 import { templateNotFound, type TemplateParams } from '../_shared/template-params';
 import { updateResponse } from '../_shared/responses';
 import { templateFor } from '../_shared/template-for';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 /** GET …/templates/[id] — the template and its photos (template.read). */
 export async function GET(_request: Request, { params }: TemplateParams): Promise<Response> {
@@ -34,7 +35,7 @@ export async function PATCH(incoming: Request, { params }: TemplateParams): Prom
     const body = await parseJsonBody(request, templatePatchSchema);
     if (!body.ok) return body.response;
     const { version, ...changes } = body.data;
-    return updateResponse(await updateTemplate(access.workspace.id, templateId, access.user.id, version, changes));
+    return updateResponse(await updateTemplate(access.workspace.id, templateId, access.user.id, version, changes), dateFormatOf(request));
   });
 }
 

@@ -5,6 +5,7 @@ import { guarded } from '@/app/lib/route-handler';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 import { copyQuerySchema } from '../../_shared/copy-query';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -17,7 +18,7 @@ export async function GET(request: Request, { params }: BuildParams): Promise<Re
     if (!query.success) return jsonError(400, 'Some query parameters are not valid', toFieldIssues(query.error));
     let pdf;
     try {
-      pdf = await renderPdf({ kind: 'buildRecord', props: { build, shopName: access.workspace.name, paper: query.data.paper } });
+      pdf = await renderPdf({ kind: 'buildRecord', props: { build, shopName: access.workspace.name, paper: query.data.paper, dateFormat: dateFormatOf(request) } });
     } catch (error) {
       const busy = pdfPoolBusyResponse(error);
       if (busy) return busy;

@@ -7,6 +7,7 @@ import { buildFields } from '@/lib/builds/build-fields';
 import { toFieldIssues } from '@/lib/sheet/sheet-request';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 import { copyQuerySchema } from '../../_shared/copy-query';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
@@ -32,7 +33,7 @@ export async function POST(incoming: Request, { params }: BuildParams): Promise<
       throw err;
     }
     try {
-      return Response.json({ build: await sendCustomerCopy(access, build, query.data.paper) }, { status: 202 });
+      return Response.json({ build: await sendCustomerCopy(access, build, query.data.paper, dateFormatOf(request)) }, { status: 202 });
     } catch (err) {
       const busy = pdfPoolBusyResponse(err); // nothing was sent: the copy could not be drawn yet
       if (busy) return busy;

@@ -6,6 +6,7 @@ import { guarded } from '@/app/lib/route-handler';
 import { type TemplateParams } from '../../_shared/template-params';
 import { updateResponse } from '../../_shared/responses';
 import { templateFor } from '../../_shared/template-for';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 const archiveSchema = z.object({ version: versionSchema.optional(), archived: z.boolean().default(true) }).strict();
 
@@ -21,6 +22,9 @@ export async function POST(incoming: Request, { params }: TemplateParams): Promi
     const body = await parseJsonBody(new Request(request.url, { method: 'POST', body: text.trim() || '{}' }), archiveSchema);
     if (!body.ok) return body.response;
     const version = body.data.version ?? current.version;
-    return updateResponse(await updateTemplate(access.workspace.id, current.id, access.user.id, version, { archived: body.data.archived }));
+    return updateResponse(
+      await updateTemplate(access.workspace.id, current.id, access.user.id, version, { archived: body.data.archived }),
+      dateFormatOf(request),
+    );
   });
 }

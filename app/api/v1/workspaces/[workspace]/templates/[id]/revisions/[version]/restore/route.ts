@@ -8,6 +8,7 @@ import { guarded } from '@/app/lib/route-handler';
 import { templateNotFound } from '../../../../_shared/template-params';
 import { updateResponse } from '../../../../_shared/responses';
 import { templateFor } from '../../../../_shared/template-for';
+import { dateFormatOf } from '@/app/lib/date-format';
 
 type Params = { params: Promise<{ workspace: string; id: string; version: string }> };
 
@@ -30,6 +31,7 @@ export async function POST(incoming: Request, { params }: Params): Promise<Respo
         action: 'restore',
         restoredFromVersion: revision,
       }),
+      dateFormatOf(request),
     );
   });
 }
