@@ -1,7 +1,7 @@
 import 'server-only';
-import { renderToBuffer } from '@react-pdf/renderer';
 import type { Drawing } from '@/lib/sheet/drawing';
 import { loadSheetFonts } from './fonts';
+import { renderDocumentToBuffer } from './render-document';
 import { SheetDocument } from './sheet-document';
 
 /**
@@ -12,5 +12,5 @@ import { SheetDocument } from './sheet-document';
 export async function renderSheetPdf(drawing: Drawing, options: { createdAt?: Date } = {}): Promise<Buffer> {
   const fonts = await loadSheetFonts();
   // Called as a function: renderToBuffer wants the <Document> element itself.
-  return renderToBuffer(SheetDocument({ drawing, fonts, ...options }));
+  return renderDocumentToBuffer(SheetDocument({ drawing, fonts, ...options }));
 }
