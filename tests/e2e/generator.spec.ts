@@ -215,7 +215,9 @@ test('a 400 answer from the sheet API is listed field by field', async ({ page }
 
 test('the page shows the print-size line and the safety cautions', async ({ page }) => {
   await page.goto('/');
-  await expect(page.getByText('Print at 100 % / actual size — turn off fit-to-page')).toBeVisible();
-  await expect(page.getByText(/Take the plug lead off/)).toBeVisible();
-  await expect(page.getByText(/hole a piston/)).toBeVisible();
+  // The page's own text, not the same words printed on the sheet in the preview.
+  const pageText = (text: string | RegExp) => page.locator('p, li', { hasText: text }).first();
+  await expect(pageText('Print at 100 % / actual size — turn off fit-to-page')).toBeVisible();
+  await expect(pageText(/Take the plug lead off/)).toBeVisible();
+  await expect(pageText(/hole a piston/)).toBeVisible();
 });
