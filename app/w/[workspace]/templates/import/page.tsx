@@ -50,7 +50,7 @@ export default async function ImportTemplatesPage({ params }: Props) {
           </tbody>
         </table>
         <h3 className="font-medium">Example</h3>
-        <pre tabIndex={0} aria-label="Example CSV file" className="overflow-x-auto rounded bg-steel-100 p-3 text-xs dark:bg-steel-900">{EXAMPLE}</pre>
+        <pre tabIndex={0} aria-label="Example: the header row and one template" className="overflow-x-auto rounded bg-steel-100 p-3 text-xs dark:bg-steel-900">{EXAMPLE}</pre>
       </div>
     </section>
   );
