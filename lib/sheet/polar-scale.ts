@@ -1,5 +1,6 @@
 import { cosDeg, sinDeg } from '../angle';
 import type { Fill, GraduationLevel, Shape } from './drawing';
+import { levelOfHalfDegIndex } from './graduations';
 import { annularSectorMm } from './polar-band';
 import { polarPointMm } from './polar';
 import { spreadOnTurn } from './label-fan';
@@ -8,6 +9,7 @@ import { tangentialText, textInAnnulus, type Annulus } from './annulus-text';
 import { alongRotationDeg, wheelAngleFromAlongDeg, type Rotation, type Carrier } from './scale-direction';
 import { arrow, line, path, text } from './shapes';
 import { STROKE_MM, textWidthMm } from './sheet-style';
+import { strobeHalfWidthMm, STROBE_PAD_MM, type PlacedStrobe, type StrobeFit } from './strobe';
 
 /**
  * Bends a scale round a circle: the polar transform. Ticks start at the reading edge
@@ -31,6 +33,27 @@ export const POLAR_DEPTH_MM = {
   total: 31,
 } as const;
 
+export type PolarDepths = { readonly [K in keyof typeof POLAR_DEPTH_MM]: number } & { strobeFrom: number; strobeTo: number };
+
+/** The strobe figures' heavy ticks reach this deep, a millimetre past the 10° ticks; their white ground starts just beyond. */
+const STROBE_TICK_MM = TICK_DEPTH_MM[10] + 1;
+
+/**
+ * The depths of a scale (at full size): the usual ones, or with a strobe zone `strobeZoneMm` deep
+ * after the ticks, which pushes the band, labels, side labels and arrow that much deeper.
+ */
+export function polarDepths(strobeZoneMm = 0): PolarDepths {
+  if (strobeZoneMm <= 0) return { ...POLAR_DEPTH_MM, strobeFrom: 0, strobeTo: 0 };
+  const strobeFrom = STROBE_TICK_MM + 0.4;
+  const strobeTo = strobeFrom + strobeZoneMm;
+  const shift = Math.max(0, strobeTo + 0.8 - POLAR_DEPTH_MM.bandFrom);
+  const d = POLAR_DEPTH_MM;
+  return { ...d, bandFrom: d.bandFrom + shift, bandTo: d.bandTo + shift, labelFrom: d.labelFrom + shift, sideLabel: d.sideLabel + shift, arrow: d.arrow + shift, total: d.total + shift, strobeFrom, strobeTo };
+}
+
+/** The strobe figures on a wheel or ring: what to draw (strobe.ts) and how big, true mm. */
+export type PolarStrobe = { fit: StrobeFit; placed: PlacedStrobe };
+
 export type PolarScaleOptions = {
   centreMm: [number, number];
   edgeRadiusMm: number;
@@ -42,7 +65,8 @@ export type PolarScaleOptions = {
   bandFill: Fill;
   /** The advance band asked for, [from, to] ° BTDC, for its label. */
   bandDeg?: readonly [number, number];
-  strobe?: boolean;
+  depths: PolarDepths;
+  strobe?: PolarStrobe;
   /** How deep (mm from the edge) labels may go: a wheel stops short of its hub hole. */
   maxDepthMm: number;
 };
@@ -59,34 +83,34 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
     const a = angle(band.fromAlongDeg);
     const sweep = band.toAlongDeg - band.fromAlongDeg;
     const [fromCw, toCw] = o.rotation === 'cw' ? [a, a + sweep] : [a - sweep, a];
-    const radii = [radius(POLAR_DEPTH_MM.bandFrom), radius(POLAR_DEPTH_MM.bandTo)].sort((p, q) => p - q) as [number, number];
+    const radii = [radius(o.depths.bandFrom), radius(o.depths.bandTo)].sort((p, q) => p - q) as [number, number];
     for (const piece of annularSectorMm(o.centreMm, radii[0], radii[1], fromCw, toCw))
       shapes.push(path(piece.pointsMm, piece.closed, o.bandFill, STROKE_MM.fine, { role: 'advance-band' }));
   }
 
   tickShapes(o, radius, angle, shapes);
 
-  const numeralSize = POLAR_DEPTH_MM.numeralSize * f;
+  const numeralSize = o.depths.numeralSize * f;
   const numeralBaseline =
     sign < 0
-      ? TICK_DEPTH_MM[10] + POLAR_DEPTH_MM.numeralGap + 0.8 * POLAR_DEPTH_MM.numeralSize
-      : TICK_DEPTH_MM[10] + POLAR_DEPTH_MM.numeralGap + 0.25 * POLAR_DEPTH_MM.numeralSize;
+      ? TICK_DEPTH_MM[10] + o.depths.numeralGap + 0.8 * o.depths.numeralSize
+      : TICK_DEPTH_MM[10] + o.depths.numeralGap + 0.25 * o.depths.numeralSize;
   for (const number of o.marks.numbers) {
     const [x, y] = at(number.alongDeg, numeralBaseline);
     shapes.push(text(x, y, number.label, numeralSize, { anchor: 'middle', rotateDeg: angle(number.alongDeg), font: 'figures', data: { role: 'numeral', crankDeg: number.crankDeg } }));
   }
 
-  const labelSize = POLAR_DEPTH_MM.labelSize * f;
+  const labelSize = o.depths.labelSize * f;
   const labelled = [...o.marks.advance, ...o.marks.ports];
   const longestMm = Math.max(0, ...labelled.map((m) => textWidthMm(m.label, labelSize)));
-  const roomMm = o.maxDepthMm - POLAR_DEPTH_MM.labelFrom * f;
+  const roomMm = o.maxDepthMm - o.depths.labelFrom * f;
   // Radial labels need their length in depth; a narrow ring gets labels along the circle instead.
   const tangential = longestMm > roomMm && roomMm >= labelSize * 1.1;
   const piece = pieceAnnulus(o);
   // A narrow ring has no depth past the band for side labels and the arrow: they move into the band's
   // zone and the label zone, the arrow taking a stretch round BDC that mark labels then keep off.
-  const narrow = o.maxDepthMm / Math.max(f, 1e-6) < POLAR_DEPTH_MM.arrow + 5;
-  const arrow = narrow ? narrowRotationArrow(o, radius, piece) : { shapes: rotationArrow(o, radius(POLAR_DEPTH_MM.arrow)), blocked: [] };
+  const narrow = o.maxDepthMm / Math.max(f, 1e-6) < o.depths.arrow + 5;
+  const arrow = narrow ? narrowRotationArrow(o, radius, piece) : { shapes: rotationArrow(o, radius(o.depths.arrow)), blocked: [] };
   const plan: LabelPlan = { o, marks: labelled, longestMm, roomMm, radius, angle, at };
   const radial = tangential ? undefined : radialLabeller(plan);
   const radialLabel = radial ?? tangentialLabeller(plan, piece, arrow.blocked);
@@ -95,26 +119,75 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   for (const mark of o.marks.advance) {
     const [x1, y1] = at(mark.alongDeg, 0);
     // The target runs on past the band and carries a filled wedge at the reading edge.
-    const [x2, y2] = at(mark.alongDeg, mark.target ? POLAR_DEPTH_MM.bandTo + 0.7 : POLAR_DEPTH_MM.bandTo);
+    const [x2, y2] = at(mark.alongDeg, mark.target ? o.depths.bandTo + 0.7 : o.depths.bandTo);
     shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'advance', advanceDeg: mark.advanceDeg, crankDeg: mark.crankDeg }));
     if (mark.target) shapes.push(targetWedge(o, mark.alongDeg, at));
     shapes.push(...radialLabel(mark.alongDeg, mark.label, { role: 'advance-label', advanceDeg: mark.advanceDeg }));
   }
   for (const mark of o.marks.ports) {
     const [x1, y1] = at(mark.alongDeg, 0);
-    const [x2, y2] = at(mark.alongDeg, POLAR_DEPTH_MM.bandTo);
+    const [x2, y2] = at(mark.alongDeg, o.depths.bandTo);
     shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'port', crankDeg: mark.crankDeg }, 0.8 * f));
     shapes.push(...radialLabel(mark.alongDeg, mark.label, { role: 'port-label', crankDeg: mark.crankDeg }));
   }
 
+  shapes.push(...strobeShapes(o, radius, angle, at));
   shapes.push(...tdcPointer(o, at));
   for (const band of o.marks.bands.slice(0, 1)) shapes.push(...bandLabel(o, band, radius, angle, piece));
-  shapes.push(...sideLabels(o, at, angle, busyAlongDeg, piece, narrow ? radius((POLAR_DEPTH_MM.bandFrom + POLAR_DEPTH_MM.bandTo) / 2) : undefined));
+  shapes.push(...sideLabels(o, at, angle, busyAlongDeg, piece, narrow ? radius((o.depths.bandFrom + o.depths.bandTo) / 2) : undefined));
   shapes.push(...arrow.shapes);
   return shapes;
 }
 
 type At = (alongDeg: number, depthMm: number) => [number, number];
+
+/**
+ * The strobe figures: a heavy long tick on each, a white ground over their stretch (drawn over the
+ * mark lines, which resume past it), and the figures on it, along the circle (tops outward) or
+ * across it (along the radius, never upside down).
+ */
+function strobeShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, angle: (alongDeg: number) => number, at: At): Shape[] {
+  const strobe = o.strobe;
+  if (!strobe) return [];
+  const f = Math.max(o.depthScale, 1e-6);
+  const { fit, placed } = strobe;
+  const size = fit.sizeMm;
+  const sizeAtFull = size / f;
+  const shapes: Shape[] = [];
+  for (const n of placed.numerals) {
+    const [x1, y1] = at(n.alongDeg, 0);
+    const [x2, y2] = at(n.alongDeg, STROBE_TICK_MM);
+    shapes.push(line(x1, y1, x2, y2, STROKE_MM.heavy, { role: 'strobe-tick', crankDeg: n.crankDeg, level: levelOfHalfDegIndex(Math.round(n.crankDeg * 2) % 720) }));
+  }
+  const radii = [radius(o.depths.strobeFrom), radius(o.depths.strobeTo)].sort((p, q) => p - q) as [number, number];
+  // The straight figures reach farthest along the circle where it is smallest.
+  const marginDeg = (Math.atan2(strobeHalfWidthMm(fit.numerals, fit.orientation, size), radii[0]) * 180) / Math.PI;
+  for (const interval of placed.intervals) {
+    const a = angle(interval.fromAlongDeg - marginDeg);
+    const sweep = interval.toAlongDeg - interval.fromAlongDeg + 2 * marginDeg;
+    const [fromCw, toCw] = o.rotation === 'cw' ? [a, a + sweep] : [a - sweep, a];
+    for (const piece of annularSectorMm(o.centreMm, radii[0], radii[1], fromCw, toCw)) shapes.push(path(piece.pointsMm, piece.closed, 'white', STROKE_MM.fine, { role: 'strobe-band' }));
+  }
+  const sign = o.towards === 'centre' ? -1 : 1;
+  for (const n of placed.numerals) {
+    const theta = angle(n.alongDeg);
+    const data = { role: 'strobe-numeral', crankDeg: n.crankDeg };
+    if (fit.orientation === 'along') {
+      // The box runs 0.75 × size above the baseline and 0.2 below, tops outward: on a wheel the baseline is the deeper side.
+      const baseline = o.depths.strobeFrom + STROBE_PAD_MM + (sign < 0 ? 0.75 : 0.2) * sizeAtFull;
+      const [x, y] = at(n.alongDeg, baseline);
+      shapes.push(text(x, y, n.label, size, { anchor: 'middle', rotateDeg: theta, weight: 'bold', font: 'figures', data }));
+      continue;
+    }
+    const [rx, ry] = at(n.alongDeg, (o.depths.strobeFrom + o.depths.strobeTo) / 2);
+    const outward = (((theta % 360) + 360) % 360) - 90;
+    const rotateDeg = outward < 90 ? outward : outward + 180;
+    // The box's middle is 0.275 × size above the baseline: set the baseline that far off the ray.
+    const a = (rotateDeg * Math.PI) / 180;
+    shapes.push(text(rx - 0.275 * size * Math.sin(a), ry + 0.275 * size * Math.cos(a), n.label, size, { anchor: 'middle', rotateDeg, weight: 'bold', font: 'figures', data }));
+  }
+  return shapes;
+}
 
 /**
  * The graduations: the hot loop of every wheel (up to 720 ticks), kept small so it compiles on its own.
@@ -160,8 +233,8 @@ const MAX_FAN_MM = 15;
 function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: LabelPlan): Labeller & { labelAlongDeg: number[] } {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
-  const labelSize = POLAR_DEPTH_MM.labelSize * f;
-  const startRadius = Math.max(radius(POLAR_DEPTH_MM.labelFrom), labelSize);
+  const labelSize = o.depths.labelSize * f;
+  const startRadius = Math.max(radius(o.depths.labelFrom), labelSize);
   const fanRoomMm = Math.max(0, roomMm - longestMm);
   const alongs = marks.map((m) => m.alongDeg);
   // The pitch holds where labels are closest: at their far end on a wheel, their start on a ring.
@@ -172,8 +245,8 @@ function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: Labe
     return ((widest * Math.PI) / 180) * startRadius;
   };
   // Deepen the fan until its leaders need be no flatter than 2 : 1 (a deeper fan spreads a little more).
-  let fanMm = Math.min(POLAR_DEPTH_MM.fan * f, fanRoomMm);
-  for (let pass = 0; pass < 4; pass += 1) fanMm = Math.min(Math.max(POLAR_DEPTH_MM.fan * f, widestShiftMm(spreadOnTurn(alongs, pitchFor(fanMm))) / 2), fanRoomMm, MAX_FAN_MM * f);
+  let fanMm = Math.min(o.depths.fan * f, fanRoomMm);
+  for (let pass = 0; pass < 4; pass += 1) fanMm = Math.min(Math.max(o.depths.fan * f, widestShiftMm(spreadOnTurn(alongs, pitchFor(fanMm))) / 2), fanRoomMm, MAX_FAN_MM * f);
   const pitchDeg = pitchFor(fanMm);
   // Labels that would still go farther than 2.2 × the fan depth are left off (thinned evenly).
   const spread = spreadOnTurn(alongs, pitchDeg, ((2.2 * Math.max(fanMm, 1e-6)) / startRadius) * (180 / Math.PI));
@@ -186,7 +259,7 @@ function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: Labe
     if (labelAlong === undefined) return [];
     const fanned = fannedAlong.has(alongDeg);
     const theta = angle(labelAlong);
-    const startDepth = POLAR_DEPTH_MM.labelFrom + (fanned ? fanMm / Math.max(f, 1e-6) : 0);
+    const startDepth = o.depths.labelFrom + (fanned ? fanMm / Math.max(f, 1e-6) : 0);
     const [rx, ry] = at(labelAlong, startDepth);
     // Text runs along the radius, away from the reading edge, and is never upside down.
     const outward = ((theta % 360) + 360) % 360 - 90;
@@ -197,7 +270,7 @@ function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: Labe
     const [x, y] = [rx - 0.275 * labelSize * Math.sin(a), ry + 0.275 * labelSize * Math.cos(a)];
     const leader: Shape[] = [];
     if (fanned) {
-      const [lx1, ly1] = at(alongDeg, POLAR_DEPTH_MM.bandTo);
+      const [lx1, ly1] = at(alongDeg, o.depths.bandTo);
       const [lx2, ly2] = at(labelAlong, startDepth - 0.4);
       leader.push(line(lx1, ly1, lx2, ly2, STROKE_MM.fine, { role: 'label-leader' }));
     }
@@ -210,9 +283,9 @@ function radialLabeller({ o, marks, longestMm, roomMm, radius, angle, at }: Labe
 function tangentialLabeller({ o, marks, longestMm, roomMm, radius, angle }: LabelPlan, piece: Annulus, blocked: readonly AlongInterval[]): Labeller {
   const f = o.depthScale;
   const sign = o.towards === 'centre' ? -1 : 1;
-  const labelSize = POLAR_DEPTH_MM.labelSize * f;
+  const labelSize = o.depths.labelSize * f;
   const laneMm = labelSize * 1.1;
-  const firstRadius = radius(POLAR_DEPTH_MM.labelFrom);
+  const firstRadius = radius(o.depths.labelFrom);
   const gapDeg = ((longestMm + 1) * 360) / (2 * Math.PI * Math.max(firstRadius, 1e-6));
   const lanes = labelLanes(marks, gapDeg, Math.max(1, Math.floor(roomMm / laneMm)), blocked);
   return (alongDeg, label, data) => {
@@ -233,8 +306,8 @@ function tangentialLabeller({ o, marks, longestMm, roomMm, radius, angle }: Labe
 
 function tdcPointer(o: PolarScaleOptions, at: At): Shape[] {
   const f = o.depthScale;
-  const apex = at(0, POLAR_DEPTH_MM.bandFrom);
-  const base = at(0, POLAR_DEPTH_MM.bandTo);
+  const apex = at(0, o.depths.bandFrom);
+  const base = at(0, o.depths.bandTo);
   const dx = base[0] - apex[0];
   const dy = base[1] - apex[1];
   const length = Math.hypot(dx, dy) || 1;
@@ -283,17 +356,17 @@ function sideLabels(o: PolarScaleOptions, at: At, angle: (alongDeg: number) => n
   const size = 2.6 * f;
   // Inside a narrow ring when it fits beyond the band, else at the usual depth (past its edge).
   const deepest = o.maxDepthMm / Math.max(f, 1e-6) - 2.9;
-  const sideDepth = deepest >= POLAR_DEPTH_MM.bandTo + 0.5 ? Math.min(POLAR_DEPTH_MM.sideLabel, deepest) : POLAR_DEPTH_MM.sideLabel;
+  const sideDepth = deepest >= o.depths.bandTo + 0.5 ? Math.min(o.depths.sideLabel, deepest) : o.depths.sideLabel;
   const sideRadiusMm = Math.max(o.edgeRadiusMm + (o.towards === 'centre' ? -1 : 1) * sideDepth * f, 1e-6);
   // Half the side label's length plus a mark label's thickness and a gap, as an angle at its radius.
-  const clearDeg = (((textWidthMm('BTDC side', size) / 2 + POLAR_DEPTH_MM.labelSize * f + 0.8) / sideRadiusMm) * 180) / Math.PI;
+  const clearDeg = (((textWidthMm('BTDC side', size) / 2 + o.depths.labelSize * f + 0.8) / sideRadiusMm) * 180) / Math.PI;
   const place = (crankDeg: number, label: string, role: string): Shape[] => {
     const along = alongRotationDeg(crankDeg, o.carrier);
     if (narrowRadiusMm !== undefined) {
       const fitted = tangentialText(label, size, angle(along), narrowRadiusMm, piece, { weight: 'bold', data: { role, crankDeg } });
       return fitted ? [fitted] : [];
     }
-    const [x, y] = at(along, crankDeg === 180 ? POLAR_DEPTH_MM.labelFrom + 1 : sideDepth);
+    const [x, y] = at(along, crankDeg === 180 ? o.depths.labelFrom + 1 : sideDepth);
     const theta = angle(along);
     const upright = theta > 90 && theta < 270 ? theta + 180 : theta;
     const shape = text(x, y, label, size, { anchor: 'middle', rotateDeg: upright, weight: 'bold', data: { role, crankDeg } });
@@ -341,7 +414,7 @@ function pieceAnnulus(o: PolarScaleOptions): Annulus {
  */
 function narrowRotationArrow(o: PolarScaleOptions, radius: (depthMm: number) => number, piece: Annulus): { shapes: Shape[]; blocked: AlongInterval[] } {
   const f = o.depthScale;
-  const zoneFrom = POLAR_DEPTH_MM.labelFrom;
+  const zoneFrom = o.depths.labelFrom;
   const zoneTo = o.maxDepthMm / Math.max(f, 1e-6);
   const mid = radius((zoneFrom + Math.max(zoneFrom, zoneTo)) / 2);
   const label = o.rotation === 'cw' ? 'turns clockwise' : 'turns counter-clockwise';
@@ -378,7 +451,7 @@ function bandLabel(o: PolarScaleOptions, band: AlongInterval, radius: (depthMm: 
   if (!(hi > lo)) return [];
   const words = `${formatDeg(lo)}–${formatDeg(hi)}° BTDC`;
   const size = 2 * o.depthScale;
-  const r = radius((POLAR_DEPTH_MM.bandFrom + POLAR_DEPTH_MM.bandTo) / 2);
+  const r = radius((o.depths.bandFrom + o.depths.bandTo) / 2);
   const halfDeg = ((textWidthMm(words, size) / 2 + 1) / Math.max(r, 1e-6)) * (180 / Math.PI);
   // Past whichever end lies farther from TDC, so the label stays clear of the TDC pointer.
   const farEnd = Math.abs(((band.toAlongDeg + 180) % 360) - 180) >= Math.abs(((band.fromAlongDeg + 180) % 360) - 180) ? band.toAlongDeg + halfDeg : band.fromAlongDeg - halfDeg;

@@ -79,7 +79,7 @@ export const sheetRequestFields = defineFields({
   ).optional(),
   // The static advance the engine is set to (a template's or build's, or the user's): drawn heavier and named.
   targetAdvanceDeg: numberField({ label: 'Target advance', ...BTDC_RANGE_DEG }).optional(),
-  // For timing with a strobe on a running engine. So far it only draws the target wedge bolder (issue 10, step 7 open).
+  // For timing with a strobe on a running engine: big figures through the advance range on a white ground (strobe.ts).
   strobeReadable: flagField({ label: 'Strobe-readable' }).default(false),
   portEvents: listField(
     { label: 'Port events' },

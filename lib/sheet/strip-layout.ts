@@ -1,8 +1,24 @@
 import { normalizeDeg } from '../angle';
 import type { GraduationLevel, Shape, ShapeData, Size } from './drawing';
-import { chooseLevels } from './graduations';
+import { chooseLevels, levelOfHalfDegIndex } from './graduations';
 import { freeLabelSpot, MIN_STRIP_LABEL_MM, stripMarkLabels, type InkBox, type StripMark, type Zone } from './strip-labels';
-import { formatDeg, numberStrideFor, portAngleWords, scaleMarks, type ScaleMarks } from './scale-marks';
+import { formatDeg, numberStrideFor, portAngleWords, scaleMarks, type AlongInterval, type ScaleMarks } from './scale-marks';
+import {
+  chooseStrobeFit,
+  coarsenForStrobe,
+  pitchLimitedSizeMm,
+  placeStrobe,
+  roomOf,
+  strobeHalfWidthMm,
+  strobeNumeralWidthMm,
+  strobeRangeBtdcDeg,
+  strobeZoneMm,
+  STROBE_NUMERAL_MM,
+  STROBE_PAD_MM,
+  type PlacedStrobe,
+  type StrobeChoice,
+  type StrobeFit,
+} from './strobe';
 import { alongRotationDeg, crankFromAlongDeg, stripXMm } from './scale-direction';
 import type { SheetRequest } from './sheet-request';
 import { arrow, line, path, rect, text } from './shapes';
@@ -93,11 +109,18 @@ export function stripDepths(widthMm: number): StripDepths {
   return { tick: { 10: long, 5: long * 0.75, 1: long * 0.5, 0.5: long * 0.33 }, numeralSize, numeralBaseline, bandTop: numeralBaseline + numeralSize * 0.25 + 0.3 };
 }
 
-function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment, finestLevel: GraduationLevel, stride: number): ScaleMarks {
-  const numeralWidthMm = textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize);
+function segmentRange(plan: StripPlan, segment: StripSegment): AlongInterval {
   const overlapMm = segment.extension === 'overlap' ? segment.extensionMm : 0;
+  return { fromAlongDeg: segment.startAlongDeg, toAlongDeg: segment.startAlongDeg + (segment.markedMm + overlapMm) / plan.mmPerDeg };
+}
+
+function numberClearDegFor(req: SheetRequest, plan: StripPlan): number {
+  return Math.max(1.5, (textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize) / 2 + 0.4) / plan.mmPerDeg);
+}
+
+function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment, finestLevel: GraduationLevel, stride: number): ScaleMarks {
   return scaleMarks({
-    range: { fromAlongDeg: segment.startAlongDeg, toAlongDeg: segment.startAlongDeg + (segment.markedMm + overlapMm) / plan.mmPerDeg },
+    range: segmentRange(plan, segment),
     carrier: req.carrier,
     numbering: req.numbering,
     finestLevel,
@@ -106,18 +129,84 @@ function segmentMarks(req: SheetRequest, plan: StripPlan, segment: StripSegment,
     ...(req.targetAdvanceDeg !== undefined ? { targetAdvanceDeg: req.targetAdvanceDeg } : {}),
     ...(req.advanceBandDeg ? { advanceBandDeg: req.advanceBandDeg } : {}),
     portEvents: req.portEvents,
-    numberClearDeg: Math.max(1.5, (numeralWidthMm / 2 + 0.4) / plan.mmPerDeg),
+    numberClearDeg: numberClearDegFor(req, plan),
   });
 }
 
-function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, index: number, finestLevel: GraduationLevel, stride: number): Shape[] {
+/** Room left under the strobe figures for the mark labels, mm. */
+const STRIP_LABEL_ROOM_MM = 3;
+
+/** The strobe figures' zone: from just below the long ticks, `zoneMm` deep. */
+function strobeZoneTopMm(depths: StripDepths): number {
+  return depths.tick[10] + 0.3;
+}
+
+/** The strobe figures a strip can hold: full size where its width and the rim's pitch allow, else the largest, said (strobe.ts). */
+function stripStrobeChoice(req: SheetRequest, plan: StripPlan): StrobeChoice {
+  if (!req.strobeReadable) return { warnings: [] };
+  const w = req.stripWidthMm;
+  const zoneTop = strobeZoneTopMm(stripDepths(w));
+  const roomMm = w - zoneTop - 0.3 - STRIP_LABEL_ROOM_MM;
+  return chooseStrobeFit(strobeRangeBtdcDeg(req), req.numbering, (stepDeg, orientation, numerals) => {
+    const perSizeZone = strobeZoneMm(numerals, orientation, 1) - strobeZoneMm(numerals, orientation, 0);
+    const neededMm = zoneTop + strobeZoneMm(numerals, orientation, STROBE_NUMERAL_MM) + 0.3 + STRIP_LABEL_ROOM_MM;
+    const pitchMm = plan.mmPerDeg * stepDeg;
+    return roomOf(
+      (roomMm - strobeZoneMm(numerals, orientation, 0)) / perSizeZone,
+      `the strip is only ${formatDeg(w)} mm wide, and full-size figures need ${neededMm.toFixed(1)} mm`,
+      pitchLimitedSizeMm(numerals, orientation, pitchMm),
+      `${stepDeg}° is only ${pitchMm.toFixed(1)} mm along this strip`,
+    );
+  });
+}
+
+/**
+ * The strobe figures on one strip segment: a heavy long tick on each, a white ground over their
+ * stretch, and the figures on it, upright or (across) reading upwards, all inside the segment.
+ */
+function stripStrobeShapes(fit: StrobeFit, placed: PlacedStrobe, x: (a: number) => number, top: number, depths: StripDepths, limitMm: number, tag: (d: ShapeData) => ShapeData): Shape[] {
+  const size = fit.sizeMm;
+  const zoneTop = top + strobeZoneTopMm(depths);
+  const zoneMm = strobeZoneMm(fit.numerals, fit.orientation, size);
+  const half = strobeHalfWidthMm(fit.numerals, fit.orientation, size);
+  const shapes: Shape[] = [];
+  for (const n of placed.numerals) {
+    if (x(n.alongDeg) > limitMm + 1e-6) continue;
+    shapes.push(line(x(n.alongDeg), top, x(n.alongDeg), top + depths.tick[10], STROKE_MM.heavy, tag({ role: 'strobe-tick', crankDeg: n.crankDeg, level: levelOfHalfDegIndex(Math.round(n.crankDeg * 2) % 720) })));
+  }
+  for (const interval of placed.intervals) {
+    const x0 = Math.max(0.2, x(interval.fromAlongDeg) - half);
+    const x1 = Math.min(limitMm - 0.2, x(interval.toAlongDeg) + half);
+    if (x1 > x0) shapes.push(rect(x0, zoneTop, x1 - x0, zoneMm, STROKE_MM.fine, 'white', tag({ role: 'strobe-band' })));
+  }
+  for (const n of placed.numerals) {
+    const xMm = x(n.alongDeg);
+    if (xMm > limitMm + 1e-6) continue;
+    const data = tag({ role: 'strobe-numeral', crankDeg: n.crankDeg });
+    if (fit.orientation === 'along') {
+      const [nx, anchor] = keepInside(xMm, strobeNumeralWidthMm(n.label, size), limitMm);
+      shapes.push(text(nx, zoneTop + STROBE_PAD_MM + 0.75 * size, n.label, size, { anchor, weight: 'bold', font: 'figures', data }));
+    } else {
+      // Reading upwards (rotated −90°): the box runs 0.75 × size left of the baseline and 0.2 right of it.
+      const centre = Math.min(Math.max(xMm, 0.3 + 0.475 * size), limitMm - 0.3 - 0.475 * size);
+      shapes.push(text(centre + 0.275 * size, zoneTop + zoneMm / 2, n.label, size, { anchor: 'middle', rotateDeg: -90, weight: 'bold', font: 'figures', data }));
+    }
+  }
+  return shapes;
+}
+
+function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, index: number, finestLevel: GraduationLevel, stride: number, strobeFit?: StrobeFit): Shape[] {
   const w = req.stripWidthMm;
   const top = STRIP_LABEL_BAND_MM;
-  const depths = stripDepths(w);
+  const plainDepths = stripDepths(w);
+  // The strobe figures' zone pushes the band and the labels below it.
+  const depths = strobeFit ? { ...plainDepths, bandTop: Math.max(plainDepths.bandTop, strobeZoneTopMm(plainDepths) + strobeZoneMm(strobeFit.numerals, strobeFit.orientation, strobeFit.sizeMm) + 0.3) } : plainDepths;
   const many = plan.segments.length > 1;
   const tag = (data: ShapeData): ShapeData => (many ? { ...data, segment: segment.letter } : data);
   const x = (alongDeg: number) => stripXMm(alongDeg, segment.startAlongDeg, plan.mmPerDeg);
-  const marks = segmentMarks(req, plan, segment, finestLevel, stride);
+  const placed = strobeFit ? placeStrobe(strobeFit, segmentRange(plan, segment), req.carrier) : undefined;
+  const plainMarks = segmentMarks(req, plan, segment, finestLevel, stride);
+  const marks = placed ? coarsenForStrobe(plainMarks, placed, numberClearDegFor(req, plan), false) : plainMarks;
   const rowLength = segment.markedMm + segment.extensionMm;
   const shapes: Shape[] = [];
   const last = index === plan.segments.length - 1;
@@ -135,7 +224,9 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
     const rowTop = top + depths.numeralBaseline - 0.8 * depths.numeralSize - 0.3;
     const rowBottom = top + depths.numeralBaseline + 0.25 * depths.numeralSize + 0.3;
     shapes.push(line(segment.markedMm, top - 1.5, segment.markedMm, rowTop, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
-    shapes.push(line(segment.markedMm, rowBottom, segment.markedMm, top + w + 1.5, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
+    // …and round the strobe figures' ground when it reaches the join.
+    const strobeAtJoin = strobeFit && placed && placed.intervals.some((i) => x(i.fromAlongDeg) - strobeHalfWidthMm(strobeFit.numerals, strobeFit.orientation, strobeFit.sizeMm) <= segment.markedMm && x(i.toAlongDeg) + strobeHalfWidthMm(strobeFit.numerals, strobeFit.orientation, strobeFit.sizeMm) >= segment.markedMm);
+    shapes.push(line(segment.markedMm, strobeAtJoin ? top + depths.bandTop : rowBottom, segment.markedMm, top + w + 1.5, STROKE_MM.outline, tag({ role: 'join' }), 0.8));
   }
   else {
     const endAlong = segment.startAlongDeg + segment.markedMm / plan.mmPerDeg;
@@ -159,6 +250,7 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
   ];
   const labels = stripMarkLabels(stripMarks, top, zone, tag);
   shapes.push(...labels.shapes);
+  if (strobeFit && placed) shapes.push(...stripStrobeShapes(strobeFit, placed, x, top, depths, segment.extension === 'tail' ? segment.markedMm : rowLength, tag));
   const occupied = [...labels.occupied, ...tdc.map(pathBox)];
   shapes.push(...tdc);
   for (const mark of marks.advance.filter((m) => m.target)) {
@@ -319,13 +411,14 @@ export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
   const plan = planStrip(req, rowLengthMm);
   const choice = chooseLevels(plan.mmPerDeg, req.minPitchMm, 'on this strip');
   const stride = numberStrideFor(plan.mmPerDeg * 10, textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize));
-  const warnings = [...choice.warnings];
+  const strobe = stripStrobeChoice(req, plan);
+  const warnings = [...choice.warnings, ...strobe.warnings];
   warnings.push(...outsideWindowWarnings(req));
   if (plan.segments.length > 1)
     warnings.push(
       `The strip (${(plan.markedMm).toFixed(2)} mm marked) is cut into ${plan.segments.length} segments, ${plan.segments[0]!.letter}–${plan.segments[plan.segments.length - 1]!.letter}, that join end to end`,
     );
-  const rows = plan.segments.map((segment, i) => stripRow(req, plan, segment, i, choice.finestLevel, stride));
+  const rows = plan.segments.map((segment, i) => stripRow(req, plan, segment, i, choice.finestLevel, stride, strobe.fit));
   return { rows, keptLevels: choice.keptLevels, stripLengthMm: plan.stripLengthMm, warnings, plan };
 }
 

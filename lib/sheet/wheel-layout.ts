@@ -1,13 +1,26 @@
 import type { GraduationLevel, Shape } from './drawing';
 import { arcLengthMm } from '../engine/arc-chord';
 import { chooseLevels } from './graduations';
-import { polarScaleShapes, POLAR_DEPTH_MM, TICK_DEPTH_MM } from './polar-scale';
+import { polarDepths, polarScaleShapes, TICK_DEPTH_MM, type PolarDepths, type PolarStrobe } from './polar-scale';
 import { numberStrideFor, scaleMarks } from './scale-marks';
 import type { SheetRequest } from './sheet-request';
 import { circle, line } from './shapes';
 import { textCornersMm } from './bounds';
 import { howToInCircle, howToSteps } from './how-to';
 import { STROKE_MM, textWidthMm } from './sheet-style';
+import {
+  chooseStrobeFit,
+  coarsenForStrobe,
+  pitchLimitedSizeMm,
+  placeStrobe,
+  roomOf,
+  strobeRangeBtdcDeg,
+  strobeZoneMm,
+  STROBE_NUMERAL_MM,
+  type StrobeFit,
+  type StrobeNumeral,
+  type StrobeOrientation,
+} from './strobe';
 
 /** Degree wheels (ticks inward from the cut edge) and flange rings (ticks outward from the inner edge). */
 
@@ -15,21 +28,72 @@ import { STROKE_MM, textWidthMm } from './sheet-style';
 export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[]; howToOnPiece: boolean };
 
 const MIN_DEPTH_SCALE = 0.02;
-// Ticks, numerals, band and one lane of mark labels inside the annulus.
-const RING_SCALE_DEPTH_MM = POLAR_DEPTH_MM.labelFrom + POLAR_DEPTH_MM.labelSize * 1.2 + 0.5;
+
+/** Ticks, numerals, band and one lane of mark labels inside the annulus. */
+function ringScaleDepthMm(depths: PolarDepths): number {
+  return depths.labelFrom + depths.labelSize * 1.2 + 0.5;
+}
 
 function clampScale(value: number): number {
   return Math.min(1, Math.max(MIN_DEPTH_SCALE, value));
 }
 
-function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' | 'outside', depthScale: number, where: string, maxDepthMm: number) {
+/** Where a polar scale is printed and how much depth it has: `depthScaleFor` shrinks a depth plan into the piece. */
+type PolarPiece = {
+  name: 'wheel' | 'ring';
+  edgeRadiusMm: number;
+  towards: 'centre' | 'outside';
+  where: string;
+  maxDepthMm: number;
+  depthScaleFor: (depths: PolarDepths) => number;
+  /** The piece's depth (disc less hub, or ring width), mm, for the notes. */
+  depthMm: number;
+};
+
+type PolarPlan = { depths: PolarDepths; depthScale: number; fit?: StrobeFit; warnings: string[] };
+
+/**
+ * The depth plan of a polar scale: the usual one, or with the strobe figures' zone after the ticks,
+ * its figures chosen by what the piece's depth and circumference allow (strobe.ts).
+ */
+function polarPlan(req: SheetRequest, piece: PolarPiece): PolarPlan {
+  const plain = polarDepths();
+  if (!req.strobeReadable) return { depths: plain, depthScale: piece.depthScaleFor(plain), warnings: [] };
+  const sign = piece.towards === 'centre' ? -1 : 1;
+  // Where the figures come nearest the centre, their pitch is smallest.
+  const innerRadius = (depths: PolarDepths, f: number) => piece.edgeRadiusMm + sign * (sign < 0 ? depths.strobeTo : depths.strobeFrom) * f;
+  const fullZone = (orientation: StrobeOrientation, numerals: readonly StrobeNumeral[]) => polarDepths(strobeZoneMm(numerals, orientation, STROBE_NUMERAL_MM));
+  const choice = chooseStrobeFit(strobeRangeBtdcDeg(req), req.numbering, (stepDeg, orientation, numerals) => {
+    const depths = fullZone(orientation, numerals);
+    const f = piece.depthScaleFor(depths);
+    const pitchMm = arcLengthMm(2 * Math.max(0, innerRadius(depths, f)), stepDeg);
+    const neededMm = piece.name === 'ring' ? ringScaleDepthMm(depths) : depths.total;
+    return roomOf(
+      STROBE_NUMERAL_MM * f,
+      `the ${piece.name} is only ${piece.depthMm.toFixed(1)} mm ${piece.name === 'ring' ? 'wide' : 'from edge to hub'}, and full-size figures need ${neededMm.toFixed(1)} mm`,
+      pitchLimitedSizeMm(numerals, orientation, pitchMm),
+      `${stepDeg}° is only ${pitchMm.toFixed(1)} mm round the scale ${piece.where}`,
+    );
+  });
+  if (!choice.fit) return { depths: plain, depthScale: piece.depthScaleFor(plain), warnings: choice.warnings };
+  const { fit } = choice;
+  // The zone for the size chosen (at full size): a smaller figure needs less depth, which only helps.
+  const firstScale = piece.depthScaleFor(fullZone(fit.orientation, fit.numerals));
+  const depths = polarDepths(strobeZoneMm(fit.numerals, fit.orientation, fit.sizeMm / firstScale));
+  return { depths, depthScale: piece.depthScaleFor(depths), fit, warnings: choice.warnings };
+}
+
+function polarScale(req: SheetRequest, piece: PolarPiece) {
+  const { edgeRadiusMm, towards, where, maxDepthMm } = piece;
+  const plan = polarPlan(req, piece);
+  const depthScale = plan.depthScale;
   const choice = chooseLevels(arcLengthMm(2 * edgeRadiusMm, 1), req.minPitchMm, where);
   const numeralRadius = edgeRadiusMm + (towards === 'centre' ? -1 : 1) * (TICK_DEPTH_MM[10] + 2.4) * depthScale;
-  const numeralWidthMm = textWidthMm('180', POLAR_DEPTH_MM.numeralSize * depthScale);
+  const numeralWidthMm = textWidthMm('180', plan.depths.numeralSize * depthScale);
   const stride = numberStrideFor(arcLengthMm(2 * numeralRadius, 10), numeralWidthMm);
   const numberClearDeg = Math.max(1.5, (numeralWidthMm / 2 + 0.4) / Math.max(arcLengthMm(2 * numeralRadius, 1), 1e-6));
-  const warnings = [...choice.warnings];
-  const marks = scaleMarks({
+  const warnings = [...choice.warnings, ...plan.warnings];
+  let marks = scaleMarks({
     range: 'turn',
     carrier: req.carrier,
     numbering: req.numbering,
@@ -41,6 +105,12 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     portEvents: req.portEvents,
     numberClearDeg,
   });
+  let strobe: PolarStrobe | undefined;
+  if (plan.fit) {
+    const placed = placeStrobe(plan.fit, 'turn', req.carrier);
+    marks = coarsenForStrobe(marks, placed, numberClearDeg, true);
+    strobe = { fit: plan.fit, placed };
+  }
   const shapes = polarScaleShapes({
     centreMm: [0, 0],
     edgeRadiusMm,
@@ -51,7 +121,8 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
     marks,
     bandFill: 'hatch',
     ...(req.advanceBandDeg ? { bandDeg: [Math.min(...req.advanceBandDeg), Math.max(...req.advanceBandDeg)] as const } : {}),
-    strobe: req.strobeReadable,
+    depths: plan.depths,
+    ...(strobe ? { strobe } : {}),
     maxDepthMm,
   });
   return { shapes, keptLevels: choice.keptLevels, warnings };
@@ -61,8 +132,15 @@ function polarScale(req: SheetRequest, edgeRadiusMm: number, towards: 'centre' |
 export function wheelLayout(req: SheetRequest): PolarLayout {
   const radiusMm = (req.diameterMm ?? 0) / 2;
   const hubRadiusMm = Math.min(req.hubHoleMm / 2, radiusMm);
-  const depthScale = clampScale((radiusMm - hubRadiusMm) / POLAR_DEPTH_MM.total);
-  const scale = polarScale(req, radiusMm, 'centre', depthScale, 'at this diameter', radiusMm - hubRadiusMm - 1);
+  const scale = polarScale(req, {
+    name: 'wheel',
+    edgeRadiusMm: radiusMm,
+    towards: 'centre',
+    where: 'at this diameter',
+    maxDepthMm: radiusMm - hubRadiusMm - 1,
+    depthScaleFor: (depths) => clampScale((radiusMm - hubRadiusMm) / depths.total),
+    depthMm: radiusMm - hubRadiusMm,
+  });
   const crossMm = Math.min(5, radiusMm * 0.3);
   const shapes: Shape[] = [
     circle(0, 0, radiusMm, STROKE_MM.outline, { role: 'cut-line' }),
@@ -82,8 +160,15 @@ export function wheelLayout(req: SheetRequest): PolarLayout {
 export function ringLayout(req: SheetRequest): PolarLayout {
   const innerRadiusMm = (req.innerDiameterMm ?? 0) / 2;
   const outerRadiusMm = Math.max((req.outerDiameterMm ?? 0) / 2, innerRadiusMm);
-  const depthScale = clampScale((outerRadiusMm - innerRadiusMm) / RING_SCALE_DEPTH_MM);
-  const scale = polarScale(req, innerRadiusMm, 'outside', depthScale, 'at the inner diameter', outerRadiusMm - innerRadiusMm - 0.15);
+  const scale = polarScale(req, {
+    name: 'ring',
+    edgeRadiusMm: innerRadiusMm,
+    towards: 'outside',
+    where: 'at the inner diameter',
+    maxDepthMm: outerRadiusMm - innerRadiusMm - 0.15,
+    depthScaleFor: (depths) => clampScale((outerRadiusMm - innerRadiusMm) / ringScaleDepthMm(depths)),
+    depthMm: outerRadiusMm - innerRadiusMm,
+  });
   const shapes: Shape[] = [
     circle(0, 0, outerRadiusMm, STROKE_MM.outline, { role: 'cut-line' }),
     circle(0, 0, innerRadiusMm, STROKE_MM.outline, { role: 'cut-line-inner' }),
