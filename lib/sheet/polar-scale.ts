@@ -109,8 +109,10 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
   const piece = pieceAnnulus(o);
   // A narrow ring has no depth past the band for side labels and the arrow: they move into the band's
   // zone and the label zone, the arrow taking a stretch round BDC that mark labels then keep off.
-  const narrow = o.maxDepthMm / Math.max(f, 1e-6) < o.depths.arrow + 5;
-  const arrow = narrow ? narrowRotationArrow(o, radius, piece) : { shapes: rotationArrow(o, radius(o.depths.arrow)), blocked: [] };
+  // So is a ring whose arrow words, straight across BDC, would reach past its outer edge.
+  const wideArrow = rotationArrow(o, radius(o.depths.arrow));
+  const narrow = o.maxDepthMm / Math.max(f, 1e-6) < o.depths.arrow + 5 || wideArrow.some((shape) => shape.type === 'text' && !textInAnnulus(shape, piece));
+  const arrow = narrow ? narrowRotationArrow(o, radius, piece) : { shapes: wideArrow, blocked: [] };
   const plan: LabelPlan = { o, marks: labelled, longestMm, roomMm, radius, angle, at };
   const radial = tangential ? undefined : radialLabeller(plan);
   const radialLabel = radial ?? tangentialLabeller(plan, piece, arrow.blocked);

@@ -184,7 +184,9 @@ function stripStrobeShapes(fit: StrobeFit, placed: PlacedStrobe, x: (a: number) 
     if (xMm > limitMm + 1e-6) continue;
     const data = tag({ role: 'strobe-numeral', crankDeg: n.crankDeg });
     if (fit.orientation === 'along') {
-      const [nx, anchor] = keepInside(xMm, strobeNumeralWidthMm(n.label, size), limitMm);
+      const inside = keepInside(xMm, strobeNumeralWidthMm(n.label, size), limitMm);
+      if (!inside) continue;
+      const [nx, anchor] = inside;
       shapes.push(text(nx, zoneTop + STROBE_PAD_MM + 0.75 * size, n.label, size, { anchor, weight: 'bold', font: 'figures', data }));
     } else {
       // Reading upwards (rotated −90°): the box runs 0.75 × size left of the baseline and 0.2 right of it.
@@ -237,7 +239,9 @@ function stripRow(req: SheetRequest, plan: StripPlan, segment: StripSegment, ind
     shapes.push(line(x(tick.alongDeg), top, x(tick.alongDeg), top + depths.tick[tick.level], tick.level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, tag({ crankDeg: tick.crankDeg, level: tick.level })));
   for (const number of marks.numbers) {
     // The glue tail is unmarked (its own words sit there); an overlap repeats the next segment's numerals.
-    const [nx, anchor] = keepInside(x(number.alongDeg), textWidthMm(number.label, depths.numeralSize), segment.extension === 'tail' ? segment.markedMm : rowLength);
+    const inside = keepInside(x(number.alongDeg), textWidthMm(number.label, depths.numeralSize), segment.extension === 'tail' ? segment.markedMm : rowLength);
+    if (!inside) continue;
+    const [nx, anchor] = inside;
     shapes.push(text(nx, top + depths.numeralBaseline, number.label, depths.numeralSize, { anchor, font: 'figures', data: tag({ role: 'numeral', crankDeg: number.crankDeg }) }));
   }
 
@@ -274,8 +278,12 @@ function pathBox(shape: Shape): InkBox {
   return { x0: Math.min(...xs) - 0.2, x1: Math.max(...xs) + 0.2, y0: Math.min(...ys), y1: Math.max(...ys) };
 }
 
-/** A centred label that would stick out of the strip's end is anchored at that end instead. */
-function keepInside(xMm: number, widthMm: number, rowLengthMm: number): [number, 'start' | 'middle' | 'end'] {
+/**
+ * A centred label that would stick out of the strip's end is anchored at that end instead;
+ * undefined when the row is shorter than the label (a window of a hair's breadth, said in the notes).
+ */
+function keepInside(xMm: number, widthMm: number, rowLengthMm: number): [number, 'start' | 'middle' | 'end'] | undefined {
+  if (widthMm + 0.8 > rowLengthMm) return undefined;
   if (xMm - widthMm / 2 < 0.3) return [Math.max(xMm, 0) + 0.4, 'start'];
   if (xMm + widthMm / 2 > rowLengthMm - 0.3) return [Math.min(xMm, rowLengthMm) - 0.4, 'end'];
   return [xMm, 'middle'];
@@ -414,6 +422,8 @@ export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
   const strobe = stripStrobeChoice(req, plan);
   const warnings = [...choice.warnings, ...strobe.warnings];
   warnings.push(...outsideWindowWarnings(req));
+  const numeralMm = textWidthMm('0', stripDepths(req.stripWidthMm).numeralSize) + 0.8;
+  if (plan.markedMm < numeralMm) warnings.push(`Numerals left off: the window is only ${plan.markedMm.toFixed(2)} mm long, shorter than one numeral (${numeralMm.toFixed(1)} mm)`);
   if (plan.segments.length > 1)
     warnings.push(
       `The strip (${(plan.markedMm).toFixed(2)} mm marked) is cut into ${plan.segments.length} segments, ${plan.segments[0]!.letter}–${plan.segments[plan.segments.length - 1]!.letter}, that join end to end`,

@@ -1,5 +1,6 @@
 // Source under test: lib/sheet/build-drawing.ts and lib/sheet/render-svg.ts over random valid
-// requests (fast-check), the SVG read back with @xmldom/xmldom.
+// requests (fast-check), the SVG read back with @xmldom/xmldom. A strobe-readable sheet keeps its
+// graduations finer than 5° only between its first and last strobe figure (lib/sheet/strobe.ts).
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { shapeBox } from '@/lib/sheet/bounds';
@@ -17,7 +18,7 @@ function expectedFinest(diameterMm: number, minPitchMm: number): number {
   return LEVELS.filter((step) => step === 10 || (Math.PI * diameterMm * step) / 360 >= minPitchMm - 1e-9).at(-1)!;
 }
 
-function keptCranks(finest: number): Set<number> {
+function keptCranksAt(finest: number): Set<number> {
   const levelOf = (i: number) => (i % 20 === 0 ? 10 : i % 10 === 0 ? 5 : i % 2 === 0 ? 1 : 0.5);
   const kept = new Set<number>();
   for (let i = 0; i < 720; i += 1) if (levelOf(i) >= finest) kept.add(i / 2);
@@ -47,6 +48,8 @@ const request = fc
     numbering: fc.constantFrom('split', 'full'),
     advanceMarksDeg: fc.array(btdc, { maxLength: 8 }),
     advanceBandDeg: fc.option(fc.tuple(btdc, btdc), { nil: undefined }),
+    targetAdvanceDeg: fc.option(btdc, { nil: undefined }),
+    strobeReadable: fc.boolean(),
     portEvents: fc.array(fc.record({ name: fc.string({ minLength: 1, maxLength: 24 }).filter((s) => s.trim().length > 0), opensCrankDeg: crank, closesCrankDeg: crank }), { maxLength: 3 }),
     minPitchMm: fc.double({ min: 0.2, max: 5, noNaN: true }),
     paper: fc.constantFrom(...PAPER_NAMES),
@@ -90,6 +93,15 @@ describe('any valid request', () => {
         expectPagesPrintable(drawing);
         // Ticks as expected from the levels kept.
         const cranks = svg.all('line').filter((el) => el.hasAttribute('data-level')).map((el) => Number(el.getAttribute('data-crank-deg')));
+        // Strobe figures (when drawn) span a stretch of BTDC angles; fine ticks stay only there.
+        const figuresBtdc = svg.all('text').filter((el) => el.getAttribute('data-role') === 'strobe-numeral').map((el) => (360 - Number(el.getAttribute('data-crank-deg'))) % 360);
+        const keptCranks = (finest: number) => {
+          const kept = keptCranksAt(finest);
+          if (!figuresBtdc.length) return kept;
+          const [lo, hi] = [Math.min(...figuresBtdc), Math.max(...figuresBtdc)];
+          const fineKept = (c: number) => c % 5 === 0 || ((360 - c) % 360 >= lo - 1e-9 && (360 - c) % 360 <= hi + 1e-9);
+          return new Set([...kept].filter(fineKept));
+        };
         if (req.kind === 'wheel' || req.kind === 'ring') {
           const expected = keptCranks(expectedFinest(req.kind === 'wheel' ? req.diameterMm! : req.innerDiameterMm!, req.minPitchMm));
           expect(cranks).toHaveLength(expected.size);
