@@ -33,6 +33,8 @@ const CHOICE_FIELDS = ofKind('choice');
 const TEXT_FIELDS = ofKind('text');
 /** The window and the advance band: two numbers, "320,10". */
 const PAIR_FIELDS = ofKind('list');
+/** Yes/no options: "true" or "false" (what the sheet maker's own links write). */
+const FLAG_FIELDS = ofKind('flag');
 
 const MAX_PARAM_CHARS = 4000;
 
@@ -77,6 +79,7 @@ export function prefillFromSearchParams(params: SearchParamsLike): Prefill {
   accept(CHOICE_FIELDS, (text) => text.trim());
   accept(TEXT_FIELDS, (text) => text);
   accept(PAIR_FIELDS, parseNumberList);
+  accept(FLAG_FIELDS, (text) => (text.trim() === 'true' ? true : text.trim() === 'false' ? false : text));
   readAdvanceMarks(params, values, ignored);
   readPortEvents(params, values, ignored);
   return { values: values as Partial<SheetRequestInput>, ignored };

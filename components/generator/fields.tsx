@@ -192,6 +192,43 @@ export function ChoiceGroup<T extends FieldValues>({ name, legend, options, help
   );
 }
 
+type CheckboxFieldProps<T extends FieldValues> = {
+  name: FieldPath<T>;
+  label: string;
+  hint?: string;
+  help?: React.ReactNode;
+};
+
+/** One yes/no option: the box and its label on one line, a hint under the label, then help and the live error line. */
+export function CheckboxField<T extends FieldValues>({ name, label, hint, help }: CheckboxFieldProps<T>) {
+  const { register } = useFormContext<T>();
+  const error = useFieldError(name);
+  const id = fieldId(name);
+  return (
+    <div className="space-y-1">
+      <label
+        htmlFor={id}
+        className="flex cursor-pointer items-start gap-2 rounded-md border border-steel-200 bg-white px-3 py-2 text-sm transition-colors hover:border-steel-400 has-[:checked]:border-gauge-600 has-[:checked]:bg-gauge-500/5 has-[:focus-visible]:ring-2 has-[:focus-visible]:ring-gauge-500/40 dark:border-steel-700 dark:bg-steel-900"
+      >
+        <input
+          id={id}
+          type="checkbox"
+          aria-invalid={error ? true : undefined}
+          aria-describedby={`${id}-help ${id}-error`}
+          className="mt-0.5 size-4 accent-gauge-600"
+          {...register(name)}
+        />
+        <span>
+          <span className="block font-medium text-steel-900 dark:text-steel-100">{label}</span>
+          {hint ? <span className="block text-xs text-steel-500 dark:text-steel-400">{hint}</span> : null}
+        </span>
+      </label>
+      <HelpText id={`${id}-help`}>{help}</HelpText>
+      <FieldErrorText id={`${id}-error`} message={error} />
+    </div>
+  );
+}
+
 /** A unit shown inside the right end of its input (the input leaves room with pr-12). */
 export function UnitSuffix({ unit, children }: { unit?: string; children: React.ReactNode }) {
   return (

@@ -34,6 +34,9 @@ export type GeneratorFormValues = {
   numbering: 'split' | 'full';
   advanceMarksDeg: string;
   advanceBandDeg: [number, number];
+  /** Blank (NaN) for none. */
+  targetAdvanceDeg: number;
+  strobeReadable: boolean;
   portEvents: PortEvent[];
   minPitchMm: number;
   paper: PaperName;
@@ -43,7 +46,7 @@ export type GeneratorFormValues = {
 };
 
 type RequestField = Exclude<keyof GeneratorFormValues, 'lengthUnit'>;
-const SCALE_FIELDS: RequestField[] = ['rotation', 'carrier', 'numbering', 'advanceMarksDeg', 'advanceBandDeg', 'portEvents', 'minPitchMm'];
+const SCALE_FIELDS: RequestField[] = ['rotation', 'carrier', 'numbering', 'advanceMarksDeg', 'advanceBandDeg', 'targetAdvanceDeg', 'strobeReadable', 'portEvents', 'minPitchMm'];
 const COMMON_FIELDS: RequestField[] = ['kind', 'paper', 'orientation', 'title', 'note'];
 
 /** The fields each kind of sheet uses; the others are not sent, so a stale hidden value cannot block a sheet. */
@@ -78,6 +81,8 @@ export const DEFAULT_FORM_VALUES: GeneratorFormValues = {
   numbering: 'split',
   advanceMarksDeg: '',
   advanceBandDeg: [Number.NaN, Number.NaN],
+  targetAdvanceDeg: Number.NaN,
+  strobeReadable: false,
   portEvents: [],
   minPitchMm: 0.6,
   paper: 'A4',
@@ -101,6 +106,8 @@ export function toSheetRequestInput(values: GeneratorFormValues): SheetRequestIn
     if (field === 'advanceMarksDeg') request[field] = parseNumberList(String(value ?? ''));
     else if (field === 'windowCrankDeg' || field === 'advanceBandDeg') request[field] = pairOrNone(value as [number, number]);
     else if (field === 'note') request[field] = String(value ?? '').trim() || undefined;
+    // Blank (NaN from valueAsNumber) means no target; any number typed goes to the schema, which checks its range.
+    else if (field === 'targetAdvanceDeg') request[field] = typeof value === 'number' && !Number.isNaN(value) ? value : undefined;
     else request[field] = value;
     if (request[field] === undefined) delete request[field];
   }
@@ -148,6 +155,8 @@ const QUERY_ORDER: RequestField[] = [
   'numbering',
   'advanceMarksDeg',
   'advanceBandDeg',
+  'targetAdvanceDeg',
+  'strobeReadable',
   'portEvents',
   'minPitchMm',
   'paper',

@@ -9,7 +9,7 @@ import { PAPER_NAMES } from '@/lib/sheet/paper';
 import type { IgnoredParam } from '@/lib/generator-prefill';
 import { issueInUnit, LENGTH_KEYS, type SheetKind, type SheetRequest } from '@/lib/sheet/sheet-request';
 import { sheetRequestFields as fields } from '@/lib/sheet/sheet-request-fields';
-import { ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
+import { CheckboxField, ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
 import { toSheetRequestInput, usesField, DEFAULT_FORM_VALUES, type GeneratorFormValues, type LengthUnit } from './form-values';
 import { generatorResolver } from './generator-resolver';
 import { forgetSheet, useSheetUrl } from './use-sheet-url';
@@ -318,6 +318,19 @@ function AdvanceSection() {
         unit="° BTDC"
         labels={['From', 'To']}
         help="A hatched range that shows on a mono laser printer, e.g. 16 to 20. Blank for none."
+      />
+      <NumberField<GeneratorFormValues>
+        name="targetAdvanceDeg"
+        label={fields.targetAdvanceDeg.label}
+        unit="° BTDC"
+        step={0.5}
+        help="The figure the engine is set to. Its mark is drawn heavier, with a filled wedge, and named as the target. Blank for none."
+      />
+      <CheckboxField<GeneratorFormValues>
+        name="strobeReadable"
+        label={fields.strobeReadable.label}
+        hint="For timing a running engine with a strobe light"
+        help="Big heavy figures every 2° or 5° across the advance band (or the marks) on a white ground, at least 5 mm tall where the piece is big enough; the sheet says when it is not. Fine graduations are kept only there."
       />
     </FormSection>
   );

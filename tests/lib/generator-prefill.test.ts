@@ -106,6 +106,16 @@ describe('prefillFromSearchParams', () => {
     expect(ignored.map((i) => i.param)).toEqual(['windowCrankDeg']);
   });
 
+  it('reads the strobe-readable option as true or false and names it when it is neither', () => {
+    expect(prefillFromSearchParams(new URLSearchParams('strobeReadable=true')).values.strobeReadable).toBe(true);
+    expect(prefillFromSearchParams(new URLSearchParams('strobeReadable=false')).values.strobeReadable).toBe(false);
+    const bad = prefillFromSearchParams(new URLSearchParams('strobeReadable=yes&targetAdvanceDeg=61'));
+    expect(bad.values).not.toHaveProperty('strobeReadable');
+    expect(bad.ignored.map((i) => i.param).sort()).toEqual(['strobeReadable', 'targetAdvanceDeg']);
+    expect(bad.ignored.find((i) => i.param === 'strobeReadable')?.message).toBe('Strobe-readable must be true or false');
+    expect(bad.ignored.find((i) => i.param === 'targetAdvanceDeg')?.message).toMatch(/^Target advance .*0–60° BTDC/);
+  });
+
   it('refuses an over-long title but keeps the rest', () => {
     const { values, ignored } = prefillFromSearchParams(new URLSearchParams({ title: 'x'.repeat(81), kind: 'ring' }));
     expect(values).toEqual({ kind: 'ring' });

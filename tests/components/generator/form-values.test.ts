@@ -39,6 +39,20 @@ describe('toSheetRequestInput', () => {
   });
 });
 
+describe('target advance and the strobe-readable option', () => {
+  it('sends a blank target as none, a typed one and the option as they are, for wheels, rings and strips only', () => {
+    expect(toSheetRequestInput(DEFAULT_FORM_VALUES)).not.toHaveProperty('targetAdvanceDeg');
+    for (const kind of ['wheel', 'ring', 'strip'] as const)
+      expect(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind, targetAdvanceDeg: 18, strobeReadable: true })).toMatchObject({ targetAdvanceDeg: 18, strobeReadable: true });
+    expect(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, kind: 'scribe', strobeReadable: true })).not.toHaveProperty('strobeReadable');
+  });
+
+  it('a target past 60° gets the schema message naming the field by its label and the range', () => {
+    const result = sheetRequestSchema.safeParse(toSheetRequestInput({ ...DEFAULT_FORM_VALUES, targetAdvanceDeg: 75 }));
+    expect(result.error?.issues.map((issue) => [issue.path.join('.'), issue.message])).toEqual([['targetAdvanceDeg', expect.stringMatching(/^Target advance .*0–60° BTDC/)]]);
+  });
+});
+
 describe('formValuesFromPrefill', () => {
   it('writes the advance list as text and defaults a ring to a stationary carrier', () => {
     const values = formValuesFromPrefill({ kind: 'ring', advanceMarksDeg: [16, 18.5] });
@@ -66,11 +80,15 @@ describe('sheetQuery and formValuesFromQuery (the form in the URL)', () => {
       orientation: 'landscape' as const,
       title: 'Bench engine',
       note: 'Left side',
+      targetAdvanceDeg: 18,
+      strobeReadable: true,
     };
     const query = sheetQuery(typed);
     const params = new URLSearchParams(query);
     expect(params.get('diameterMm')).toBe('128.397');
     expect(params.get('unit')).toBe('in');
+    expect(params.get('targetAdvanceDeg')).toBe('18');
+    expect(params.get('strobeReadable')).toBe('true');
     const back = formValuesFromQuery(params);
     expect(back.ignored).toEqual([]);
     expect(back.values).toEqual({ ...typed, advanceMarksDeg: '16, 18.5' });
