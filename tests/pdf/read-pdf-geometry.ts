@@ -141,9 +141,9 @@ export function nearestSegment(segments: Segment[], x1Mm: number, y1Mm: number, 
 
 /**
  * A text run: baseline origin in page millimetres from the top-left, advance width
- * along the baseline (mm) and the baseline's direction, clockwise degrees with y down.
+ * along the baseline (mm), the baseline's direction, clockwise degrees with y down, and its font size (mm).
  */
-export type TextItem = { text: string; xMm: number; yMm: number; widthMm: number; angleDeg: number; page: number };
+export type TextItem = { text: string; xMm: number; yMm: number; widthMm: number; angleDeg: number; page: number; sizeMm: number };
 
 type Glyph = { unicode: string; width: number } | number | null;
 
@@ -195,6 +195,8 @@ export async function readPdfTextItems(data: Uint8Array): Promise<TextItem[]> {
             widthMm: Math.hypot(xEnd - x, yEnd - y) * MM_PER_PT,
             angleDeg: (Math.atan2(-(yEnd - y), xEnd - x) * 180) / Math.PI, // PDF y is up; the page's y is down
             page: n,
+            // The font size on the page: the text space's unit y vector under the text matrix and CTM (ISO 32000-1 §9.4.4), × the Tf size.
+            sizeMm: Math.hypot(m[2], m[3]) * Math.abs(fontSize) * MM_PER_PT,
           });
         }
       });

@@ -43,6 +43,8 @@ describe('POST /api/v1/sheets refuses bad requests by field, with the allowed ra
     ['73 advance marks', { kind: 'wheel', diameterMm: 100, advanceMarksDeg: Array.from({ length: 73 }, (_, i) => (i % 60) + 0.5) }, 'advanceMarksDeg', /at most 72/],
     ['an unknown kind', { kind: 'hexagon', diameterMm: 100 }, 'kind', /wheel, ring, strip, scribe, check/],
     ['an unknown format', { kind: 'wheel', diameterMm: 100, format: 'png' }, 'format', /svg, pdf/],
+    ['target advance 75° BTDC', { kind: 'wheel', diameterMm: 100, strobeReadable: true, targetAdvanceDeg: 75 }, 'targetAdvanceDeg', /^Target advance .*0–60° BTDC/],
+    ['strobe-readable "yes"', { kind: 'wheel', diameterMm: 100, strobeReadable: 'yes' }, 'strobeReadable', /^Strobe-readable must be true or false/],
   ])('%s → 400 naming %s', async (_, body, path, message) => {
     const { status, json, type } = await refusal(body);
     expect(status).toBe(400);
@@ -193,6 +195,10 @@ describe('POST /api/v1/sheets answers sheets', () => {
     expect(notes.find((note) => note.startsWith('Not drawn, outside the window'))).toContain('advance mark 55° BTDC');
     const plain = await post({ kind: 'wheel', diameterMm: 150, advanceMarksDeg: [18], portEvents: [{ name: 'EX', opensCrankDeg: 98, closesCrankDeg: 262 }], format: 'svg' });
     expect(JSON.parse(decodeURIComponent(plain.headers.get('x-sheet-layout-notes') ?? ''))).toEqual([]);
+    // A strip too narrow for 5 mm strobe figures says so rather than drawing them smaller in silence.
+    const narrow = await post({ kind: 'strip', diameterMm: 240, stripWidthMm: 12, strobeReadable: true, advanceBandDeg: [16, 22], format: 'svg' });
+    const narrowNotes = JSON.parse(decodeURIComponent(narrow.headers.get('x-sheet-layout-notes') ?? '')) as string[];
+    expect(narrowNotes.join('\n')).toMatch(/Strobe-readable figures drawn .* below the 5 mm asked for: the strip is only 12 mm wide/);
   });
 
   it('a multi-page sheet as SVG is a ZIP of one true-size SVG per page, each numbered (read by Info-ZIP unzip and @xmldom/xmldom)', async () => {
