@@ -20,7 +20,7 @@ import { howToSteps } from './how-to';
 export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
-export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean; howToOnPiece?: boolean };
+export type ScaleLayout = { blocks: Block[]; keptLevels?: GraduationLevel[]; stripLengthMm?: number; warnings: string[]; infoFirst: boolean; howToOnPiece?: boolean; strobeSummary?: string };
 
 /** Pre-scales by the printer correction (before any placing or tiling) and frames the result. */
 function correctedBlock(shapes: readonly Shape[], req: SheetRequest, padMm: number, centreMm?: [number, number]): Block {
@@ -34,7 +34,14 @@ function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): S
     case 'wheel':
     case 'ring': {
       const polar = req.kind === 'wheel' ? wheelLayout(req) : ringLayout(req);
-      return { blocks: [correctedBlock(polar.shapes, req, 0.5, polar.centreMm)], keptLevels: polar.keptLevels, warnings: polar.warnings, infoFirst: false, howToOnPiece: polar.howToOnPiece };
+      return {
+        blocks: [correctedBlock(polar.shapes, req, 0.5, polar.centreMm)],
+        keptLevels: polar.keptLevels,
+        warnings: polar.warnings,
+        infoFirst: false,
+        howToOnPiece: polar.howToOnPiece,
+        ...(polar.strobeSummary ? { strobeSummary: polar.strobeSummary } : {}),
+      };
     }
     case 'strip': {
       const strip = stripLayout(req, printable);
@@ -44,6 +51,7 @@ function scaleLayout(req: SheetRequest, page: PageSpec, infoHeightMm: number): S
         stripLengthMm: strip.stripLengthMm,
         warnings: strip.warnings,
         infoFirst: true,
+        ...(strip.strobeSummary ? { strobeSummary: strip.strobeSummary } : {}),
       };
     }
     case 'scribe': {
@@ -188,6 +196,7 @@ function planSheet(request: SheetRequest, options: BuildOptions) {
       date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
       ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
       ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
+      ...(layout?.strobeSummary ? { strobeSummary: layout.strobeSummary } : {}),
     }),
   });
   // The scribe chart's first page holds what the info panel leaves; its lines do not depend on the table.

@@ -76,7 +76,7 @@ export function rotationWord(req: SheetRequest): string {
 
 export function titleBlockLines(
   req: SheetRequest,
-  facts: { date: string; keptLevels?: GraduationLevel[]; stripLengthMm?: number },
+  facts: { date: string; keptLevels?: GraduationLevel[]; stripLengthMm?: number; strobeSummary?: string },
 ): string[] {
   // The scale-check sheet has no scale: carrier, rotation and numbering mean nothing there.
   if (req.kind === 'check') return [dimensionsLine(req), `Date ${facts.date} · paper ${req.paper} ${req.orientation}`, `Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`, ...(req.note ? [`Note: ${req.note}`] : [])];
@@ -87,6 +87,7 @@ export function titleBlockLines(
     `Numbering: ${req.numbering === 'split' ? 'split (0 at TDC to 180 at BDC both ways, BTDC / ATDC)' : 'full (0–359 in crank order)'}`,
   ];
   if (facts.keptLevels) lines.push(`Graduations: ${facts.keptLevels.map((l) => `${l}°`).join(', ')}`);
+  if (facts.strobeSummary) lines.push(facts.strobeSummary);
   // Marks, band and target share a line: the title block stays short enough for a ring and its panel on one page.
   const advance = [
     ...(req.advanceMarksDeg.length ? [`Advance marks: ${[...new Set(req.advanceMarksDeg)].sort((a, b) => a - b).map((d) => `${d}°`).join(', ')} BTDC`] : []),

@@ -12,6 +12,7 @@ import {
   strobeHalfWidthMm,
   strobeNumeralWidthMm,
   strobeRangeBtdcDeg,
+  strobeSummary,
   strobeZoneMm,
   STROBE_NUMERAL_MM,
   STROBE_PAD_MM,
@@ -54,7 +55,7 @@ export type StripPlan = {
   segments: StripSegment[];
 };
 
-export type StripLayout = { rows: Shape[][]; keptLevels: GraduationLevel[]; stripLengthMm: number; warnings: string[]; plan: StripPlan };
+export type StripLayout = { rows: Shape[][]; keptLevels: GraduationLevel[]; stripLengthMm: number; warnings: string[]; plan: StripPlan; strobeSummary?: string };
 
 const LETTERS = 'ABCDEFGHIJKLMNOPQRSTUVWXYZ';
 
@@ -429,7 +430,7 @@ export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
       `The strip (${(plan.markedMm).toFixed(2)} mm marked) is cut into ${plan.segments.length} segments, ${plan.segments[0]!.letter}–${plan.segments[plan.segments.length - 1]!.letter}, that join end to end`,
     );
   const rows = plan.segments.map((segment, i) => stripRow(req, plan, segment, i, choice.finestLevel, stride, strobe.fit));
-  return { rows, keptLevels: choice.keptLevels, stripLengthMm: plan.stripLengthMm, warnings, plan };
+  return { rows, keptLevels: choice.keptLevels, stripLengthMm: plan.stripLengthMm, warnings, plan, ...(strobe.fit ? { strobeSummary: strobeSummary(strobe.fit) } : {}) };
 }
 
 /** What a window strip cannot show: each requested advance mark, band or port event outside the window, by name. */

@@ -132,6 +132,13 @@ export function chooseStrobeFit(range: readonly [number, number], numbering: Num
   };
 }
 
+/** The title block's line for the figures drawn: the step, the stretch and what happened to the fine graduations. */
+export function strobeSummary(fit: StrobeFit): string {
+  const first = fit.numerals[0]!.advanceDeg;
+  const last = fit.numerals[fit.numerals.length - 1]!.advanceDeg;
+  return `Strobe-readable: figures every ${fit.stepDeg}° from ${formatDeg(first)} to ${formatDeg(last)}° BTDC, ${(fit.sizeMm * DIGIT_INK_EM).toFixed(1)} mm tall; graduations finer than 5° only there`;
+}
+
 export type PlacedStrobe = { numerals: PlacedMark[]; intervals: AlongInterval[] };
 
 /** The figures' places along the scale and the stretches they cover (first to last figure), for a turn or a strip segment. */

@@ -15,6 +15,7 @@ import {
   placeStrobe,
   roomOf,
   strobeRangeBtdcDeg,
+  strobeSummary,
   strobeZoneMm,
   STROBE_NUMERAL_MM,
   type StrobeFit,
@@ -25,7 +26,7 @@ import {
 /** Degree wheels (ticks inward from the cut edge) and flange rings (ticks outward from the inner edge). */
 
 /** `howToOnPiece`: the "how to use" steps are drawn in the free middle (else the info panel carries them). */
-export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[]; howToOnPiece: boolean };
+export type PolarLayout = { shapes: Shape[]; centreMm: [number, number]; keptLevels: GraduationLevel[]; warnings: string[]; howToOnPiece: boolean; strobeSummary?: string };
 
 const MIN_DEPTH_SCALE = 0.02;
 
@@ -125,7 +126,7 @@ function polarScale(req: SheetRequest, piece: PolarPiece) {
     ...(strobe ? { strobe } : {}),
     maxDepthMm,
   });
-  return { shapes, keptLevels: choice.keptLevels, warnings };
+  return { shapes, keptLevels: choice.keptLevels, warnings, ...(plan.fit ? { strobeSummary: strobeSummary(plan.fit) } : {}) };
 }
 
 /** A wheel centred on (0, 0): cut circle, optional hub hole, centre cross with a 1 mm ring, the scale. */
@@ -153,8 +154,10 @@ export function wheelLayout(req: SheetRequest): PolarLayout {
   // The steps go in the blank middle of the scale, below the centre cross or hub hole, when they fit.
   const howTo = howToInCircle(howToSteps(req), [0, 0], nearestInkMm(scale.shapes) - 1.5, Math.max(crossMm, hubRadiusMm) + 1.5);
   if (howTo) shapes.push(...howTo);
-  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings, howToOnPiece: howTo !== undefined };
+  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings, howToOnPiece: howTo !== undefined, ...summaryOf(scale) };
 }
+
+const summaryOf = (scale: { strobeSummary?: string }) => (scale.strobeSummary ? { strobeSummary: scale.strobeSummary } : {});
 
 /** A flange ring centred on (0, 0): two cut circles, ticks outward from the inner edge where the flywheel mark reads. */
 export function ringLayout(req: SheetRequest): PolarLayout {
@@ -177,7 +180,7 @@ export function ringLayout(req: SheetRequest): PolarLayout {
   // The hole is cut away, so the steps may fill it: read before cutting.
   const howTo = howToInCircle(howToSteps(req), [0, 0], innerRadiusMm - 2, 0);
   if (howTo) shapes.push(...howTo);
-  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings, howToOnPiece: howTo !== undefined };
+  return { shapes, centreMm: [0, 0], keptLevels: scale.keptLevels, warnings: scale.warnings, howToOnPiece: howTo !== undefined, ...summaryOf(scale) };
 }
 
 /** How near to the centre (0, 0) any of the scale's ink comes. */

@@ -64,7 +64,7 @@ const FULL_SIZE = [
 const ADVANCE = { strobeReadable: true, advanceBandDeg: [16, 22] as [number, number], targetAdvanceDeg: 18, advanceMarksDeg: [16, 18, 22] };
 
 describe('strobe-readable figures, measured on the SVG', () => {
-  it.each(FULL_SIZE)('%s: every figure at least 5 mm tall, no note about them', (_, input) => {
+  it.each(FULL_SIZE)('%s: every figure at least 5 mm tall, no note about them, the step named in the title block', (_, input, step) => {
     const { drawing, svg } = sheet({ ...input, ...ADVANCE });
     const figures = byRole(svg, 'text', 'strobe-numeral');
     expect(figures.length).toBeGreaterThanOrEqual(3);
@@ -73,6 +73,9 @@ describe('strobe-readable figures, measured on the SVG', () => {
     // Twice the scale's own numerals (3.2 mm type), at the very least.
     const numeral = byRole(svg, 'text', 'numeral')[0]!;
     expect(n(figures[0]!, 'font-size')).toBeGreaterThan(2 * n(numeral, 'font-size'));
+    // The info panel wraps its lines: read its words as one run.
+    const sheetText = svg.all('text').map((el) => el.textContent).join(' ');
+    expect(sheetText).toMatch(new RegExp(`Strobe-readable: figures every ${step}° from \\d+ to \\d+° BTDC, 5\\.\\d mm tall`));
   });
 
   it.each(FULL_SIZE)('%s: a figure at every step through the advance band, each on a heavy tick', (_, input, step) => {
