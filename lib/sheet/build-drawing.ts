@@ -5,7 +5,7 @@ import { nestBlock, toBlock, type Block } from './block';
 import type { Drawing, GraduationLevel, Shape } from './drawing';
 import { infoPanel, type InfoContent } from './info-panel';
 import { BLOCK_GAP_MM, fitsPage, printableMm, stackedPageCount, stackOnPages, tileOversized, type PageSpec, type PagedDrawing } from './page-layout';
-import { addPageBands, pageBandHeightMm } from './page-band';
+import { addPageBands, bandWidthMm, pageBandHeightMm } from './page-band';
 import { DEFAULT_MARGIN_MM, MIN_MARGIN_MM, pageSizeMm } from './paper';
 import { correctionFactors } from './printer-correction';
 import { sheetRequestSchema, type SheetRequest } from './sheet-request';
@@ -167,7 +167,7 @@ export function buildDrawing(input: SheetRequest, options: BuildOptions = {}): D
   if (!plain.multiPage) paged = plain.place();
   else {
     // Several pages: each gets a band (title, page N of M, print line, check bar), so arrange in what it leaves.
-    const banded: PageSpec = { ...page, bandMm: pageBandHeightMm(printableMm(page).widthMm) };
+    const banded: PageSpec = { ...page, bandMm: pageBandHeightMm(bandWidthMm(page, request), title) };
     if (request.kind === 'scribe') layout = scaleLayout(request, banded, infoHeightMm);
     paged = addPageBands(arrange(banded, layout, infoAt).place(), banded, title, request);
   }

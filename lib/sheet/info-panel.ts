@@ -7,7 +7,7 @@ import type { SheetRequest } from './sheet-request';
 import { CAUTIONS, PRINT_AT_100, whichWayNote } from './sheet-notes';
 import { arrow, circle, line, path, rect, text } from './shapes';
 import { STROKE_MM, TEXT_MM } from './sheet-style';
-import { wrapText } from './text-wrap';
+import { fitTitle, wrapText } from './text-wrap';
 import { howToRows, howToShapes } from './how-to';
 
 /** Title block, print line, "which way" note with its small diagram, cautions and the scale check. */
@@ -27,18 +27,10 @@ function paragraph(shapes: Shape[], content: string, x: number, y: number, sizeM
 
 const MIN_TITLE_MM = 2.4;
 
-/**
- * The title wraps to at most two lines, then shrinks (never below MIN_TITLE_MM) until it does.
- * Capitals in bold run wider than the average glyph the wrap estimates (about 0.75 em in
- * DejaVu Sans Bold, from memory), so the wrap width is narrowed by the title's share of them.
- */
+/** The title wraps to at most two lines, then shrinks (never below MIN_TITLE_MM) until it does (text-wrap.ts). */
 function titleParagraph(shapes: Shape[], title: string, widthMm: number): number {
-  const letters = title.replace(/\s/g, '');
-  const capitals = letters.length ? letters.replace(/[^A-Z0-9]/g, '').length / letters.length : 0;
-  const fitWidthMm = widthMm / (1 + capitals * (0.75 / 0.62 - 1));
-  let size: number = TEXT_MM.title;
-  while (size > MIN_TITLE_MM && wrapText(title, size, fitWidthMm).length > 2) size = Math.max(MIN_TITLE_MM, size * 0.9);
-  return paragraph(shapes, title, 0, 0, size, fitWidthMm, 'bold', 'title');
+  const fitted = fitTitle(title, widthMm, TEXT_MM.title, MIN_TITLE_MM);
+  return paragraph(shapes, title, 0, 0, fitted.sizeMm, fitted.wrapWidthMm, 'bold', 'title');
 }
 
 function whichWayDiagram(req: SheetRequest, x: number, y: number): { shapes: Shape[]; heightMm: number } {

@@ -7,6 +7,7 @@ import { buildDrawing } from '@/lib/sheet/build-drawing';
 import type { Drawing, TextShape } from '@/lib/sheet/drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import type { SheetRequestInput } from '@/lib/sheet/sheet-request';
+import { pageBandHeightMm, pageBandShapes } from '@/lib/sheet/page-band';
 import { PRINT_AT_100 } from '@/lib/sheet/sheet-notes';
 import { expectPagesPrintable } from './sheet-checks';
 import { FIXED_DATE, n, parseSvg, req, type Svg } from './svg-measure';
@@ -48,7 +49,8 @@ function expectBandOnEveryPage(drawing: Drawing, svg: Svg): void {
       const y = n(el, attr);
       return y >= page.viewportMm.yMm && y <= page.viewportMm.yMm + page.viewportMm.heightMm;
     };
-    expect(titles.filter((el) => onPage(el, 'y')).map((el) => el.textContent)).toEqual([drawing.title]);
+    // A long title wraps onto a second row: its rows read back as the whole title.
+    expect(titles.filter((el) => onPage(el, 'y')).map((el) => el.textContent).join(' ')).toBe(drawing.title);
     expect(numbers.filter((el) => onPage(el, 'y')).map((el) => el.textContent)).toEqual([`page ${index + 1} of ${count}`]);
     expect(printLines.filter((el) => onPage(el, 'y')).map((el) => el.textContent)).toEqual([PRINT_AT_100]);
     const bar = bars.filter((el) => onPage(el, 'y1'));
@@ -126,6 +128,52 @@ describe('page band on multi-page sheets', () => {
     expect(bars).toHaveLength(2);
     // The SVG writes 4 decimals (render-svg.ts num()), so compare to 0.001 mm.
     for (const bar of bars) expect(n(bar, 'x2') - n(bar, 'x1')).toBeCloseTo(100 / 1.02, 3);
+  });
+
+  it('a long title wraps to two rows and then shrinks, never cut, on every page alike', () => {
+    const title = 'WORKSHOP TIMING WHEEL FOR THE BLUE TWO STROKE SCOOTER ENGINE NUMBER TWELVE SPARE';
+    expect(title.length).toBe(80);
+    // 120 mm leaves about 100 mm beside "page N of M": one row will not hold it.
+    const widthMm = 120;
+    const band = pageBandShapes({ title, pageNumber: 1, pageCount: 3, widthMm, tileName: 'B2' }).filter((s): s is TextShape => s.type === 'text');
+    const rows = band.filter((s) => s.data?.role === 'page-title');
+    expect(rows.map((r) => r.text).join(' ')).toBe(`${title} · tile B2`);
+    expect(rows.some((r) => r.text.includes('…'))).toBe(false);
+    expect(rows.length).toBeGreaterThanOrEqual(2);
+    const number = band.find((s) => s.data?.role === 'page-number')!;
+    const printLine = band.find((s) => s.data?.role === 'page-print-line')!;
+    for (const row of rows) {
+      // Bold capitals of DejaVu Sans run up to about 0.75 em (from memory): the row ends short of "page N of M".
+      expect(row.text.length * row.sizeMm * 0.75, row.text).toBeLessThanOrEqual(widthMm - number.text.length * number.sizeMm * 0.75);
+      expect(row.yMm).toBeLessThan(printLine.yMm - printLine.sizeMm);
+    }
+    // Two rows, then smaller: three rows only at the smallest size.
+    if (rows.length > 2) expect(rows[0]!.sizeMm).toBeCloseTo(1.8, 6);
+    // The band grows with the second row, and every page's band is as deep (the height holds the longest tile name).
+    expect(pageBandHeightMm(widthMm, title)).toBeGreaterThan(pageBandHeightMm(widthMm, 'Wheel'));
+    const other = pageBandShapes({ title, pageNumber: 3, pageCount: 3, widthMm }).find((s) => s.data?.role === 'page-band-rule')!;
+    const rule = pageBandShapes({ title, pageNumber: 1, pageCount: 3, widthMm, tileName: 'B2' }).find((s) => s.data?.role === 'page-band-rule')!;
+    expect(other).toEqual(rule);
+  });
+
+  it('a multi-page sheet with an 80-capital title on a printer that shrinks x: two title rows above the rule on every page, the pages printable', () => {
+    const title = 'WORKSHOP TIMING WHEEL FOR THE BLUE TWO STROKE SCOOTER ENGINE NUMBER TWELVE SPARE';
+    const { drawing } = build({ ...BIG_WHEEL, title, printerScaleX: 0.9 });
+    expect(drawing.pages.length).toBeGreaterThan(1);
+    expectPagesPrintable(drawing);
+    drawing.pages.forEach((page) => {
+      // A whole page's band is in the drawing (and the SVG), a tile's in its page shapes.
+      const whole = page.originMm[0] === 0 && page.originMm[1] === 0;
+      const v = page.viewportMm;
+      const shapes = whole ? drawing.shapes.filter((s) => s.type === 'text' || s.type === 'line').filter((s) => (s.type === 'text' ? s.yMm : s.type === 'line' ? s.y1Mm : -1) >= v.yMm && (s.type === 'text' ? s.yMm : s.type === 'line' ? s.y1Mm : -1) <= v.yMm + v.heightMm) : page.pageShapes;
+      const rows = shapes.filter((s): s is TextShape => s.type === 'text' && s.data?.role === 'page-title');
+      // The tiles' headings take two rows, "· tile A1" kept whole on the second; the info page's title alone fits one.
+      expect(rows).toHaveLength(whole ? 1 : 2);
+      expect(rows.map((r) => r.text).join(' ')).toMatch(new RegExp(`^${title}( · tile \\w+)?$`));
+      if (!whole) expect(rows[1]!.text).toMatch(/· tile \w+$/);
+      const rule = shapes.find((s) => s.data?.role === 'page-band-rule')!;
+      for (const row of rows) expect(row.yMm).toBeLessThan(rule.type === 'line' ? rule.y1Mm : 0);
+    });
   });
 
   it('a sheet that fits one page has no band: its info panel already says it all', () => {
