@@ -221,3 +221,21 @@ test('the page shows the print-size line and the safety cautions', async ({ page
   await expect(pageText(/Take the plug lead off/)).toBeVisible();
   await expect(pageText(/hole a piston/)).toBeVisible();
 });
+
+test('the strobe-readable option draws big figures on a white band in the preview, and the link keeps it', async ({ page }) => {
+  await page.goto('/');
+  await page.getByLabel('Diameter', { exact: true }).fill('280');
+  await page.getByLabel('Target advance').fill('18');
+  const strobe = page.getByRole('checkbox', { name: /Strobe-readable/ });
+  await strobe.check();
+  const sheet = page.getByTestId('sheet-preview');
+  // lib/sheet/strobe.ts: on a 280 mm wheel, figures every 5° over 13–23° BTDC (10, 15, 20, 25) on a white band.
+  await expect(sheet.locator('svg [data-role="strobe-band"]').first()).toBeAttached({ timeout: 15_000 });
+  await expect(sheet.locator('svg text[data-role="strobe-numeral"]')).toHaveText(['10', '15', '20', '25']);
+  // The whole form lives in the URL: a reload keeps the option and the target.
+  await expect(page).toHaveURL(/strobeReadable=true/);
+  await expect(page).toHaveURL(/targetAdvanceDeg=18/);
+  await page.reload();
+  await expect(page.getByRole('checkbox', { name: /Strobe-readable/ })).toBeChecked();
+  await expect(page.getByLabel('Target advance')).toHaveValue('18');
+});
