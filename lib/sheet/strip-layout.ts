@@ -161,6 +161,14 @@ function stripStrobeChoice(req: SheetRequest, plan: StripPlan): StrobeChoice {
   });
 }
 
+/** A window that holds none of the figures gets none, keeps its fine graduations, and says so. */
+function strobeOnStrip(choice: StrobeChoice, req: SheetRequest, plan: StripPlan): StrobeChoice {
+  const { fit } = choice;
+  if (!fit || plan.segments.some((segment) => placeStrobe(fit, segmentRange(plan, segment), req.carrier).numerals.length > 0)) return choice;
+  const [first, last] = [fit.numerals[0]!.advanceDeg, fit.numerals[fit.numerals.length - 1]!.advanceDeg];
+  return { warnings: [...choice.warnings, `Strobe-readable figures not drawn: ${formatDeg(first)}–${formatDeg(last)}° BTDC lies outside the window`] };
+}
+
 /**
  * The strobe figures on one strip segment: a heavy long tick on each, a white ground over their
  * stretch, and the figures on it, upright or (across) reading upwards, all inside the segment.
@@ -420,7 +428,7 @@ export function stripLayout(req: SheetRequest, printable: Size): StripLayout {
   const plan = planStrip(req, rowLengthMm);
   const choice = chooseLevels(plan.mmPerDeg, req.minPitchMm, 'on this strip');
   const stride = numberStrideFor(plan.mmPerDeg * 10, textWidthMm('180', stripDepths(req.stripWidthMm).numeralSize));
-  const strobe = stripStrobeChoice(req, plan);
+  const strobe = strobeOnStrip(stripStrobeChoice(req, plan), req, plan);
   const warnings = [...choice.warnings, ...strobe.warnings];
   warnings.push(...outsideWindowWarnings(req));
   const numeralMm = textWidthMm('0', stripDepths(req.stripWidthMm).numeralSize) + 0.8;

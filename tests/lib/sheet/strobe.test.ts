@@ -167,6 +167,14 @@ describe('strobe-readable figures, measured on the SVG', () => {
     for (const el of figures) expect(figureInkMm(svg, el)).toBeLessThan(MIN_FIGURE_MM);
   });
 
+  it('a window strip away from the advance range draws no figures, keeps its fine graduations and says why', () => {
+    // Window 30–150° ATDC (crank 30 to 150): nowhere near 16–22° BTDC.
+    const { drawing, svg } = sheet({ kind: 'strip', diameterMm: 240, stripWidthMm: 25, windowCrankDeg: [30, 150], ...ADVANCE });
+    expect(byRole(svg, 'text', 'strobe-numeral')).toHaveLength(0);
+    expect(drawing.warnings.join('\n')).toMatch(/Strobe-readable figures not drawn: \d+–\d+° BTDC lies outside the window/);
+    expect(svg.all('line').filter((el) => el.getAttribute('data-level') === '1').length).toBeGreaterThan(100);
+  });
+
   it.each([
     ...[20, 40, 60, 90, 150, 220, 400].map((d) => ['wheel', { kind: 'wheel', diameterMm: d }] as const),
     ...[[60, 70], [110, 130], [130, 160], [300, 340]].map(([i, o]) => ['ring', { kind: 'ring', innerDiameterMm: i!, outerDiameterMm: o! }] as const),
