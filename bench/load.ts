@@ -1,6 +1,6 @@
 /**
  * `npm run bench:load`: the production server under load (issue 14). Builds nothing:
- * run `npm run build` first. Starts `next start` on a free port with a temporary
+ * run `npm run build` first. Starts the production server (scripts/server.mjs, as `npm start`) on a free port with a temporary
  * migrated and seeded database (plus 10,000 templates), drives it with autocannon,
  * prints every figure with PASS/MISS per target, records them under "load" in
  * bench/results.json and exits non-zero on a MISS.
@@ -186,7 +186,7 @@ async function main(): Promise<void> {
     await addListRows(dbFile);
     server = await startServer(dbFile, dir);
     const startRssMb = rssMb(server.pid);
-    console.log(`next start on ${server.baseUrl} (pid ${server.pid}), RSS at start ${startRssMb.toFixed(0)} MB, ${os.availableParallelism()} cores`);
+    console.log(`scripts/server.mjs on ${server.baseUrl} (pid ${server.pid}), RSS at start ${startRssMb.toFixed(0)} MB, ${os.availableParallelism()} cores`);
     const cookie = await signIn(server.baseUrl, LOAD_USER.email, LOAD_USER.password);
     const pdf = await pdfFigures(server);
     const cache = await cacheFigures(server.baseUrl, pdf.manyPerS);
