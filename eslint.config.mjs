@@ -60,6 +60,20 @@ export default defineConfig([
     },
   },
   {
+    // The server thread never loads react-pdf or the fonts (hundreds of MB once per process): every PDF is drawn in
+    // the worker pool (app/lib/pdf-pool.ts), which is sent plain data. Types from pdf/ are fine: they vanish in the build.
+    files: ['app/**'],
+    rules: {
+      '@typescript-eslint/no-restricted-imports': [
+        'error',
+        {
+          paths: [{ name: '@react-pdf/renderer', allowTypeImports: true, message: 'PDFs are drawn in the worker pool (app/lib/pdf-pool.ts), not on the server thread.' }],
+          patterns: [{ group: ['@/pdf/*'], allowTypeImports: true, message: 'PDFs are drawn in the worker pool (app/lib/pdf-pool.ts): import only types from pdf/.' }],
+        },
+      ],
+    },
+  },
+  {
     files: ['pdf/**'],
     rules: {
       'no-restricted-imports': ['error', { patterns: [{ group: ['@/db/*', 'knex', 'better-sqlite3'], message: 'pdf/ draws from data it is given: no db/.' }] }],

@@ -1,6 +1,7 @@
 import type { Build } from '@/lib/builds/build';
 import type { DateFormat } from '@/lib/format/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
+import { dayFormat, dayStart } from '@/lib/sheet/sheet-day';
 import type { SheetRequest } from '@/lib/sheet/sheet-request';
 import { renderBuildRecordPdf, type CopyPaper } from './render-build-record-pdf';
 import { renderSheetPdf } from './render-sheet-pdf';
@@ -19,15 +20,6 @@ export type PdfJob =
 export type RenderedPdf = { bytes: Uint8Array; notes: string[] };
 
 type Renderers = { [K in PdfJob['kind']]: (props: Extract<PdfJob, { kind: K }>['props']) => Promise<RenderedPdf> };
-
-export function dayStart(day: string): Date {
-  return new Date(`${day}T00:00:00Z`);
-}
-
-/** The day written as a date at midnight UTC in UTC: the calendar day itself, whatever zone it was taken in. */
-export function dayFormat(locale: string): DateFormat {
-  return { locale, timeZone: 'UTC' };
-}
 
 const RENDERERS: Renderers = {
   async sheet({ request, day, locale }) {

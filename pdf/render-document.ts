@@ -25,5 +25,17 @@ export async function renderDocumentToBuffer(document: DocumentElement): Promise
     return Buffer.concat(chunks);
   } finally {
     idleRoots.push(root);
+    forgetReactMeasures();
   }
+}
+
+/**
+ * react-pdf's bundled React reconciler writes a performance.measure() for every component it
+ * commits (React's "Components" timing track), and Node keeps every measure in the thread's
+ * performance timeline until it is cleared: ~0.9 MB a sheet, 137 of 173 MB live after 150 sheets
+ * (a --heap-prof run). No one reads them here, so they go after each document. The thread
+ * that draws PDFs is a pool worker, whose timeline holds nothing else.
+ */
+function forgetReactMeasures(): void {
+  performance.clearMeasures();
 }

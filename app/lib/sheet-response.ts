@@ -5,8 +5,8 @@ import { strToU8, zipSync } from 'fflate';
 import type { Drawing } from '@/lib/sheet/drawing';
 import { renderSvg, renderSvgPage } from '@/lib/sheet/render-svg';
 import { sheetFileName } from '@/lib/sheet/sheet-file-name';
+import { dayFormat, dayStart } from '@/lib/sheet/sheet-day';
 import type { SheetRequest } from '@/lib/sheet/sheet-request';
-import { dayFormat, dayStart } from '@/pdf/pdf-job';
 import { pdfPoolBusyResponse, renderPdf } from './pdf-pool';
 import { cachedSheet, matchesIfNoneMatch, sheetCacheKey, type DrawnSheet } from './sheet-cache';
 

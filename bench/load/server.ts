@@ -1,6 +1,7 @@
 /**
  * The production server for the load benchmark: a temporary migrated and seeded
- * database, `next start` on a free port, its resident memory read from /proc.
+ * database, scripts/server.mjs (what `npm start` runs: rate limits see the real TCP
+ * peer) on a free port, its resident memory read from /proc.
  * Builds nothing: it serves the build in NEXT_DIST_DIR (default .next).
  */
 import { spawn, execFileSync, type ChildProcess } from 'node:child_process';
@@ -44,7 +45,7 @@ export function assertBuilt(): void {
 async function waitUntilUp(baseUrl: string, child: ChildProcess): Promise<void> {
   const deadline = Date.now() + 60_000;
   while (Date.now() < deadline) {
-    if (child.exitCode !== null) throw new Error(`next start exited with code ${child.exitCode}`);
+    if (child.exitCode !== null) throw new Error(`the server exited with code ${child.exitCode}`);
     try {
       const response = await fetch(new URL('/api/health', baseUrl));
       if (response.ok) return;
@@ -53,16 +54,23 @@ async function waitUntilUp(baseUrl: string, child: ChildProcess): Promise<void> 
     }
     await new Promise((r) => setTimeout(r, 250));
   }
-  throw new Error('next start did not answer /api/health within 60 s');
+  throw new Error('the server did not answer /api/health within 60 s');
+}
+
+/** Extra node flags for the server (BENCH_SERVER_NODE_OPTIONS, e.g. `--cpu-prof --cpu-prof-dir=/tmp/prof` to profile it). */
+function serverNodeOptions(): string[] {
+  return (process.env.BENCH_SERVER_NODE_OPTIONS ?? '').split(' ').filter(Boolean);
 }
 
 export async function startServer(dbFile: string, dir: string): Promise<RunningServer> {
   const port = await freePort();
   const baseUrl = `http://127.0.0.1:${port}`;
-  const child = spawn(process.execPath, ['node_modules/next/dist/bin/next', 'start', '-p', String(port), '-H', '127.0.0.1'], {
+  const child = spawn(process.execPath, [...serverNodeOptions(), 'scripts/server.mjs'], {
     env: {
       ...process.env,
       NODE_ENV: 'production',
+      HOST: '127.0.0.1',
+      PORT: String(port),
       RIMSCALE_DB_FILE: dbFile,
       RIMSCALE_UPLOAD_DIR: path.join(dir, 'uploads'),
       NEXTAUTH_SECRET: randomBytes(32).toString('base64'),

@@ -82,7 +82,11 @@ const LINE_GAP = 1.3;
 /** The steps wrapped to a width at a text size, and the height they take below the heading. */
 export function howToRows(steps: readonly string[], widthMm: number, sizeMm: number = TEXT_MM.small): HowToRows {
   const rows = steps.flatMap((step) => wrapText(step, sizeMm, widthMm));
-  return { rows, heightMm: TEXT_MM.body * 1.4 + rows.length * sizeMm * LINE_GAP };
+  return { rows, heightMm: rowsHeightMm(rows.length, sizeMm) };
+}
+
+function rowsHeightMm(rowCount: number, sizeMm: number): number {
+  return TEXT_MM.body * 1.4 + rowCount * sizeMm * LINE_GAP;
 }
 
 /** The heading (when `heading`) and rows as text shapes, (x, y) the top-left corner. */
@@ -109,11 +113,14 @@ export function howToInCircle(steps: readonly string[], centreMm: [number, numbe
   for (let share = 0.95; share >= 0.5; share -= 0.05) {
     const widthMm = 2 * radiusMm * share;
     const fits = (heightMm: number) => Math.hypot(widthMm / 2, clearMm + heightMm) <= radiusMm;
-    const all = howToRows(steps, widthMm, size).heightMm;
+    // Each step wrapped once per width; the splits below only add up its row counts (as howToRows would).
+    const stepRows = steps.map((step) => wrapText(step, size, widthMm).length);
+    const rowsOf = (from: number, to: number) => stepRows.slice(from, to).reduce((sum, n) => sum + n, 0);
+    const all = rowsHeightMm(rowsOf(0, steps.length), size);
     if (fits(all)) return howToShapes(steps, widthMm, cx - widthMm / 2, cy + clearMm, size);
     for (let split = 1; split < steps.length; split += 1) {
-      const upper = howToRows(steps.slice(0, split), widthMm, size).heightMm;
-      const lower = howToRows(steps.slice(split), widthMm, size).heightMm - TEXT_MM.body * 1.4;
+      const upper = rowsHeightMm(rowsOf(0, split), size);
+      const lower = rowsHeightMm(rowsOf(split, steps.length), size) - TEXT_MM.body * 1.4;
       if (fits(upper) && fits(lower))
         return [...howToShapes(steps.slice(0, split), widthMm, cx - widthMm / 2, cy - clearMm - upper, size), ...howToShapes(steps.slice(split), widthMm, cx - widthMm / 2, cy + clearMm, size, false)];
     }

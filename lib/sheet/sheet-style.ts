@@ -5,5 +5,10 @@ export const TEXT_MM = { title: 4.2, heading: 3, body: 2.4, small: 2, numeral: 3
 export const GLYPH_WIDTH_EM = 0.62;
 
 export function textWidthMm(text: string, sizeMm: number): number {
-  return text.length * sizeMm * GLYPH_WIDTH_EM;
+  return lengthWidthMm(text.length, sizeMm);
+}
+
+/** textWidthMm of any text `length` characters long: the estimate counts characters, so wrapping need not build the text. */
+export function lengthWidthMm(length: number, sizeMm: number): number {
+  return length * sizeMm * GLYPH_WIDTH_EM;
 }

@@ -1,4 +1,4 @@
-import { textWidthMm } from './sheet-style';
+import { lengthWidthMm, textWidthMm } from './sheet-style';
 
 /** Cuts a word wider than the line into pieces that fit. */
 function splitLongWord(word: string, sizeMm: number, widthMm: number): string[] {
@@ -24,18 +24,23 @@ export function fitTitle(title: string, widthMm: number, sizeMm: number, minSize
   return { rows: wrapText(title, size, wrapWidthMm), sizeMm: size, wrapWidthMm };
 }
 
-/** Greedy word wrap to a width in mm, using the sheet's glyph-width estimate; over-long words are cut. */
+/**
+ * Greedy word wrap to a width in mm, using the sheet's glyph-width estimate; over-long words are cut.
+ * Widths come from character counts (lengthWidthMm), so no candidate line is built just to be measured.
+ */
 export function wrapText(content: string, sizeMm: number, widthMm: number): string[] {
   const lines: string[] = [];
   for (const paragraph of content.split('\n')) {
     let current = '';
-    const words = paragraph.split(/\s+/).filter(Boolean).flatMap((word) => (textWidthMm(word, sizeMm) > widthMm ? splitLongWord(word, sizeMm, widthMm) : [word]));
-    for (const word of words) {
-      const candidate = current ? `${current} ${word}` : word;
-      if (current && textWidthMm(candidate, sizeMm) > widthMm) {
-        lines.push(current);
-        current = word;
-      } else current = candidate;
+    for (const whole of paragraph.split(/\s+/)) {
+      if (!whole) continue;
+      const pieces = lengthWidthMm(whole.length, sizeMm) > widthMm ? splitLongWord(whole, sizeMm, widthMm) : [whole];
+      for (const word of pieces) {
+        if (current && lengthWidthMm(current.length + 1 + word.length, sizeMm) > widthMm) {
+          lines.push(current);
+          current = word;
+        } else current = current ? `${current} ${word}` : word;
+      }
     }
     lines.push(current);
   }

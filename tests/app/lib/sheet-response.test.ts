@@ -6,7 +6,8 @@ import { DEFAULT_DATE_FORMAT } from '@/lib/format/date-format';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { renderSvg } from '@/lib/sheet/render-svg';
 import { sheetRequestSchema, type SheetRequestInput } from '@/lib/sheet/sheet-request';
-import { dayFormat, dayStart, renderPdfJob } from '@/pdf/pdf-job';
+import { dayFormat, dayStart } from '@/lib/sheet/sheet-day';
+import { renderPdfJob } from '@/pdf/pdf-job';
 
 afterAll(() => closePdfPool());
 beforeEach(() => clearSheetCache());

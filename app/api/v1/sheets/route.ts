@@ -4,7 +4,7 @@ import { guarded } from '@/app/lib/route-handler';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
 
-// react-pdf reads the TTFs from fonts/ and uses Node buffers.
+// Node, not the edge: the PDF worker pool runs in worker threads and the cache holds Node buffers.
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
 
