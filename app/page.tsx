@@ -1,9 +1,21 @@
 import { cookies } from 'next/headers';
-import { GeneratorForm } from '@/components/generator/generator-form';
-import { formValuesFromQuery } from '@/components/generator/form-values';
+import { GeneratorForm, type FieldLabels } from '@/components/generator/generator-form';
+import { formValuesFromQuery } from '@/components/generator/form-values-from-query';
 import { generatorWorkspaceProfiles } from '@/app/lib/generator-workspace';
 import { resolveSheetLink } from '@/lib/sheet-link';
 import { SHEET_COOKIE } from '@/lib/sheet-link-params';
+import { sheetRequestFields as fields } from '@/lib/sheet/sheet-request-fields';
+
+/** Read from the field table here on the server, so the browser's form needs no schema to label its fields. */
+const FIELD_LABELS: FieldLabels = {
+  diameterMm: fields.diameterMm.label,
+  hubHoleMm: fields.hubHoleMm.label,
+  innerDiameterMm: fields.innerDiameterMm.label,
+  outerDiameterMm: fields.outerDiameterMm.label,
+  stripWidthMm: fields.stripWidthMm.label,
+  targetAdvanceDeg: fields.targetAdvanceDeg.label,
+  strobeReadable: fields.strobeReadable.label,
+};
 
 type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 
@@ -44,7 +56,7 @@ export default async function HomePage({ searchParams }: { searchParams: SearchP
           your figures as you type; check your printer once and every sheet is corrected for it.
         </p>
       </header>
-      <GeneratorForm key={params.toString()} defaultValues={values} ignored={ignored} notices={notices} workspace={workspace} />
+      <GeneratorForm key={params.toString()} defaultValues={values} fieldLabels={FIELD_LABELS} ignored={ignored} notices={notices} workspace={workspace} />
     </div>
   );
 }

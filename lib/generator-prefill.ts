@@ -9,6 +9,7 @@ import {
   type SheetRequestInput,
 } from './sheet/sheet-request';
 import { sheetRequestFields } from './sheet/sheet-request-fields';
+import { parseDecimal, parseNumberList } from './text/number-list';
 
 /**
  * Reads generator defaults from a link's query string (the calculators and the
@@ -42,21 +43,6 @@ function readParam(params: SearchParamsLike, key: string): string | undefined {
   const raw = params instanceof URLSearchParams ? (params.get(key) ?? undefined) : params[key];
   const value = Array.isArray(raw) ? raw[0] : raw;
   return value === undefined ? undefined : value.slice(0, MAX_PARAM_CHARS);
-}
-
-/** A strict decimal number: "", "1e3", "0x10" and "12abc" are not numbers here. */
-export function parseDecimal(text: string): number {
-  const trimmed = text.trim();
-  return /^[+-]?(\d+\.?\d*|\.\d+)$/.test(trimmed) ? Number(trimmed) : Number.NaN;
-}
-
-/** "16, 17,18" → [16, 17, 18]; blanks between commas are skipped, bad entries become NaN. */
-export function parseNumberList(text: string): number[] {
-  return text
-    .split(',')
-    .map((part) => part.trim())
-    .filter((part) => part !== '')
-    .map(parseDecimal);
 }
 
 function firstMessage(error: z.ZodError): string {

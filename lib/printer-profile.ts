@@ -3,6 +3,8 @@ import { lengthField, textField } from './fields/builders';
 import { defineFields, shapeOf } from './fields/field';
 import { printerScaleFields } from './sheet/sheet-request-fields';
 
+export { describeScale } from './printer-scale-text';
+
 /**
  * Printer profiles: the scale-check sheet carries 100 mm bars in both axes
  * (DEVELOPERS.md, "Sheets"). The user measures what the printer made of them; the profile
@@ -62,9 +64,4 @@ export function profileFromMeasurement(input: unknown): ProfileResult {
     ok: true,
     profile: { name, printerScaleX: scaleFromMeasuredMm(measuredXMm), printerScaleY: scaleFromMeasuredMm(measuredYMm) },
   };
-}
-
-/** "X 0.98 · Y 1.00" — how a profile is shown next to its name. */
-export function describeScale(profile: Pick<PrinterProfile, 'printerScaleX' | 'printerScaleY'>): string {
-  return `X ${profile.printerScaleX.toFixed(3)} · Y ${profile.printerScaleY.toFixed(3)}`;
 }

@@ -1,5 +1,5 @@
 import { tdcNoteText } from './engine/wheel-links';
-import { parseDecimal, parseNumberList } from './generator-prefill';
+import { parseDecimal, parseNumberList } from './text/number-list';
 import { ADD_MARK_PARAM, INSTRUCTION_PARAMS, KEEP_PARAM, TDC_CRANK_PARAM, TDC_STOP_PARAM } from './sheet-link-params';
 import { MAX_ADVANCE_MARKS } from './sheet/sheet-request';
 

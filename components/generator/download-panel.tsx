@@ -2,7 +2,8 @@
 
 import Link from 'next/link';
 import { useState } from 'react';
-import { describeScale, type PrinterProfile } from '@/lib/printer-profile';
+import type { PrinterProfile } from '@/lib/printer-profile';
+import { describeScale } from '@/lib/printer-scale-text';
 import type { FieldIssue, SheetRequest } from '@/lib/sheet/sheet-request';
 import { usePrinterProfiles } from '@/components/printer-check/use-printer-profiles';
 import { downloadSheet } from './download-sheet';

@@ -1,8 +1,8 @@
-import { parseNumberList, prefillFromSearchParams, type IgnoredParam } from '@/lib/generator-prefill';
 import { UNIT_PARAM } from '@/lib/sheet-link-params';
 import type { PaperName } from '@/lib/sheet/paper';
 import type { PortEvent, SheetKind, SheetRequestInput } from '@/lib/sheet/sheet-request';
 import type { LengthUnit } from '@/lib/fields/length';
+import { parseNumberList } from '@/lib/text/number-list';
 
 /**
  * What the generator form holds, field for field named after the sheet request
@@ -10,7 +10,8 @@ import type { LengthUnit } from '@/lib/fields/length';
  * text the user types ("16, 17, 18") and blank pairs mean "none". Lengths are
  * held in mm like the request; the mm/in toggle only changes how the length
  * fields show them. `toSheetRequestInput` turns it into the request the shared
- * schema validates.
+ * schema validates. Reading a query string back into the form (it checks each value with the schema) is
+ * form-values-from-query.ts, so the browser's form loads no schema until it validates.
  */
 
 export type { LengthUnit };
@@ -112,29 +113,6 @@ export function toSheetRequestInput(values: GeneratorFormValues): SheetRequestIn
     if (request[field] === undefined) delete request[field];
   }
   return request as SheetRequestInput;
-}
-
-/** Form values from the URL prefill (already validated field by field); lengths arrive in mm. */
-export function formValuesFromPrefill(prefill: Partial<SheetRequestInput>): GeneratorFormValues {
-  const { advanceMarksDeg, windowCrankDeg, advanceBandDeg, portEvents, ...rest } = prefill;
-  const values = { ...DEFAULT_FORM_VALUES };
-  for (const [key, value] of Object.entries(rest)) {
-    if (value !== undefined && key in values) (values as Record<string, unknown>)[key] = value;
-  }
-  if (advanceMarksDeg) values.advanceMarksDeg = advanceMarksDeg.join(', ');
-  if (windowCrankDeg) values.windowCrankDeg = [...windowCrankDeg];
-  if (advanceBandDeg) values.advanceBandDeg = [...advanceBandDeg];
-  if (portEvents) values.portEvents = portEvents.map((event) => ({ ...event }));
-  if (prefill.kind === 'ring' && prefill.carrier === undefined) values.carrier = 'stationary';
-  return values;
-}
-
-/** The form for a sheet maker query string: every value checked on its own, the bad ones reported, lengths shown in the unit the query names. */
-export function formValuesFromQuery(params: URLSearchParams): { values: GeneratorFormValues; ignored: IgnoredParam[] } {
-  const prefill = prefillFromSearchParams(params);
-  const values = formValuesFromPrefill(prefill.values);
-  if (params.get(UNIT_PARAM) === 'in') values.lengthUnit = 'in';
-  return { values, ignored: prefill.ignored };
 }
 
 const QUERY_ORDER: RequestField[] = [

@@ -4,14 +4,12 @@ import { HydratedForm } from '@/components/hydrated-form';
 import { LengthField } from '@/components/calculators/length-field';
 import { UnitSwitch } from '@/components/calculators/unit-switch';
 import { useEffect, useRef, useState } from 'react';
-import { FormProvider, useForm, useFormContext, useWatch } from 'react-hook-form';
+import { FormProvider, useForm, useFormContext, useWatch, type Resolver } from 'react-hook-form';
 import { PAPER_NAMES } from '@/lib/sheet/paper';
 import type { IgnoredParam } from '@/lib/generator-prefill';
-import { issueInUnit, LENGTH_KEYS, type SheetKind, type SheetRequest } from '@/lib/sheet/sheet-request';
-import { sheetRequestFields as fields } from '@/lib/sheet/sheet-request-fields';
+import type { SheetKind, SheetRequest } from '@/lib/sheet/sheet-request';
 import { CheckboxField, ChoiceGroup, FormSection, NumberField, SelectField, TextField, fieldId, inputClass, useFieldError, FieldErrorText, HelpText } from './fields';
 import { toSheetRequestInput, usesField, DEFAULT_FORM_VALUES, type GeneratorFormValues, type LengthUnit } from './form-values';
-import { generatorResolver } from './generator-resolver';
 import { forgetSheet, useSheetUrl } from './use-sheet-url';
 import { DownloadPanel, type WorkspacePrinterProfiles } from './download-panel';
 import { PortEventsField } from './port-events-field';
@@ -41,14 +39,26 @@ const DIAMETER_HELP: Partial<Record<SheetKind, React.ReactNode>> = {
   scribe: 'The diameter of the circle you will mark along: usually the flywheel rim outer diameter.',
 };
 
+/** The labels of the fields named in the sheet request's field table (the page reads the table on the server). */
+export type FieldLabels = Record<'diameterMm' | 'hubHoleMm' | 'innerDiameterMm' | 'outerDiameterMm' | 'stripWidthMm' | 'targetAdvanceDeg' | 'strobeReadable', string>;
+
+/**
+ * The form's validation, with the shared schema and zod, is loaded on the first check (a change, a unit switch, a
+ * download), not with the page: a first visit to the sheet maker downloads no schema library.
+ */
+const generatorResolver: Resolver<GeneratorFormValues, unknown, SheetRequest> = async (values, context, options) =>
+  (await import('./generator-resolver')).generatorResolver(values, context, options);
+
 /** The sheet generator: form on the left, live preview and downloads on the right. */
 export function GeneratorForm({
   defaultValues,
+  fieldLabels,
   ignored,
   notices = [],
   workspace = null,
 }: {
   defaultValues: GeneratorFormValues;
+  fieldLabels: FieldLabels;
   ignored: IgnoredParam[];
   /** What the link did to the sheet (lib/sheet-link.ts): restored, added to, a note rewritten. */
   notices?: string[];
@@ -85,9 +95,9 @@ export function GeneratorForm({
           <FormSection title="Sheet">
             <ChoiceGroup<GeneratorFormValues> name="kind" legend="What to print" options={KIND_OPTIONS} />
           </FormSection>
-          {values.kind !== 'check' ? <MeasurementsSection kind={values.kind} unit={values.lengthUnit} /> : null}
+          {values.kind !== 'check' ? <MeasurementsSection kind={values.kind} unit={values.lengthUnit} labels={fieldLabels} /> : null}
           {usesField(values.kind, 'carrier') ? <ScaleSection numbering={values.numbering} /> : null}
-          {usesField(values.kind, 'advanceMarksDeg') ? <AdvanceSection /> : null}
+          {usesField(values.kind, 'advanceMarksDeg') ? <AdvanceSection labels={fieldLabels} /> : null}
           {values.kind === 'scribe' ? <ScribeSection /> : null}
           <PaperSection kind={values.kind} />
           <button
@@ -101,7 +111,7 @@ export function GeneratorForm({
         </div>
 
         <div id="sheet-preview-pane" className={`min-w-0 space-y-4 lg:sticky lg:top-4 lg:self-start ${pane === 'settings' ? 'hidden lg:block' : ''}`}>
-          <SheetPreview request={request} describeIssue={(issue) => issueInUnit(issue, { ...defaultValues, ...values }, values.lengthUnit)} />
+          <SheetPreview request={request} formValues={{ ...defaultValues, ...values }} />
           <PrintAtActualSize />
           <DownloadPanel validate={validate} workspace={workspace} />
           <SafetyPanel />
@@ -187,38 +197,40 @@ function UnitToggle() {
   const choose = (to: LengthUnit) => {
     if (getValues('lengthUnit') === to) return;
     setValue('lengthUnit', to);
-    void trigger(LENGTH_KEYS.filter((field) => field in getValues()) as Array<keyof GeneratorFormValues>);
+    void import('@/lib/sheet/sheet-request').then(({ LENGTH_KEYS }) =>
+      trigger(LENGTH_KEYS.filter((field) => field in getValues()) as Array<keyof GeneratorFormValues>),
+    );
   };
   return <UnitSwitch unit={unit} onChange={choose} idPrefix="sheet" caption={null} inchLabel="in" className="gap-1 text-xs" />;
 }
 
-function MeasurementsSection({ kind, unit }: { kind: SheetKind; unit: LengthUnit }) {
+function MeasurementsSection({ kind, unit, labels }: { kind: SheetKind; unit: LengthUnit; labels: FieldLabels }) {
   return (
     <FormSection title="Measurements" aside={<UnitToggle />}>
       {kind === 'ring' ? (
         <div className="grid gap-4 sm:grid-cols-2">
           <LengthField<GeneratorFormValues>
             name="outerDiameterMm"
-            label={fields.outerDiameterMm.label}
+            label={labels.outerDiameterMm}
             unit={unit}
             help="Measure the magneto flange or stator plate diameter with calipers."
           />
           <LengthField<GeneratorFormValues>
             name="innerDiameterMm"
-            label={fields.innerDiameterMm.label}
+            label={labels.innerDiameterMm}
             unit={unit}
             help="Inner = flywheel outer diameter + clearance (about 1–2 mm), so the flywheel’s mark reads at the inner edge."
           />
         </div>
       ) : (
         <div className="grid gap-4 sm:grid-cols-2">
-          <LengthField<GeneratorFormValues> name="diameterMm" label={fields.diameterMm.label} unit={unit} help={DIAMETER_HELP[kind]} className="sm:col-span-2" />
+          <LengthField<GeneratorFormValues> name="diameterMm" label={labels.diameterMm} unit={unit} help={DIAMETER_HELP[kind]} className="sm:col-span-2" />
           {kind === 'wheel' ? (
-            <LengthField<GeneratorFormValues> name="hubHoleMm" label={fields.hubHoleMm.label} unit={unit} help="For the crank nut or boss; 0 for none." />
+            <LengthField<GeneratorFormValues> name="hubHoleMm" label={labels.hubHoleMm} unit={unit} help="For the crank nut or boss; 0 for none." />
           ) : null}
           {kind === 'strip' ? (
             <>
-              <LengthField<GeneratorFormValues> name="stripWidthMm" label={fields.stripWidthMm.label} unit={unit} help="6–40 mm; what fits the rim." />
+              <LengthField<GeneratorFormValues> name="stripWidthMm" label={labels.stripWidthMm} unit={unit} help="6–40 mm; what fits the rim." />
               <NumberField<GeneratorFormValues>
                 name="paperThicknessMm"
                 label="Paper thickness"
@@ -302,7 +314,7 @@ function StripLayoutFields() {
   );
 }
 
-function AdvanceSection() {
+function AdvanceSection({ labels }: { labels: FieldLabels }) {
   return (
     <FormSection title="Ignition advance">
       <TextField<GeneratorFormValues>
@@ -321,14 +333,14 @@ function AdvanceSection() {
       />
       <NumberField<GeneratorFormValues>
         name="targetAdvanceDeg"
-        label={fields.targetAdvanceDeg.label}
+        label={labels.targetAdvanceDeg}
         unit="° BTDC"
         step={0.5}
         help="The figure the engine is set to. Its mark is drawn heavier, with a filled wedge, and named as the target. Blank for none."
       />
       <CheckboxField<GeneratorFormValues>
         name="strobeReadable"
-        label={fields.strobeReadable.label}
+        label={labels.strobeReadable}
         hint="For timing a running engine with a strobe light"
         help="Big heavy figures every 2° or 5° across the advance band (or the marks) on a white ground, at least 5 mm tall where the piece is big enough; the sheet says when it is not. Fine graduations are kept only there."
       />

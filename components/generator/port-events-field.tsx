@@ -1,7 +1,7 @@
 'use client';
 
 import { useFieldArray, useFormContext } from 'react-hook-form';
-import { MAX_PORT_EVENTS } from '@/lib/sheet/sheet-request';
+import { MAX_PORT_EVENTS } from '@/lib/sheet/sheet-limits';
 import { FieldErrorText, fieldId, inputClass, useFieldError } from './fields';
 import type { GeneratorFormValues } from './form-values';
 

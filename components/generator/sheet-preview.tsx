@@ -2,12 +2,20 @@
 
 import { useEffect, useRef, useState } from 'react';
 import { previewSheet } from '@/app/actions/sheet-preview';
-import { sheetRequestSchema, toFieldIssues, type FieldIssue, type SheetRequestInput } from '@/lib/sheet/sheet-request';
+import type { SheetRequestInput } from '@/lib/sheet/sheet-request';
+import type { GeneratorFormValues } from './form-values';
+import type { PreviewIssue } from './sheet-checks';
 
 const DEBOUNCE_MS = 250;
 
-/** A field issue; `code` is the zod issue code when the browser found it (the server's answer has none). */
-type PreviewIssue = FieldIssue & { code?: string };
+type SheetChecks = typeof import('./sheet-checks');
+let sheetChecks: SheetChecks | undefined;
+
+/** The browser's check with the shared schema (and zod with it), loaded on first need rather than with the page. */
+async function loadSheetChecks(): Promise<SheetChecks> {
+  sheetChecks ??= await import('./sheet-checks');
+  return sheetChecks;
+}
 type ReadyPreview = { svg: string; warnings: string[]; pageCount: number; joinPieces: boolean; widthMm: number; heightMm: number };
 type PreviewState =
   | { status: 'idle' }
@@ -41,15 +49,18 @@ function previewName(request: SheetRequestInput, preview: ReadyPreview): string 
 /**
  * A true-proportion preview that follows the form: the request is debounced,
  * checked with the shared schema in the browser, then drawn by the server action.
+ * The first drawing, of the values the page was served with, goes to the server
+ * straight away (it checks with the same schema), so the page needs no schema to
+ * show it; the browser's check then names the issues in the form's length unit.
  * Late answers to earlier requests are dropped.
  */
 export function SheetPreview({
   request,
-  describeIssue = (issue) => issue.message,
+  formValues,
 }: {
   request: SheetRequestInput;
-  /** The text shown for an issue (the form restates length ranges in the unit typed in). */
-  describeIssue?: (issue: Required<PreviewIssue>) => string;
+  /** The whole form: length ranges in issues are restated in the unit it shows lengths in. */
+  formValues: GeneratorFormValues;
 }) {
   const [state, setState] = useState<PreviewState>({ status: 'idle' });
   const [busy, setBusy] = useState(false);
@@ -57,26 +68,32 @@ export function SheetPreview({
   const [lastGood, setLastGood] = useState<ReadyPreview | undefined>(undefined);
   const sequence = useRef(0);
   const requestKey = JSON.stringify(request);
+  const servedKey = useRef(requestKey);
 
   useEffect(() => {
     const ticket = ++sequence.current;
     const timer = setTimeout(async () => {
       const input = JSON.parse(requestKey) as SheetRequestInput;
-      const checked = sheetRequestSchema.safeParse({ ...input, format: 'svg' });
-      if (!checked.success) {
-        const codes = checked.error.issues.map((issue) => issue.code);
-        setState({ status: 'invalid', issues: toFieldIssues(checked.error).map((issue, i) => ({ ...issue, code: codes[i] })) });
-        return;
-      }
-      setBusy(true);
       try {
+        if (requestKey !== servedKey.current) {
+          const issues = (await loadSheetChecks()).previewIssues(input);
+          if (ticket !== sequence.current) return;
+          if (issues) {
+            setState({ status: 'invalid', issues });
+            return;
+          }
+        }
+        setBusy(true);
         const answer = await previewSheet({ ...input, format: 'svg' });
         if (ticket !== sequence.current) return;
         if (answer.ok) {
           const ready = { svg: answer.svg, warnings: answer.warnings, pageCount: answer.pageCount, joinPieces: answer.joinPieces, ...svgSizeMm(answer.svg) };
           setState({ status: 'ready', ...ready });
           setLastGood(ready);
-        } else setState({ status: 'invalid', issues: answer.issues });
+        } else {
+          const issues = (await loadSheetChecks()).previewIssues(input) ?? answer.issues;
+          if (ticket === sequence.current) setState({ status: 'invalid', issues });
+        }
       } catch {
         if (ticket === sequence.current) setState({ status: 'failed', message: 'The preview could not be drawn. The downloads may still work; try again.' });
       } finally {
@@ -114,7 +131,7 @@ export function SheetPreview({
             <p className="font-medium">The preview waits for these fields:</p>
             <ul className="mt-1 list-disc pl-5 text-xs">
               {state.issues.map((issue) => (
-                <li key={`${issue.path}-${issue.message}`}>{issue.code ? describeIssue({ ...issue, code: issue.code }) : issue.message}</li>
+                <li key={`${issue.path}-${issue.message}`}>{issue.code && sheetChecks ? sheetChecks.issueInFormUnit({ ...issue, code: issue.code }, formValues) : issue.message}</li>
               ))}
             </ul>
           </div>

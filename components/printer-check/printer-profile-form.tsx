@@ -19,10 +19,10 @@ export function PrinterProfileForm() {
   });
   const [saved, setSaved] = useState<string | undefined>(undefined);
 
-  const onValid = (measurement: PrinterMeasurement) => {
+  const onValid = async (measurement: PrinterMeasurement) => {
     const result = profileFromMeasurement(measurement);
     if (!result.ok) return; // the resolver already ran the same schema
-    const profile = saveProfile(result.profile);
+    const profile = await saveProfile(result.profile);
     setSaved(`Saved “${profile.name}”: ${describeScale(profile)}. The sheet maker now offers it on every download.`);
     form.reset({ name: '' });
   };

@@ -18,7 +18,7 @@ export function ProfileList() {
           </span>
           <button
             type="button"
-            onClick={() => deleteProfile(profile.id)}
+            onClick={() => void deleteProfile(profile.id)}
             className="rounded px-2 py-1 text-xs text-steel-600 hover:bg-steel-100 dark:text-steel-300 dark:hover:bg-steel-800"
           >
             Delete<span className="sr-only"> {profile.name}</span>

@@ -2,6 +2,7 @@ import { z } from 'zod';
 import { choiceField, flagField, lengthField, listField, numberField, textField } from '../fields/builders';
 import { defineFields, shapeOf } from '../fields/field';
 import { PAPER_NAMES, type PaperName } from './paper';
+import { ADVANCE_RANGE_DEG, DIAMETER_RANGE_MM, MAX_ADVANCE_MARKS, MAX_PORT_EVENTS, PRINTER_SCALE_RANGE, STRIP_WIDTH_RANGE_MM } from './sheet-limits';
 
 /**
  * The fields of a sheet request, declared once: the schema (sheet-request.ts),
@@ -11,14 +12,6 @@ import { PAPER_NAMES, type PaperName } from './paper';
 
 export const SHEET_KINDS = ['wheel', 'ring', 'strip', 'scribe', 'check'] as const;
 export type SheetKind = (typeof SHEET_KINDS)[number];
-
-export const DIAMETER_RANGE_MM = { min: 20, max: 600 } as const;
-export const STRIP_WIDTH_RANGE_MM = { min: 6, max: 40 } as const;
-export const ADVANCE_RANGE_DEG = { min: 0, max: 60 } as const;
-export const PRINTER_SCALE_RANGE = { min: 0.9, max: 1.1 } as const;
-export const MAX_ADVANCE_MARKS = 72;
-export const MAX_PORT_EVENTS = 12;
-export const MAX_SCRIBE_ROWS = 400;
 
 /** What the printer makes of one millimetre, per axis; the sheet request carries them, a printer profile keeps them. */
 export const printerScaleFields = defineFields({

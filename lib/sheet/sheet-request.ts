@@ -2,7 +2,8 @@ import { z } from 'zod';
 import { fieldsOf, shapeOf } from '../fields/field';
 import { lengthRangeMessage, lengthText, rangeInUnit, type LengthUnit } from '../fields/length';
 import { rangeText } from '../fields/range-text';
-import { DIAMETER_RANGE_MM, MAX_SCRIBE_ROWS, sheetRequestFields } from './sheet-request-fields';
+import { DIAMETER_RANGE_MM, MAX_SCRIBE_ROWS } from './sheet-limits';
+import { sheetRequestFields } from './sheet-request-fields';
 
 /**
  * The one schema for a sheet request: the generator form (browser), the preview
@@ -11,16 +12,8 @@ import { DIAMETER_RANGE_MM, MAX_SCRIBE_ROWS, sheetRequestFields } from './sheet-
  * mm, angles in degrees. Every message names the field by its label and its allowed range.
  */
 
-export {
-  ADVANCE_RANGE_DEG,
-  DIAMETER_RANGE_MM,
-  MAX_ADVANCE_MARKS,
-  MAX_PORT_EVENTS,
-  MAX_SCRIBE_ROWS,
-  portEventSchema,
-  type PortEvent,
-  type SheetKind,
-} from './sheet-request-fields';
+export { ADVANCE_RANGE_DEG, DIAMETER_RANGE_MM, MAX_ADVANCE_MARKS, MAX_PORT_EVENTS, MAX_SCRIBE_ROWS } from './sheet-limits';
+export { portEventSchema, type PortEvent, type SheetKind } from './sheet-request-fields';
 
 const fields = sheetRequestFields;
 

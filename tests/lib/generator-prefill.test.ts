@@ -1,25 +1,8 @@
 import { describe, expect, it } from 'vitest';
-import { parseDecimal, parseNumberList, prefillFromSearchParams } from '@/lib/generator-prefill';
+import { prefillFromSearchParams } from '@/lib/generator-prefill';
 
 // Ranges come from the shared sheet request schema (issue 3: diameters 20–600 mm, advance
 // marks 0–60° BTDC, at most 72 of them); the prefill must keep what is valid and drop the rest.
-
-describe('parseDecimal / parseNumberList', () => {
-  it('reads plain decimals only', () => {
-    expect(parseDecimal(' 101.5 ')).toBe(101.5);
-    expect(parseDecimal('.5')).toBe(0.5);
-    expect(parseDecimal('')).toBeNaN();
-    expect(parseDecimal('1e3')).toBeNaN();
-    expect(parseDecimal('0x10')).toBeNaN();
-    expect(parseDecimal('12abc')).toBeNaN();
-  });
-
-  it('splits a comma list and skips blanks', () => {
-    expect(parseNumberList('16, 17,18,, 19 ,20')).toEqual([16, 17, 18, 19, 20]);
-    expect(parseNumberList('')).toEqual([]);
-    expect(parseNumberList('16, x')[1]).toBeNaN();
-  });
-});
 
 describe('prefillFromSearchParams', () => {
   it('reads a calculator link into form defaults', () => {
