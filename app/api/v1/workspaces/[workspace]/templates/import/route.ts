@@ -48,7 +48,7 @@ type Choices = { preview: boolean; onMatch: OnMatch | null; expectedVersions?: R
 function readChoices(fields: URLSearchParams): Choices | Response {
   const onMatch = fields.get('onMatch');
   if (onMatch !== null && onMatch !== 'skip' && onMatch !== 'update')
-    return jsonError(400, 'Some fields are not valid', [{ path: 'onMatch', message: 'On a name match (onMatch) must be one of: skip, update' }]);
+    return jsonError(400, 'Some fields are not valid', [{ path: 'onMatch', message: 'On a name match must be one of: skip, update' }]);
   const versions = fields.get('matchVersions');
   let expectedVersions: Record<string, number> | undefined;
   if (versions) {
@@ -56,7 +56,7 @@ function readChoices(fields: URLSearchParams): Choices | Response {
       expectedVersions = JSON.parse(versions) as Record<string, number>;
       if (typeof expectedVersions !== 'object' || expectedVersions === null || Object.values(expectedVersions).some((v) => !Number.isInteger(v))) throw new Error();
     } catch {
-      return jsonError(400, 'Some fields are not valid', [{ path: 'matchVersions', message: 'Versions seen in the preview (matchVersions) must be a JSON object of template id → version' }]);
+      return jsonError(400, 'Some fields are not valid', [{ path: 'matchVersions', message: 'Versions seen in the preview must be a JSON object of template id → version' }]);
     }
   }
   return { preview: ['1', 'true'].includes(fields.get('preview') ?? ''), onMatch, expectedVersions };
