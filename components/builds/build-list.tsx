@@ -4,7 +4,7 @@ import { createColumnHelper } from '@tanstack/react-table';
 import Link from 'next/link';
 import { useMemo } from 'react';
 import useSWR from 'swr';
-import { inputClass } from '@/components/generator/fields';
+import { ListFilter, ListSearch, ListToolbar } from '@/components/lists/list-controls';
 import { ListPager } from '@/components/lists/list-pager';
 import { listFeatures, SortableTable } from '@/components/lists/sortable-table';
 import { fetchListPage, useListView, useSearchText } from '@/components/lists/use-list-view';
@@ -65,62 +65,37 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
   const sortable = new Set([...FIELD_COLUMNS.filter((c) => c.sortable).map((c) => c.key), 'updatedAt']);
 
   const total = data?.total ?? 0;
-  const pages = Math.max(1, Math.ceil(total / PAGE_SIZE));
 
   return (
     <div className="space-y-3">
-      <div className="flex flex-wrap items-end gap-3">
-        <div className="space-y-1">
-          <label htmlFor="build-search" className="block text-sm font-medium">
-            Search customer, engine number, engine
-          </label>
-          <input ref={input} id="build-search" type="search" value={text} onChange={(e) => setText(e.target.value)} className={`${inputClass} w-72 max-w-full`} />
-        </div>
-        <div className="space-y-1">
-          <label htmlFor="build-status" className="block text-sm font-medium">
-            Status
-          </label>
-          <select id="build-status" value={view.status} onChange={(e) => show({ status: e.target.value as BuildListView['status'], page: 1 })} className={inputClass}>
-            <option value="all">All</option>
-            {BUILD_STATUSES.map((s) => (
-              <option key={s} value={s}>
-                {s}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div className="space-y-1">
-          <label htmlFor="build-technician" className="block text-sm font-medium">
-            Technician
-          </label>
-          <select id="build-technician" value={view.technician ?? ''} onChange={(e) => show({ technician: idOrUndefined(e.target.value), page: 1 })} className={inputClass}>
-            <option value="">Anyone</option>
-            {technicians.map((t) => (
-              <option key={t.id} value={t.id}>
-                {t.name}
-              </option>
-            ))}
-          </select>
-        </div>
-        <div className="space-y-1">
-          <label htmlFor="build-template" className="block text-sm font-medium">
-            Template
-          </label>
-          <select id="build-template" value={view.template ?? ''} onChange={(e) => show({ template: idOrUndefined(e.target.value), page: 1 })} className={inputClass}>
-            <option value="">Any</option>
-            {templates.map((t) => (
-              <option key={t.id} value={t.id}>
-                {t.name}
-              </option>
-            ))}
-          </select>
-        </div>
-        <p role="status" aria-live="polite" className="text-sm text-steel-600 dark:text-steel-300">
-          {error ? `Could not load build records: ${error.message}` : isLoading ? 'Loading…' : `${total} record${total === 1 ? '' : 's'}`}
-        </p>
-      </div>
+      <ListToolbar
+        status={error ? `Could not load build records: ${error.message}` : isLoading ? 'Loading…' : `${total} record${total === 1 ? '' : 's'}`}
+      >
+        <ListSearch id="build-search" label="Search customer, engine number, engine" text={text} onText={setText} input={input} />
+        <ListFilter
+          id="build-status"
+          label="Status"
+          value={view.status}
+          options={[{ value: 'all', label: 'All' }, ...BUILD_STATUSES.map((s) => ({ value: s, label: s }))]}
+          onChoose={(status) => show({ status: status as BuildListView['status'], page: 1 })}
+        />
+        <ListFilter
+          id="build-technician"
+          label="Technician"
+          value={String(view.technician ?? '')}
+          options={[{ value: '', label: 'Anyone' }, ...technicians.map((t) => ({ value: String(t.id), label: t.name }))]}
+          onChoose={(id) => show({ technician: idOrUndefined(id), page: 1 })}
+        />
+        <ListFilter
+          id="build-template"
+          label="Template"
+          value={String(view.template ?? '')}
+          options={[{ value: '', label: 'Any' }, ...templates.map((t) => ({ value: String(t.id), label: t.name }))]}
+          onChoose={(id) => show({ template: idOrUndefined(id), page: 1 })}
+        />
+      </ListToolbar>
       <SortableTable label="Build records" columns={columns} rows={data?.items ?? EMPTY} sortable={sortable} view={view} onSort={show} />
-      <ListPager label="Build record pages" page={view.page} pages={pages} onPage={(page) => show({ page })} />
+      <ListPager label="Build record pages" page={view.page} total={total} pageSize={PAGE_SIZE} onPage={(page) => show({ page })} />
     </div>
   );
 }

@@ -8,7 +8,7 @@ import type { TemplateSortKey } from '@/lib/templates/list-query';
 import { TEMPLATE_FIELD_LIST } from '@/lib/templates/template-fields';
 import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/templates/list-view';
 import type { Template, TemplatePage } from '@/lib/templates/template';
-import { inputClass } from '@/components/generator/fields';
+import { ListFilter, ListSearch, ListToolbar } from '@/components/lists/list-controls';
 import { ListPager } from '@/components/lists/list-pager';
 import { listFeatures, SortableTable } from '@/components/lists/sortable-table';
 import { fetchListPage, useListView, useSearchText } from '@/components/lists/use-list-view';
@@ -69,31 +69,25 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
   }, [slug, dateFormat]);
 
   const total = data?.total ?? 0;
-  const pages = Math.max(1, Math.ceil(total / pageSize));
 
   return (
     <div className="space-y-3">
-      <div className="flex flex-wrap items-end gap-3">
-        <div className="space-y-1">
-          <label htmlFor="template-search" className="block text-sm font-medium">
-            Search name and engine
-          </label>
-          <input ref={searchInput} id="template-search" type="search" value={q} onChange={(e) => setQ(e.target.value)} className={`${inputClass} w-72 max-w-full`} />
-        </div>
-        <div className="space-y-1">
-          <label htmlFor="template-archived" className="block text-sm font-medium">
-            Show
-          </label>
-          <select id="template-archived" value={archived} onChange={(e) => show({ archived: e.target.value as typeof archived, page: 1 })} className={inputClass}>
-            <option value="false">In use</option>
-            <option value="true">Archived only</option>
-            <option value="all">All</option>
-          </select>
-        </div>
-        <p role="status" aria-live="polite" className="text-sm text-steel-600 dark:text-steel-300">
-          {error ? `Could not load templates: ${error.message}` : isLoading ? 'Loading…' : `${total} template${total === 1 ? '' : 's'}`}
-        </p>
-      </div>
+      <ListToolbar
+        status={error ? `Could not load templates: ${error.message}` : isLoading ? 'Loading…' : `${total} template${total === 1 ? '' : 's'}`}
+      >
+        <ListSearch id="template-search" label="Search name and engine" text={q} onText={setQ} input={searchInput} />
+        <ListFilter
+          id="template-archived"
+          label="Show"
+          value={archived}
+          options={[
+            { value: 'false', label: 'In use' },
+            { value: 'true', label: 'Archived only' },
+            { value: 'all', label: 'All' },
+          ]}
+          onChoose={(choice) => show({ archived: choice as typeof archived, page: 1 })}
+        />
+      </ListToolbar>
       <SortableTable
         label="Templates"
         columns={columns}
@@ -103,7 +97,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
         onSort={(next) => show({ ...next, sort: next.sort as TemplateSortKey })}
         cellClassName="font-mono text-xs tabular-nums first:font-sans first:text-sm"
       />
-      <ListPager label="Template pages" page={page} pages={pages} onPage={(next) => show({ page: next })} />
+      <ListPager label="Template pages" page={page} total={total} pageSize={pageSize} onPage={(next) => show({ page: next })} />
     </div>
   );
 }

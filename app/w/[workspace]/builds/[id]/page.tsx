@@ -9,7 +9,8 @@ import { ActionButton } from '@/components/templates/template-actions';
 import { findStoredBuild } from '@/db/builds/find-build';
 import { listBuildRevisions } from '@/db/builds/revisions';
 import { listBuildPhotos } from '@/db/builds/photos';
-import { PhotoUpload } from '@/components/templates/photo-upload';
+import { PhotoGallery } from '@/components/photos/photo-gallery';
+import { RecordSection } from '@/components/records/record-section';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { findTemplate } from '@/db/templates/find-template';
 import { can } from '@/lib/access-policy';
@@ -106,10 +107,7 @@ export default async function BuildPage({ params }: Props) {
         </div>
       </header>
 
-      <section aria-labelledby="copy-heading" className="space-y-2">
-        <h2 id="copy-heading" className="text-lg font-semibold">
-          Customer’s copy
-        </h2>
+      <RecordSection id="copy" title="Customer’s copy">
         <div className="flex flex-wrap items-start gap-3 text-sm">
           <a href={`${api}/record?format=pdf`} className="rounded-md border border-steel-300 px-3 py-1.5">
             Download PDF (A4)
@@ -140,12 +138,9 @@ export default async function BuildPage({ params }: Props) {
         ) : (
           <p className="text-sm text-steel-600">Not sent yet.</p>
         )}
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="tdc-heading" className="space-y-1">
-        <h2 id="tdc-heading" className="text-lg font-semibold">
-          Top dead centre
-        </h2>
+      <RecordSection id="tdc" title="Top dead centre" className="space-y-1">
         {build.stops ? (
           <p className="text-sm">
             {F.stops.label}: A <span className="font-mono">{degText(build.stops.readingADeg)}</span>
@@ -154,24 +149,18 @@ export default async function BuildPage({ params }: Props) {
           </p>
         ) : null}
         <TdcResult tdc={build.tdc} />
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="timing-heading" className="space-y-1">
-        <h2 id="timing-heading" className="text-lg font-semibold">
-          Ignition timing
-        </h2>
+      <RecordSection id="timing" title="Ignition timing" className="space-y-1">
         <TimingResult results={build} />
         <p className="text-sm text-steel-600 dark:text-steel-300">
           Entered in {build.timingEnteredAs === 'mm' ? 'mm' : 'degrees'}
           {build.advanceDeg !== null ? ` · specified ${degText(build.advanceDeg, '° BTDC')}` : ''}
           {build.timingCheck ? ` · checked ${build.timingCheck}${build.timingCheck === 'strobe' && build.timingCheckRpm ? ` at ${build.timingCheckRpm} rpm` : ''}` : ' · not checked yet'}
         </p>
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="ports-heading" className="space-y-2">
-        <h2 id="ports-heading" className="text-lg font-semibold">
-          Port timing
-        </h2>
+      <RecordSection id="ports" title="Port timing">
         <p className="text-sm">
           Stroke {mmText(build.strokeMm)} · rod {mmText(build.rodMm)} · pin offset {mmText(build.pinOffsetMm)} · deck {mmText(build.deckMm)}
         </p>
@@ -201,12 +190,9 @@ export default async function BuildPage({ params }: Props) {
         )}
         <BlowdownResult results={build} />
         <ToleranceNote toleranceDeg={build.toleranceDeg} />
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="other-heading" className="space-y-1">
-        <h2 id="other-heading" className="text-lg font-semibold">
-          Other measurements and notes
-        </h2>
+      <RecordSection id="other" title="Other measurements and notes" className="space-y-1">
         <ul className="text-sm">
           {build.squishMm !== null ? (
             <li>
@@ -220,39 +206,17 @@ export default async function BuildPage({ params }: Props) {
           ))}
         </ul>
         {build.notes ? <p className="whitespace-pre-line text-sm">{build.notes}</p> : null}
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="photos-heading" className="space-y-3">
-        <h2 id="photos-heading" className="text-lg font-semibold">
-          Photos
-        </h2>
-        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
-        <ul className="flex flex-wrap gap-4">
-          {photos.map((photo) => (
-            <li key={photo.id} className="space-y-1">
-              <a href={`${api}/photos/${photo.id}`}>
-                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
-                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of the engine of ${build.customerName}`} className="h-40 rounded border border-steel-200 object-contain" />
-              </a>
-              <p className="max-w-60 text-xs">{photo.caption}</p>
-              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm={{ title: 'Delete this photo?', message: `The photo is removed from the record of ${build.customerName} for everyone in the workspace.`, confirmLabel: 'Delete photo', danger: true }} /> : null}
-            </li>
-          ))}
-        </ul>
-        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
-      </section>
+      <RecordSection id="photos" title="Photos" className="space-y-3">
+        <PhotoGallery photosUrl={`${api}/photos`} photos={photos} canEdit={canEdit} altOf={`of the engine of ${build.customerName}`} removedFrom={`the record of ${build.customerName}`} />
+      </RecordSection>
 
-      <section aria-labelledby="print-heading" className="space-y-2">
-        <h2 id="print-heading" className="text-lg font-semibold">
-          Print the sheets for this build
-        </h2>
+      <RecordSection id="print" title="Print the sheets for this build">
         <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} workspaceSlug={slug} />
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="history-heading" className="space-y-2">
-        <h2 id="history-heading" className="text-lg font-semibold">
-          History
-        </h2>
+      <RecordSection id="history" title="History">
         <ol className="space-y-1 text-sm">
           {revisions.map((r) => (
             <li key={r.id}>
@@ -261,7 +225,7 @@ export default async function BuildPage({ params }: Props) {
             </li>
           ))}
         </ol>
-      </section>
+      </RecordSection>
     </article>
   );
 }

@@ -7,7 +7,8 @@ import { pageAction } from '@/app/lib/page-access';
 import { formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
 import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue } from '@/components/templates/field-labels';
-import { PhotoUpload } from '@/components/templates/photo-upload';
+import { PhotoGallery } from '@/components/photos/photo-gallery';
+import { RecordSection } from '@/components/records/record-section';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
 import { TemplateHistory } from '@/components/templates/template-history';
@@ -88,10 +89,7 @@ export default async function TemplatePage({ params }: Props) {
         ) : null}
       </header>
 
-      <section aria-labelledby="print-heading" className="space-y-2">
-        <h2 id="print-heading" className="text-lg font-semibold">
-          Print from this template
-        </h2>
+      <RecordSection id="print" title="Print from this template">
         <PrintLinks template={template} sheetUrl={`${api}/sheet`} workspaceSlug={slug} />
         <p className="text-xs text-steel-500">
           {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
@@ -99,14 +97,11 @@ export default async function TemplatePage({ params }: Props) {
         <p className="text-xs text-steel-500">
           Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
         </p>
-      </section>
+      </RecordSection>
 
       {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} dateFormat={dateFormat} /> : null}
 
-      <section aria-labelledby="figures-heading" className="space-y-2">
-        <h2 id="figures-heading" className="text-lg font-semibold">
-          Figures
-        </h2>
+      <RecordSection id="figures" title="Figures">
         <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
           {FIGURE_FIELDS.map((field) => (
             <div key={field} className="contents">
@@ -139,34 +134,15 @@ export default async function TemplatePage({ params }: Props) {
           </table>
         ) : null}
         {template.notes ? <p className="whitespace-pre-line text-sm">{template.notes}</p> : null}
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="photos-heading" className="space-y-3">
-        <h2 id="photos-heading" className="text-lg font-semibold">
-          Photos
-        </h2>
-        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
-        <ul className="flex flex-wrap gap-4">
-          {photos.map((photo) => (
-            <li key={photo.id} className="space-y-1">
-              <a href={`${api}/photos/${photo.id}`}>
-                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
-                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of ${template.name}`} className="h-40 rounded border border-steel-200 object-contain" />
-              </a>
-              <p className="max-w-60 text-xs">{photo.caption}</p>
-              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm={{ title: 'Delete this photo?', message: `The photo is removed from ${template.name} for everyone in the workspace.`, confirmLabel: 'Delete photo', danger: true }} /> : null}
-            </li>
-          ))}
-        </ul>
-        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
-      </section>
+      <RecordSection id="photos" title="Photos" className="space-y-3">
+        <PhotoGallery photosUrl={`${api}/photos`} photos={photos} canEdit={canEdit} altOf={`of ${template.name}`} removedFrom={template.name} />
+      </RecordSection>
 
-      <section aria-labelledby="history-heading" className="space-y-2">
-        <h2 id="history-heading" className="text-lg font-semibold">
-          History
-        </h2>
+      <RecordSection id="history" title="History">
         <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} dateFormat={dateFormat} />
-      </section>
+      </RecordSection>
     </article>
   );
 }
