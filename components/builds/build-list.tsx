@@ -13,6 +13,7 @@ import { BUILD_FIELD_LIST, BUILD_STATUSES } from '@/lib/builds/build-fields';
 import { buildListViewFromParams, buildListViewHref, buildListViewToParams, type BuildListView } from '@/lib/builds/list-view';
 import { StatusBadge } from './status-badge';
 import { formatDate, type DateFormat } from '@/lib/format/date-format';
+import { countOf } from '@/lib/format/number-format';
 
 const helper = createColumnHelper<typeof listFeatures, Build>();
 const EMPTY: Build[] = [];
@@ -69,7 +70,7 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
   return (
     <div className="space-y-3">
       <ListToolbar
-        status={error ? `Could not load build records: ${error.message}` : isLoading ? 'Loading…' : `${total} record${total === 1 ? '' : 's'}`}
+        status={error ? `Could not load build records: ${error.message}` : isLoading ? 'Loading…' : countOf(total, 'record', dateFormat.locale)}
       >
         <ListSearch id="build-search" label="Search customer, engine number, engine" text={text} onText={setText} input={input} />
         <ListFilter
@@ -95,7 +96,7 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
         />
       </ListToolbar>
       <SortableTable label="Build records" columns={columns} rows={data?.items ?? EMPTY} sortable={sortable} view={view} onSort={show} />
-      <ListPager label="Build record pages" page={view.page} total={total} pageSize={PAGE_SIZE} onPage={(page) => show({ page })} />
+      <ListPager locale={dateFormat.locale} label="Build record pages" page={view.page} total={total} pageSize={PAGE_SIZE} onPage={(page) => show({ page })} />
     </div>
   );
 }

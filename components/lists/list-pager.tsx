@@ -1,7 +1,9 @@
 'use client';
 
+import { formatCount } from '@/lib/format/number-format';
+
 /** "Previous · Page 2 of 5 · Next" under a list of `total` rows; `label` names the navigation ("Template pages"). */
-export function ListPager({ label, page, total, pageSize, onPage }: { label: string; page: number; total: number; pageSize: number; onPage: (page: number) => void }) {
+export function ListPager({ label, page, total, pageSize, locale, onPage }: { label: string; locale: string; page: number; total: number; pageSize: number; onPage: (page: number) => void }) {
   const pages = Math.max(1, Math.ceil(total / pageSize));
   return (
     <nav aria-label={label} className="flex items-center gap-3 text-sm">
@@ -9,7 +11,7 @@ export function ListPager({ label, page, total, pageSize, onPage }: { label: str
         Previous
       </button>
       <span>
-        Page {page} of {pages}
+        Page {formatCount(page, locale)} of {formatCount(pages, locale)}
       </span>
       <button type="button" disabled={page >= pages} onClick={() => onPage(page + 1)} className="min-h-11 rounded border border-steel-300 px-3 disabled:opacity-50">
         Next

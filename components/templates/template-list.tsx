@@ -13,6 +13,7 @@ import { ListPager } from '@/components/lists/list-pager';
 import { listFeatures, SortableTable } from '@/components/lists/sortable-table';
 import { fetchListPage, useListView, useSearchText } from '@/components/lists/use-list-view';
 import { formatDate, type DateFormat } from '@/lib/format/date-format';
+import { countOf } from '@/lib/format/number-format';
 import { formatFieldValue } from './field-labels';
 
 const helper = createColumnHelper<typeof listFeatures, Template>();
@@ -54,14 +55,14 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
                 </Link>
               );
             if (c.key === 'updatedAt') return <time dateTime={row.updatedAt}>{formatDate(row.updatedAt, dateFormat)}</time>;
-            if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation)}>{row.rotation.toUpperCase()}</abbr>;
+            if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation, dateFormat.locale)}>{row.rotation.toUpperCase()}</abbr>;
             if (c.key === 'description')
               return (
                 <span className="block max-w-40 truncate font-sans xl:max-w-56" title={row.description}>
                   {row.description}
                 </span>
               );
-            return formatFieldValue(c.key, info.getValue());
+            return formatFieldValue(c.key, info.getValue(), dateFormat.locale);
           },
         }),
       ),
@@ -73,7 +74,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
   return (
     <div className="space-y-3">
       <ListToolbar
-        status={error ? `Could not load templates: ${error.message}` : isLoading ? 'Loading…' : `${total} template${total === 1 ? '' : 's'}`}
+        status={error ? `Could not load templates: ${error.message}` : isLoading ? 'Loading…' : countOf(total, 'template', dateFormat.locale)}
       >
         <ListSearch id="template-search" label="Search name and engine" text={q} onText={setQ} input={searchInput} />
         <ListFilter
@@ -97,7 +98,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
         onSort={(next) => show({ ...next, sort: next.sort as TemplateSortKey })}
         cellClassName="font-mono text-xs tabular-nums first:font-sans first:text-sm"
       />
-      <ListPager label="Template pages" page={page} total={total} pageSize={pageSize} onPage={(next) => show({ page: next })} />
+      <ListPager locale={dateFormat.locale} label="Template pages" page={page} total={total} pageSize={pageSize} onPage={(next) => show({ page: next })} />
     </div>
   );
 }

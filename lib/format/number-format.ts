@@ -67,3 +67,16 @@ export function countWithVerb(count: number, noun: [string, string], verb: [stri
   const one = isOne(count);
   return `${formatCount(count, locale)} ${one ? noun[0] : noun[1]} ${one ? verb[0] : verb[1]}`;
 }
+
+/** The reader's decimal sign: "." (en-GB), "," (de-DE). */
+function decimalSign(locale: string): string {
+  return formatter(locale, { minimumFractionDigits: 1 }).formatToParts(1.5).find((part) => part.type === 'decimal')?.value ?? '.';
+}
+
+/**
+ * Numbers in a row, each up to `maxPlaces`: "18, 22.5" (en-GB), but "18; 22,5" (de-DE), where a comma
+ * between numbers that have decimal commas would make one number out of two.
+ */
+export function formatDecimalList(values: readonly number[], locale: string, maxPlaces = 3): string {
+  return values.map((value) => formatDecimal(value, locale, { maxPlaces })).join(decimalSign(locale) === ',' ? '; ' : ', ');
+}

@@ -106,7 +106,7 @@ export default async function TemplatePage({ params }: Props) {
           {FIGURE_FIELDS.map((field) => (
             <div key={field} className="contents">
               <dt className="text-steel-600 dark:text-steel-300">{FIELD_LABELS[field]}</dt>
-              <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field])}</dd>
+              <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field], dateFormat.locale)}</dd>
             </div>
           ))}
         </dl>
