@@ -119,7 +119,7 @@ function TimingCheck() {
   );
 }
 
-function MeasuredPorts({ results, toleranceDeg }: { results: ReturnType<typeof liveResults>; toleranceDeg: number }) {
+function MeasuredPorts({ results, toleranceDeg, locale }: { results: ReturnType<typeof liveResults>; toleranceDeg: number; locale: string }) {
   const { control, register } = useFormContext<Input>();
   const { fields, append, remove } = useFieldArray({ control, name: 'ports' });
   const typed = useWatch({ control, name: 'ports' }) ?? [];
@@ -134,7 +134,7 @@ function MeasuredPorts({ results, toleranceDeg }: { results: ReturnType<typeof l
           <div key={field.id} className="grid items-end gap-2 sm:grid-cols-[10rem_8rem_1fr_auto]">
             <PortCell index={index} part="name" label="Port" register={register} />
             <PortCell index={index} part="heightMm" label="Edge depth (mm)" register={register} />
-            <div className="pb-2">{port ? <PortResult port={port} toleranceDeg={toleranceDeg} /> : null}</div>
+            <div className="pb-2">{port ? <PortResult port={port} toleranceDeg={toleranceDeg} locale={locale} /> : null}</div>
             <button type="button" onClick={() => remove(index)} className="rounded border border-steel-300 px-2 py-2 text-xs">
               Remove <span className="sr-only">port {index + 1}</span>
             </button>
@@ -261,14 +261,15 @@ function TemplatePicker({ templates }: { templates: Template[] }) {
   );
 }
 
-type Props = { slug: string; build: Build | null; fields: BuildFields; templates: Template[]; technicians: Option[]; toleranceDeg: number };
+/** `locale`: the reader's, for the live results' figures (lib/format/number-format.ts). */
+type Props = { slug: string; build: Build | null; fields: BuildFields; templates: Template[]; technicians: Option[]; toleranceDeg: number; locale: string };
 
 /**
  * Create or edit a build record, validated in the browser with the same zod schema as the API,
  * with the results worked out live beside the measurements by the same functions the server uses.
  * An edit sends the version it was loaded at; a 409 keeps every typed value and says who saved.
  */
-export function BuildForm({ slug, build, fields, templates, technicians, toleranceDeg }: Props) {
+export function BuildForm({ slug, build, fields, templates, technicians, toleranceDeg, locale }: Props) {
   const router = useRouter();
   const form = useForm<Input, unknown, Output>({ resolver: zodResolver(buildFormSchema) as unknown as Resolver<Input, unknown, Output>, defaultValues: startValues(fields, build?.version) });
   const [outcome, setOutcome] = useState<{ tone: 'info' | 'error'; message: string; conflict?: boolean }>();
@@ -329,18 +330,18 @@ export function BuildForm({ slug, build, fields, templates, technicians, toleran
         </FormSection>
         <FormSection title="Top dead centre (positive stop)">
           <StopReadings />
-          <TdcResult tdc={results.tdc} />
+          <TdcResult tdc={results.tdc} locale={locale} />
         </FormSection>
         <FormSection title="Ignition timing">
           <TimingSet />
-          <TimingResult results={results} />
+          <TimingResult results={results} locale={locale} />
           <TimingCheck />
         </FormSection>
         <FormSection title="Port timing">
-          <MeasuredPorts results={results} toleranceDeg={toleranceDeg} />
-          <BlowdownResult results={results} />
+          <MeasuredPorts results={results} toleranceDeg={toleranceDeg} locale={locale} />
+          <BlowdownResult results={results} locale={locale} />
           <PortTargets />
-          <ToleranceNote toleranceDeg={toleranceDeg} />
+          <ToleranceNote toleranceDeg={toleranceDeg} locale={locale} />
         </FormSection>
         <FormSection title="Other measurements and notes">
           <OptionalNumberField<Input> name="squishMm" label={F.squishMm.label} unit="mm" />

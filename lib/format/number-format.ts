@@ -11,6 +11,13 @@
  *   rules (Intl.PluralRules('en')): French rules call 0 "one" and would write "0 template".
  */
 
+/**
+ * Degrees printed on a sheet (the scale's numerals, advance marks, a pointer correction in the note)
+ * are written with '.' whatever the reader's locale: they name marks on the scale, and a decimal
+ * comma beside the commas of a list of marks would be ambiguous. Lengths on a sheet follow the reader.
+ */
+export const SHEET_NUMERALS_LOCALE = 'en';
+
 const formatters = new Map<string, Intl.NumberFormat>();
 
 function formatter(locale: string, options: Intl.NumberFormatOptions): Intl.NumberFormat {

@@ -143,26 +143,26 @@ export default async function BuildPage({ params }: Props) {
       <RecordSection id="tdc" title="Top dead centre" className="space-y-1">
         {build.stops ? (
           <p className="text-sm">
-            {F.stops.label}: A <span className="font-mono">{degText(build.stops.readingADeg)}</span>
-            {build.stops.readingASide ? ` ${build.stops.readingASide}` : ''}, B <span className="font-mono">{degText(build.stops.readingBDeg)}</span>
+            {F.stops.label}: A <span className="font-mono">{degText(build.stops.readingADeg, dateFormat.locale)}</span>
+            {build.stops.readingASide ? ` ${build.stops.readingASide}` : ''}, B <span className="font-mono">{degText(build.stops.readingBDeg, dateFormat.locale)}</span>
             {build.stops.readingBSide ? ` ${build.stops.readingBSide}` : ''} ({build.stops.numbering === 'full' ? '0–360° wheel' : '0–180° each side'})
           </p>
         ) : null}
-        <TdcResult tdc={build.tdc} />
+        <TdcResult tdc={build.tdc} locale={dateFormat.locale} />
       </RecordSection>
 
       <RecordSection id="timing" title="Ignition timing" className="space-y-1">
-        <TimingResult results={build} />
+        <TimingResult results={build} locale={dateFormat.locale} />
         <p className="text-sm text-steel-600 dark:text-steel-300">
           Entered in {build.timingEnteredAs === 'mm' ? 'mm' : 'degrees'}
-          {build.advanceDeg !== null ? ` · specified ${degText(build.advanceDeg, '° BTDC')}` : ''}
+          {build.advanceDeg !== null ? ` · specified ${degText(build.advanceDeg, dateFormat.locale, '° BTDC')}` : ''}
           {build.timingCheck ? ` · checked ${build.timingCheck}${build.timingCheck === 'strobe' && build.timingCheckRpm ? ` at ${build.timingCheckRpm} rpm` : ''}` : ' · not checked yet'}
         </p>
       </RecordSection>
 
       <RecordSection id="ports" title="Port timing">
         <p className="text-sm">
-          Stroke {mmText(build.strokeMm)} · rod {mmText(build.rodMm)} · pin offset {mmText(build.pinOffsetMm)} · deck {mmText(build.deckMm)}
+          Stroke {mmText(build.strokeMm, dateFormat.locale)} · rod {mmText(build.rodMm, dateFormat.locale)} · pin offset {mmText(build.pinOffsetMm, dateFormat.locale)} · deck {mmText(build.deckMm, dateFormat.locale)}
         </p>
         {build.ports.length === 0 ? (
           <p className="text-sm text-steel-600">No ports measured.</p>
@@ -179,24 +179,24 @@ export default async function BuildPage({ params }: Props) {
               {build.ports.map((port, i) => (
                 <tr key={i}>
                   <td className="pr-6">{port.name}</td>
-                  <td className="pr-6 font-mono">{mmText(port.heightMm)}</td>
+                  <td className="pr-6 font-mono">{mmText(port.heightMm, dateFormat.locale)}</td>
                   <td>
-                    <PortResult port={port} toleranceDeg={build.toleranceDeg} />
+                    <PortResult port={port} toleranceDeg={build.toleranceDeg} locale={dateFormat.locale} />
                   </td>
                 </tr>
               ))}
             </tbody>
           </table>
         )}
-        <BlowdownResult results={build} />
-        <ToleranceNote toleranceDeg={build.toleranceDeg} />
+        <BlowdownResult results={build} locale={dateFormat.locale} />
+        <ToleranceNote toleranceDeg={build.toleranceDeg} locale={dateFormat.locale} />
       </RecordSection>
 
       <RecordSection id="other" title="Other measurements and notes" className="space-y-1">
         <ul className="text-sm">
           {build.squishMm !== null ? (
             <li>
-              {F.squishMm.label}: <span className="font-mono">{mmText(build.squishMm)}</span>
+              {F.squishMm.label}: <span className="font-mono">{mmText(build.squishMm, dateFormat.locale)}</span>
             </li>
           ) : null}
           {build.otherMeasurements.map((m, i) => (
