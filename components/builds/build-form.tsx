@@ -1,12 +1,11 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm, useFormContext, useWatch, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage, SubmitButton } from '@/components/account/form-controls';
-import { applyIssues, submitJson } from '@/components/account/submit-json';
+import { ConflictLink, useRecordSave } from '@/components/records/use-record-save';
 import { FieldErrorText, FormSection, LabelledField, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
 import { HydratedForm } from '@/components/hydrated-form';
 import { OptionalNumberField, blankAsNull } from '@/components/templates/optional-number-field';
@@ -270,27 +269,15 @@ type Props = { slug: string; build: Build | null; fields: BuildFields; templates
  * An edit sends the version it was loaded at; a 409 keeps every typed value and says who saved.
  */
 export function BuildForm({ slug, build, fields, templates, technicians, toleranceDeg, locale }: Props) {
-  const router = useRouter();
   const form = useForm<Input, unknown, Output>({ resolver: zodResolver(buildFormSchema) as unknown as Resolver<Input, unknown, Output>, defaultValues: startValues(fields, build?.version) });
-  const [outcome, setOutcome] = useState<{ tone: 'info' | 'error'; message: string; conflict?: boolean }>();
+  const { outcome, save } = useRecordSave({ collectionUrl: `/api/v1/workspaces/${slug}/builds`, record: build, answerKey: 'build', pageOf: (id) => `/w/${slug}/builds/${id}`, setError: form.setError });
   const values = useWatch({ control: form.control });
   const results = liveResults(values as Record<string, unknown>, toleranceDeg);
 
-  const onValid = async (output: Output) => {
-    const { version, ...body } = output;
-    const result = build
-      ? await submitJson(`/api/v1/workspaces/${slug}/builds/${build.id}`, 'PATCH', { ...body, version: version ?? build.version })
-      : await submitJson(`/api/v1/workspaces/${slug}/builds`, 'POST', body);
-    if (result.status === 409) return setOutcome({ tone: 'error', message: String(result.body.error), conflict: true });
-    if (!result.ok) return setOutcome({ tone: 'error', message: applyIssues(result, form.setError) });
-    const saved = result.body.build as Build;
-    router.push(`/w/${slug}/builds/${saved.id}`);
-    router.refresh();
-  };
 
   return (
     <FormProvider {...form}>
-      <HydratedForm noValidate onSubmit={form.handleSubmit(onValid)} aria-label={build ? 'Edit build record' : 'New build record'} className="space-y-4">
+      <HydratedForm noValidate onSubmit={form.handleSubmit(save)} aria-label={build ? 'Edit build record' : 'New build record'} className="space-y-4">
         <FormSection title="Customer and engine">
           <div className="grid gap-3 sm:grid-cols-3">
             <TextField<Input> name="customerName" label={F.customerName.label} maxLength={F.customerName.maxLength} />
@@ -352,11 +339,7 @@ export function BuildForm({ slug, build, fields, templates, technicians, toleran
         </FormSection>
         <div className="flex items-center gap-3">
           <SubmitButton busy={form.formState.isSubmitting}>{build ? 'Save changes' : 'Create record'}</SubmitButton>
-          {outcome?.conflict ? (
-            <a href={`/w/${slug}/builds/${build?.id}`} target="_blank" rel="noreferrer" className="text-sm text-gauge-700 underline">
-              Open the current version (your edits stay here)
-            </a>
-          ) : null}
+          <ConflictLink outcome={outcome} href={`/w/${slug}/builds/${build?.id}`} />
         </div>
         <FormMessage tone={outcome?.tone} message={outcome?.message} />
       </HydratedForm>

@@ -1,11 +1,11 @@
 'use client';
 
 import { createColumnHelper } from '@tanstack/react-table';
-import Link from 'next/link';
 import { useMemo } from 'react';
 import useSWR from 'swr';
 import { ListFilter, ListSearch, ListToolbar } from '@/components/lists/list-controls';
 import { ListPager } from '@/components/lists/list-pager';
+import { RecordLink } from '@/components/lists/record-link';
 import { listFeatures, SortableTable } from '@/components/lists/sortable-table';
 import { fetchListPage, useListView, useSearchText } from '@/components/lists/use-list-view';
 import type { Build, BuildPage } from '@/lib/builds/build';
@@ -46,12 +46,7 @@ export function BuildList({ slug, technicians, templates, dateFormat }: { slug: 
             header: c.header,
             cell: (info) => {
               const row = info.row.original;
-              if (c.key === 'customerName')
-                return (
-                  <Link href={`/w/${slug}/builds/${row.id}`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
-                    {row.customerName}
-                  </Link>
-                );
+              if (c.key === 'customerName') return <RecordLink href={`/w/${slug}/builds/${row.id}`}>{row.customerName}</RecordLink>;
               if (c.key === 'status') return <StatusBadge status={row.status} />;
               return info.getValue();
             },

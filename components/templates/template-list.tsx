@@ -1,7 +1,6 @@
 'use client';
 
 import { createColumnHelper } from '@tanstack/react-table';
-import Link from 'next/link';
 import { useMemo } from 'react';
 import useSWR from 'swr';
 import type { TemplateSortKey } from '@/lib/templates/list-query';
@@ -10,6 +9,7 @@ import { listViewFromParams, listViewHref, type TemplateListView } from '@/lib/t
 import type { Template, TemplatePage } from '@/lib/templates/template';
 import { ListFilter, ListSearch, ListToolbar } from '@/components/lists/list-controls';
 import { ListPager } from '@/components/lists/list-pager';
+import { RecordLink } from '@/components/lists/record-link';
 import { listFeatures, SortableTable } from '@/components/lists/sortable-table';
 import { fetchListPage, useListView, useSearchText } from '@/components/lists/use-list-view';
 import { formatDate, type DateFormat } from '@/lib/format/date-format';
@@ -48,12 +48,7 @@ export function TemplateList({ slug, dateFormat }: { slug: string; dateFormat: D
           header: c.header,
           cell: (info) => {
             const row = info.row.original;
-            if (c.key === 'name')
-              return (
-                <Link href={`/w/${slug}/templates/${row.id}`} className="font-medium text-gauge-700 underline dark:text-gauge-300">
-                  {row.name}
-                </Link>
-              );
+            if (c.key === 'name') return <RecordLink href={`/w/${slug}/templates/${row.id}`}>{row.name}</RecordLink>;
             if (c.key === 'updatedAt') return <time dateTime={row.updatedAt}>{formatDate(row.updatedAt, dateFormat)}</time>;
             if (c.key === 'rotation') return <abbr title={formatFieldValue('rotation', row.rotation, dateFormat.locale)}>{row.rotation.toUpperCase()}</abbr>;
             if (c.key === 'description')
