@@ -10,6 +10,7 @@ import { findStoredBuild } from '@/db/builds/find-build';
 import { listBuildRevisions } from '@/db/builds/revisions';
 import { listBuildPhotos } from '@/db/builds/photos';
 import { PhotoGallery } from '@/components/photos/photo-gallery';
+import { EditLink, RecordHeader } from '@/components/records/record-header';
 import { RecordSection } from '@/components/records/record-section';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { findTemplate } from '@/db/templates/find-template';
@@ -55,57 +56,52 @@ export default async function BuildPage({ params }: Props) {
 
   return (
     <article className="space-y-8">
-      <header className="flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <p className="text-sm">
-            <Link href={`/w/${slug}/builds`} className="text-gauge-700 underline dark:text-gauge-300">
-              Build records
-            </Link>
-          </p>
-          <h1 className="text-2xl font-bold">
+      <RecordHeader
+        back={{ href: `/w/${slug}/builds`, label: 'Build records' }}
+        title={
+          <>
             {build.customerName} <StatusBadge status={build.status} />
-          </h1>
-          <p className="text-steel-600 dark:text-steel-300">
-            {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
-          </p>
+          </>
+        }
+        actions={
+          <>
+            {canEdit ? <EditLink href={`/w/${slug}/builds/${build.id}/edit`} /> : null}
+            {canEdit
+              ? STATUS_ACTIONS.filter((a) => a.to !== build.status && !statusChangeProblem(build.status, a.to)).map((a) => (
+                  <ActionButton key={a.to} url={api} method="PATCH" body={{ version: build.version, status: a.to }} label={a.label} busyLabel="Saving…" />
+                ))
+              : null}
+            {can(access.role, 'build.delete') ? (
+              <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={{
+                  title: `Delete the record of ${build.customerName}?`,
+                  message: `The build record of ${build.customerName} is deleted with its history and sends. This cannot be undone.`,
+                  confirmLabel: 'Delete record',
+                  danger: true,
+                }} after={`/w/${slug}/builds`} />
+            ) : null}
+          </>
+        }
+      >
+        <p className="text-steel-600 dark:text-steel-300">
+          {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
+        </p>
+        <p className="text-xs text-steel-500">
+          Opened {formatDate(build.openedOn, dateFormat)}
+          {build.finishedOn ? ` · finished ${formatDate(build.finishedOn, dateFormat)}` : ''}
+          {build.handedOverOn ? ` · handed over ${formatDate(build.handedOverOn, dateFormat)}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
+          {build.updatedBy?.name ?? 'a removed user'} at {formatDateTime(build.updatedAt, dateFormat)}
+        </p>
+        {build.template ? (
           <p className="text-xs text-steel-500">
-            Opened {formatDate(build.openedOn, dateFormat)}
-            {build.finishedOn ? ` · finished ${formatDate(build.finishedOn, dateFormat)}` : ''}
-            {build.handedOverOn ? ` · handed over ${formatDate(build.handedOverOn, dateFormat)}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
-            {build.updatedBy?.name ?? 'a removed user'} at {formatDateTime(build.updatedAt, dateFormat)}
+            From template{' '}
+            <Link href={`/w/${slug}/templates/${build.template.id}`} className="underline">
+              {build.template.name}
+            </Link>{' '}
+            version {build.template.version}
           </p>
-          {build.template ? (
-            <p className="text-xs text-steel-500">
-              From template{' '}
-              <Link href={`/w/${slug}/templates/${build.template.id}`} className="underline">
-                {build.template.name}
-              </Link>{' '}
-              version {build.template.version}
-            </p>
-          ) : null}
-          {finalForMe ? <p className="mt-1 text-sm">Handed over to the customer: only an owner can change or reopen this record.</p> : null}
-        </div>
-        <div className="flex flex-wrap items-start gap-2">
-          {canEdit ? (
-            <Link href={`/w/${slug}/builds/${build.id}/edit`} className="rounded-md bg-gauge-600 px-3 py-1.5 text-sm font-semibold text-white">
-              Edit
-            </Link>
-          ) : null}
-          {canEdit
-            ? STATUS_ACTIONS.filter((a) => a.to !== build.status && !statusChangeProblem(build.status, a.to)).map((a) => (
-                <ActionButton key={a.to} url={api} method="PATCH" body={{ version: build.version, status: a.to }} label={a.label} busyLabel="Saving…" />
-              ))
-            : null}
-          {can(access.role, 'build.delete') ? (
-            <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={{
-                title: `Delete the record of ${build.customerName}?`,
-                message: `The build record of ${build.customerName} is deleted with its history and sends. This cannot be undone.`,
-                confirmLabel: 'Delete record',
-                danger: true,
-              }} after={`/w/${slug}/builds`} />
-          ) : null}
-        </div>
-      </header>
+        ) : null}
+        {finalForMe ? <p className="mt-1 text-sm">Handed over to the customer: only an owner can change or reopen this record.</p> : null}
+      </RecordHeader>
 
       <RecordSection id="copy" title="Customer’s copy">
         <div className="flex flex-wrap items-start gap-3 text-sm">

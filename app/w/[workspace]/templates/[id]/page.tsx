@@ -1,6 +1,5 @@
 import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
@@ -8,6 +7,7 @@ import { formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
 import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue } from '@/components/templates/field-labels';
 import { PhotoGallery } from '@/components/photos/photo-gallery';
+import { EditLink, RecordHeader } from '@/components/records/record-header';
 import { RecordSection } from '@/components/records/record-section';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
@@ -44,50 +44,47 @@ export default async function TemplatePage({ params }: Props) {
 
   return (
     <article className="space-y-8">
-      <header className="flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <p className="text-sm">
-            <Link href={`/w/${slug}/templates`} className="text-gauge-700 underline dark:text-gauge-300">
-              Engine templates
-            </Link>
-          </p>
-          <h1 className="text-2xl font-bold">
+      <RecordHeader
+        back={{ href: `/w/${slug}/templates`, label: 'Engine templates' }}
+        title={
+          <>
             {template.name} {template.archived ? <span className="ml-2 rounded bg-steel-200 px-2 py-0.5 text-sm font-medium text-steel-700">archived</span> : null}
-          </h1>
-          <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
-          <p className="text-xs text-steel-500">
-            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
-          </p>
-        </div>
-        {canEdit ? (
-          <div className="flex flex-wrap gap-2">
-            <Link href={`/w/${slug}/templates/${template.id}/edit`} className="inline-flex min-h-11 items-center rounded-md bg-gauge-600 px-3 text-sm font-semibold text-white">
-              Edit
-            </Link>
-            <ActionButton
-              url={`${api}/archive`}
-              body={{ version: template.version, archived: !template.archived }}
-              label={template.archived ? 'Un-archive' : 'Archive'}
-              busyLabel="Saving…"
-            />
-            {can(access.role, 'template.delete') ? (
+          </>
+        }
+        actions={
+          canEdit ? (
+            <>
+              <EditLink href={`/w/${slug}/templates/${template.id}/edit`} />
               <ActionButton
-                url={api}
-                method="DELETE"
-                label="Delete"
-                busyLabel="Deleting…"
-                confirm={{
-                  title: `Delete ${template.name}?`,
-                  message: `${template.name} is deleted with its photos and its history. This cannot be undone; Archive keeps it out of the list instead.`,
-                  confirmLabel: 'Delete template',
-                  danger: true,
-                }}
-                after={`/w/${slug}/templates`}
+                url={`${api}/archive`}
+                body={{ version: template.version, archived: !template.archived }}
+                label={template.archived ? 'Un-archive' : 'Archive'}
+                busyLabel="Saving…"
               />
-            ) : null}
-          </div>
-        ) : null}
-      </header>
+              {can(access.role, 'template.delete') ? (
+                <ActionButton
+                  url={api}
+                  method="DELETE"
+                  label="Delete"
+                  busyLabel="Deleting…"
+                  confirm={{
+                    title: `Delete ${template.name}?`,
+                    message: `${template.name} is deleted with its photos and its history. This cannot be undone; Archive keeps it out of the list instead.`,
+                    confirmLabel: 'Delete template',
+                    danger: true,
+                  }}
+                  after={`/w/${slug}/templates`}
+                />
+              ) : null}
+            </>
+          ) : null
+        }
+      >
+        <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
+        <p className="text-xs text-steel-500">
+          Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
+        </p>
+      </RecordHeader>
 
       <RecordSection id="print" title="Print from this template">
         <PrintLinks template={template} sheetUrl={`${api}/sheet`} workspaceSlug={slug} />
