@@ -1,8 +1,12 @@
+import { requestDateFormat } from '@/app/lib/date-format';
+import { ReaderLocale } from '@/components/format/reader-locale';
 import { NavLink } from '@/components/shell/nav-link';
 import { CALCULATORS } from './calculator-list';
 
-// Public section (DEVELOPERS.md, "Public pages"): no sign-in, nothing stored; every answer is computed in the browser.
-export default function CalculatorsLayout({ children }: { children: React.ReactNode }) {
+// Public section (DEVELOPERS.md, "Public pages"): no sign-in, nothing stored; every answer is computed in the browser,
+// its figures written in the reader's locale.
+export default async function CalculatorsLayout({ children }: { children: React.ReactNode }) {
+  const { locale } = await requestDateFormat();
   return (
     <div className="space-y-6">
       <nav aria-label="Calculators" className="flex flex-wrap gap-2 border-b border-steel-200 pb-3 text-sm dark:border-steel-800">
@@ -13,7 +17,7 @@ export default function CalculatorsLayout({ children }: { children: React.ReactN
           </NavLink>
         ))}
       </nav>
-      {children}
+      <ReaderLocale locale={locale}>{children}</ReaderLocale>
     </div>
   );
 }

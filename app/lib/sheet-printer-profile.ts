@@ -8,7 +8,7 @@ import { defaultProfileOf, findProfile } from '@/db/printer-profiles';
  */
 export const profileChoiceSchema = z
   .union([z.enum(['default', 'none']), z.string().regex(/^[1-9]\d{0,9}$/)], {
-    error: 'Printer profile (profile) must be default, none or the id of one of this workspace’s profiles',
+    error: 'Printer profile must be default, none or the id of one of this workspace’s profiles',
   })
   .default('default');
 

@@ -1,8 +1,7 @@
 import Link from 'next/link';
 import { SignOutButton } from './sign-out-button';
 import { WorkspaceSwitcher } from './workspace-switcher';
-import { TemplatesNavLink } from '@/components/templates/templates-nav-link';
-import { BuildsNavLink } from '@/components/builds/builds-nav-link';
+import { WorkspaceSectionLink } from '@/components/workspace/workspace-section-link';
 
 /** The header's right side: sign-in link for visitors; workspace switcher, account and sign-out for members. */
 type Props = {
@@ -26,8 +25,12 @@ export function AccountMenu({ member }: Props) {
   const { user, workspaces } = member;
   return (
     <div className="flex flex-wrap items-center gap-2">
-      <TemplatesNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
-      <BuildsNavLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} />
+      <WorkspaceSectionLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} section="templates">
+        Templates
+      </WorkspaceSectionLink>
+      <WorkspaceSectionLink workspaces={workspaces.map(({ slug, kind }) => ({ slug, kind }))} section="builds">
+        Builds
+      </WorkspaceSectionLink>
       <WorkspaceSwitcher workspaces={workspaces.map(({ slug, name, kind }) => ({ slug, name, kind }))} />
       <Link href="/account" className="inline-flex min-h-11 items-center rounded px-2 text-sm hover:bg-steel-100 dark:hover:bg-steel-800" aria-label={`Account of ${user.name}`}>
         {user.name}

@@ -1,12 +1,11 @@
 'use client';
 
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useRouter } from 'next/navigation';
 import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm, useFormContext, useWatch, type Resolver } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage, SubmitButton } from '@/components/account/form-controls';
-import { applyIssues, submitJson } from '@/components/account/submit-json';
+import { ConflictLink, useRecordSave } from '@/components/records/use-record-save';
 import { FieldErrorText, FormSection, LabelledField, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
 import { HydratedForm } from '@/components/hydrated-form';
 import { OptionalNumberField, blankAsNull } from '@/components/templates/optional-number-field';
@@ -119,7 +118,7 @@ function TimingCheck() {
   );
 }
 
-function MeasuredPorts({ results, toleranceDeg }: { results: ReturnType<typeof liveResults>; toleranceDeg: number }) {
+function MeasuredPorts({ results, toleranceDeg, locale }: { results: ReturnType<typeof liveResults>; toleranceDeg: number; locale: string }) {
   const { control, register } = useFormContext<Input>();
   const { fields, append, remove } = useFieldArray({ control, name: 'ports' });
   const typed = useWatch({ control, name: 'ports' }) ?? [];
@@ -134,7 +133,7 @@ function MeasuredPorts({ results, toleranceDeg }: { results: ReturnType<typeof l
           <div key={field.id} className="grid items-end gap-2 sm:grid-cols-[10rem_8rem_1fr_auto]">
             <PortCell index={index} part="name" label="Port" register={register} />
             <PortCell index={index} part="heightMm" label="Edge depth (mm)" register={register} />
-            <div className="pb-2">{port ? <PortResult port={port} toleranceDeg={toleranceDeg} /> : null}</div>
+            <div className="pb-2">{port ? <PortResult port={port} toleranceDeg={toleranceDeg} locale={locale} /> : null}</div>
             <button type="button" onClick={() => remove(index)} className="rounded border border-steel-300 px-2 py-2 text-xs">
               Remove <span className="sr-only">port {index + 1}</span>
             </button>
@@ -261,35 +260,24 @@ function TemplatePicker({ templates }: { templates: Template[] }) {
   );
 }
 
-type Props = { slug: string; build: Build | null; fields: BuildFields; templates: Template[]; technicians: Option[]; toleranceDeg: number };
+/** `locale`: the reader's, for the live results' figures (lib/format/number-format.ts). */
+type Props = { slug: string; build: Build | null; fields: BuildFields; templates: Template[]; technicians: Option[]; toleranceDeg: number; locale: string };
 
 /**
  * Create or edit a build record, validated in the browser with the same zod schema as the API,
  * with the results worked out live beside the measurements by the same functions the server uses.
  * An edit sends the version it was loaded at; a 409 keeps every typed value and says who saved.
  */
-export function BuildForm({ slug, build, fields, templates, technicians, toleranceDeg }: Props) {
-  const router = useRouter();
+export function BuildForm({ slug, build, fields, templates, technicians, toleranceDeg, locale }: Props) {
   const form = useForm<Input, unknown, Output>({ resolver: zodResolver(buildFormSchema) as unknown as Resolver<Input, unknown, Output>, defaultValues: startValues(fields, build?.version) });
-  const [outcome, setOutcome] = useState<{ tone: 'info' | 'error'; message: string; conflict?: boolean }>();
+  const { outcome, save } = useRecordSave({ collectionUrl: `/api/v1/workspaces/${slug}/builds`, record: build, answerKey: 'build', pageOf: (id) => `/w/${slug}/builds/${id}`, setError: form.setError });
   const values = useWatch({ control: form.control });
   const results = liveResults(values as Record<string, unknown>, toleranceDeg);
 
-  const onValid = async (output: Output) => {
-    const { version, ...body } = output;
-    const result = build
-      ? await submitJson(`/api/v1/workspaces/${slug}/builds/${build.id}`, 'PATCH', { ...body, version: version ?? build.version })
-      : await submitJson(`/api/v1/workspaces/${slug}/builds`, 'POST', body);
-    if (result.status === 409) return setOutcome({ tone: 'error', message: String(result.body.error), conflict: true });
-    if (!result.ok) return setOutcome({ tone: 'error', message: applyIssues(result, form.setError) });
-    const saved = result.body.build as Build;
-    router.push(`/w/${slug}/builds/${saved.id}`);
-    router.refresh();
-  };
 
   return (
     <FormProvider {...form}>
-      <HydratedForm noValidate onSubmit={form.handleSubmit(onValid)} aria-label={build ? 'Edit build record' : 'New build record'} className="space-y-4">
+      <HydratedForm noValidate onSubmit={form.handleSubmit(save)} aria-label={build ? 'Edit build record' : 'New build record'} className="space-y-4">
         <FormSection title="Customer and engine">
           <div className="grid gap-3 sm:grid-cols-3">
             <TextField<Input> name="customerName" label={F.customerName.label} maxLength={F.customerName.maxLength} />
@@ -329,18 +317,18 @@ export function BuildForm({ slug, build, fields, templates, technicians, toleran
         </FormSection>
         <FormSection title="Top dead centre (positive stop)">
           <StopReadings />
-          <TdcResult tdc={results.tdc} />
+          <TdcResult tdc={results.tdc} locale={locale} />
         </FormSection>
         <FormSection title="Ignition timing">
           <TimingSet />
-          <TimingResult results={results} />
+          <TimingResult results={results} locale={locale} />
           <TimingCheck />
         </FormSection>
         <FormSection title="Port timing">
-          <MeasuredPorts results={results} toleranceDeg={toleranceDeg} />
-          <BlowdownResult results={results} />
+          <MeasuredPorts results={results} toleranceDeg={toleranceDeg} locale={locale} />
+          <BlowdownResult results={results} locale={locale} />
           <PortTargets />
-          <ToleranceNote toleranceDeg={toleranceDeg} />
+          <ToleranceNote toleranceDeg={toleranceDeg} locale={locale} />
         </FormSection>
         <FormSection title="Other measurements and notes">
           <OptionalNumberField<Input> name="squishMm" label={F.squishMm.label} unit="mm" />
@@ -351,11 +339,7 @@ export function BuildForm({ slug, build, fields, templates, technicians, toleran
         </FormSection>
         <div className="flex items-center gap-3">
           <SubmitButton busy={form.formState.isSubmitting}>{build ? 'Save changes' : 'Create record'}</SubmitButton>
-          {outcome?.conflict ? (
-            <a href={`/w/${slug}/builds/${build?.id}`} target="_blank" rel="noreferrer" className="text-sm text-gauge-700 underline">
-              Open the current version (your edits stay here)
-            </a>
-          ) : null}
+          <ConflictLink outcome={outcome} href={`/w/${slug}/builds/${build?.id}`} />
         </div>
         <FormMessage tone={outcome?.tone} message={outcome?.message} />
       </HydratedForm>

@@ -9,7 +9,8 @@ import { arcChordFields, arcChordSchema, type ArcChordInput, type ArcChordReques
 import { scribeChartHref } from '@/lib/engine/wheel-links';
 import { LengthField } from './length-field';
 import { mmToUnit, type LengthUnit } from '@/lib/fields/length';
-import { formatDeg } from './length-unit';
+import { formatDecimal, formatDeg } from '@/lib/format/number-format';
+import { useReaderLocale } from '@/components/format/reader-locale';
 import { ResultPanel, WaitingForInput } from './result-panel';
 import { shownUnitResolver, useRecheckOnUnit } from './shown-unit-resolver';
 import { UnitSwitch } from './unit-switch';
@@ -18,6 +19,7 @@ import { WheelLink } from './wheel-link';
 
 /** Distances from the TDC mark round the rim (arc) and straight across (chord, for dividers). */
 export function ArcChordCalculator() {
+  const locale = useReaderLocale();
   const [unit, setUnit] = useState<LengthUnit>('mm');
   const form = useForm<ArcChordInput, unknown, ArcChordRequest>({
     resolver: shownUnitResolver(arcChordSchema, arcChordFields),
@@ -61,13 +63,13 @@ export function ArcChordCalculator() {
                 {result.rows.map((row, index) => (
                   <tr key={`${row.angleDeg}-${index}`} className="border-t border-steel-100 dark:border-steel-800">
                     <th scope="row" className="py-1 pr-3 font-normal">
-                      {formatDeg(row.angleDeg, 1)}
+                      {formatDeg(row.angleDeg, locale, { places: 1 })}
                     </th>
                     <td className="py-1 pr-3" data-testid={`arc-${index}`}>
-                      {mmToUnit(row.arcMm, unit).toFixed(places)}
+                      {formatDecimal(mmToUnit(row.arcMm, unit), locale, { places })}
                     </td>
                     <td className="py-1 pr-3" data-testid={`chord-${index}`}>
-                      {mmToUnit(row.chordMm, unit).toFixed(places)}
+                      {formatDecimal(mmToUnit(row.chordMm, unit), locale, { places })}
                     </td>
                   </tr>
                 ))}

@@ -1,6 +1,8 @@
 import { cosDeg, normalizeDeg, sinDeg } from '@/lib/angle';
 import { deadCentres, offsetPistonDropMm } from '@/lib/engine/offset-slider-crank';
 import { formatLength, type LengthUnit } from '@/lib/fields/length';
+import { formatDeg } from '@/lib/format/number-format';
+import { useReaderLocale } from '@/components/format/reader-locale';
 import { svgRound } from './svg-round';
 
 type CrankDiagramProps = { strokeMm: number; rodMm: number; crankDeg: number; pinOffsetMm?: number; unit: LengthUnit };
@@ -14,6 +16,7 @@ type CrankDiagramProps = { strokeMm: number; rodMm: number; crankDeg: number; pi
  * vertical at piston TDC (offset-slider-crank.ts).
  */
 export function CrankDiagram({ strokeMm, rodMm, crankDeg, pinOffsetMm = 0, unit }: CrankDiagramProps) {
+  const locale = useReaderLocale();
   const a = strokeMm / 2;
   const e = pinOffsetMm;
   const { tdcHeightMm, tdcPhiDeg } = deadCentres({ strokeMm, rodMm, pinOffsetMm });
@@ -33,7 +36,7 @@ export function CrankDiagram({ strokeMm, rodMm, crankDeg, pinOffsetMm = 0, unit 
   const left = Math.min(-1.45 * a, e - 1.45 * a);
   const fontSize = height * 0.042;
   const dimX = e + pistonHalfWidth + 0.45 * a;
-  const dropLabel = formatLength(dropMm, unit);
+  const dropLabel = formatLength(dropMm, unit, locale);
   // Room on the right for the dimension's text (mono figures are about 0.62 em wide).
   const right = dimX + 0.15 * a + fontSize * 0.62 * (dropLabel.length + 1);
   const angleRadius = 0.55 * a;
@@ -49,7 +52,7 @@ export function CrankDiagram({ strokeMm, rodMm, crankDeg, pinOffsetMm = 0, unit 
       viewBox={`${left} ${-top} ${right - left} ${height}`}
       className="h-auto w-full max-w-xs"
       role="img"
-      aria-label={`Crank at ${shownDeg.toFixed(1)}° from TDC; piston ${formatLength(dropMm, unit)} below TDC${e !== 0 ? `; wrist pin offset ${formatLength(e, unit)}` : ''}`}
+      aria-label={`Crank at ${formatDeg(shownDeg, locale, { places: 1 })} from TDC; piston ${formatLength(dropMm, unit, locale)} below TDC${e !== 0 ? `; wrist pin offset ${formatLength(e, unit, locale)}` : ''}`}
     >
       <title>Crank and con-rod at the entered angle</title>
       {/* cylinder walls */}
@@ -80,7 +83,7 @@ export function CrankDiagram({ strokeMm, rodMm, crankDeg, pinOffsetMm = 0, unit 
           <line x1={0} y1={0.2 * a} x2={0} y2={-top} stroke="currentColor" strokeWidth={0.5} strokeDasharray="1 3" {...line} className="text-steel-400" />
           <line x1={0} y1={-(tdcCrownY + 0.2 * a)} x2={boreX} y2={-(tdcCrownY + 0.2 * a)} stroke="currentColor" strokeWidth={1.5} {...line} className="text-gauge-600" />
           <text x={Math.max(0, boreX) + 0.1 * a} y={-(tdcCrownY + 0.25 * a)} fontSize={fontSize * 0.8} fontFamily="var(--font-figures), monospace" className="fill-gauge-700 dark:fill-gauge-500">
-            {`e ${formatLength(e, unit)}`}
+            {`e ${formatLength(e, unit, locale)}`}
           </text>
         </g>
       ) : null}
@@ -107,7 +110,7 @@ export function CrankDiagram({ strokeMm, rodMm, crankDeg, pinOffsetMm = 0, unit 
         {dropLabel}
       </text>
       <text x={0.25 * a} y={-0.7 * a} fontSize={fontSize} className="fill-gauge-700 dark:fill-gauge-500">
-        {`${shownDeg.toFixed(1)}°`}
+        {`${formatDeg(shownDeg, locale, { places: 1 })}`}
       </text>
     </svg>
   );

@@ -11,7 +11,8 @@ import { advanceMarkHref } from '@/lib/engine/wheel-links';
 import { CrankDiagram } from './crank-diagram';
 import { LengthField } from './length-field';
 import { formatLength, type LengthUnit } from '@/lib/fields/length';
-import { formatDeg } from './length-unit';
+import { formatDeg } from '@/lib/format/number-format';
+import { useReaderLocale } from '@/components/format/reader-locale';
 import { ResultFigure, ResultPanel, WaitingForInput } from './result-panel';
 import { shownUnitResolver, useRecheckOnUnit } from './shown-unit-resolver';
 import { UnitSwitch } from './unit-switch';
@@ -88,11 +89,12 @@ function GeometryFields({ unit }: { unit: LengthUnit }) {
 }
 
 /** "12.3° ATDC" up to BDC, "x° BTDC" past it: the side matters once the pin is offset. */
-function sideText(crankDeg: number): string {
-  return crankDeg <= 180 ? `${formatDeg(crankDeg, 1)} ATDC` : `${formatDeg(360 - crankDeg, 1)} BTDC`;
+function sideText(crankDeg: number, locale: string): string {
+  return crankDeg <= 180 ? `${formatDeg(crankDeg, locale, { places: 1 })} ATDC` : `${formatDeg(360 - crankDeg, locale, { places: 1 })} BTDC`;
 }
 
 function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
+  const locale = useReaderLocale();
   const form = useForm<PistonDropInput, unknown, PistonDropRequest>({
     resolver: shownUnitResolver(pistonDropSchema, pistonDropFields),
     context: { unit },
@@ -124,18 +126,18 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
           {result ? (
             <>
               <ResultFigure
-                label={`Below TDC at ${formatDeg(result.crankDeg, 1)}`}
-                value={formatLength(result.dropMm, unit)}
+                label={`Below TDC at ${formatDeg(result.crankDeg, locale, { places: 1 })}`}
+                value={formatLength(result.dropMm, unit, locale)}
                 detail={
                   btdcDeg !== null && btdcDeg <= 180
-                    ? `= ${formatLength(result.dropMm, unit)} BTDC for ${formatDeg(btdcDeg, 1)} BTDC timing`
+                    ? `= ${formatLength(result.dropMm, unit, locale)} BTDC for ${formatDeg(btdcDeg, locale, { places: 1 })} BTDC timing`
                     : offset
-                      ? `${sideText(result.crankDeg)}, on the down-stroke`
+                      ? `${sideText(result.crankDeg, locale)}, on the down-stroke`
                       : undefined
                 }
                 testId="drop-value"
               />
-              {btdcDeg !== null ? <WheelLink href={advanceMarkHref(btdcDeg)}>{`Mark ${formatDeg(btdcDeg, 1)} BTDC on a wheel`}</WheelLink> : null}
+              {btdcDeg !== null ? <WheelLink href={advanceMarkHref(btdcDeg)}>{`Mark ${formatDeg(btdcDeg, locale, { places: 1 })} BTDC on a wheel`}</WheelLink> : null}
             </>
           ) : (
             <WaitingForInput />
@@ -148,6 +150,7 @@ function AngleToDrop({ geometry, onGeometry, unit }: PartProps) {
 }
 
 function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
+  const locale = useReaderLocale();
   const form = useForm<CrankAngleInput, unknown, CrankAngleRequest>({
     resolver: shownUnitResolver(crankAngleSchema, crankAngleFields),
     context: { unit },
@@ -177,23 +180,23 @@ function DropToAngle({ geometry, onGeometry, unit }: PartProps) {
             <>
               {result.pinOffsetMm === 0 ? (
                 <ResultFigure
-                  label={`From TDC at ${formatLength(result.dropMm, unit)} drop`}
-                  value={formatDeg(result.crankDeg)}
-                  detail={`${formatDeg(result.crankDeg, 2)} BTDC on the way up, ${formatDeg(result.crankDeg, 2)} ATDC on the way down`}
+                  label={`From TDC at ${formatLength(result.dropMm, unit, locale)} drop`}
+                  value={formatDeg(result.crankDeg, locale, { places: 2 })}
+                  detail={`${formatDeg(result.crankDeg, locale, { places: 2 })} BTDC on the way up, ${formatDeg(result.crankDeg, locale, { places: 2 })} ATDC on the way down`}
                   testId="angle-value"
                 />
               ) : (
                 <>
                   <ResultFigure
-                    label={`Before TDC on the way up, at ${formatLength(result.dropMm, unit)} drop`}
-                    value={`${formatDeg(result.crankDegBTDC)} BTDC`}
+                    label={`Before TDC on the way up, at ${formatLength(result.dropMm, unit, locale)} drop`}
+                    value={`${formatDeg(result.crankDegBTDC, locale, { places: 2 })} BTDC`}
                     detail="The offset pin makes the two sides of TDC differ: this is the one for ignition timing."
                     testId="angle-value"
                   />
-                  <ResultFigure label="After TDC on the way down" value={`${formatDeg(result.crankDegATDC)} ATDC`} testId="angle-atdc-value" />
+                  <ResultFigure label="After TDC on the way down" value={`${formatDeg(result.crankDegATDC, locale, { places: 2 })} ATDC`} testId="angle-atdc-value" />
                 </>
               )}
-              <WheelLink href={advanceMarkHref(result.crankDegBTDC)}>{`Mark ${formatDeg(result.crankDegBTDC, 1)} BTDC on a wheel`}</WheelLink>
+              <WheelLink href={advanceMarkHref(result.crankDegBTDC)}>{`Mark ${formatDeg(result.crankDegBTDC, locale, { places: 1 })} BTDC on a wheel`}</WheelLink>
             </>
           ) : (
             <WaitingForInput />

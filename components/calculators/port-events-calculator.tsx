@@ -11,7 +11,8 @@ import { PORT_KINDS } from '@/lib/engine/port-kind';
 import { portEventsWheelHref } from '@/lib/engine/wheel-links';
 import { LengthField } from './length-field';
 import { formatLength, type LengthUnit } from '@/lib/fields/length';
-import { formatDeg } from './length-unit';
+import { formatDeg } from '@/lib/format/number-format';
+import { useReaderLocale } from '@/components/format/reader-locale';
 import { PortRing } from './port-ring';
 import { ResultPanel, WaitingForInput } from './result-panel';
 import { shownUnitResolver, useRecheckOnUnit } from './shown-unit-resolver';
@@ -37,6 +38,7 @@ const KIND_OPTIONS = PORT_KINDS.map((kind) => ({ value: kind, label: kind[0]?.to
 
 /** Port heights and deck height → opening and closing angles, durations and blowdown. */
 export function PortEventsCalculator() {
+  const locale = useReaderLocale();
   const [unit, setUnit] = useState<LengthUnit>('mm');
   const form = useForm<PortEventsInput, unknown, PortEventsRequest>({
     resolver: shownUnitResolver(portEventsSchema, portEventsFields),
@@ -132,12 +134,12 @@ export function PortEventsCalculator() {
                       <td className="py-1 pr-3 text-steel-500">{index + 1}</td>
                       <th scope="row" className="py-1 pr-3 font-sans font-medium">
                         {port.name}
-                        <span className="block text-xs font-normal text-steel-500">{portNote(port, unit)}</span>
+                        <span className="block text-xs font-normal text-steel-500">{portNote(port, unit, locale)}</span>
                       </th>
-                      <td className="py-1 pr-3">{port.opensDegATDC === null ? '—' : formatDeg(port.opensDegATDC, 1)}</td>
-                      <td className="py-1 pr-3">{port.closesDegATDC === null ? '—' : formatDeg(port.closesDegATDC, 1)}</td>
+                      <td className="py-1 pr-3">{port.opensDegATDC === null ? '—' : formatDeg(port.opensDegATDC, locale, { places: 1 })}</td>
+                      <td className="py-1 pr-3">{port.closesDegATDC === null ? '—' : formatDeg(port.closesDegATDC, locale, { places: 1 })}</td>
                       <td className="py-1 pr-3" data-testid={`duration-${index}`}>
-                        {formatDeg(port.durationDeg, 1)}
+                        {formatDeg(port.durationDeg, locale, { places: 1 })}
                       </td>
                     </tr>
                   ))}
@@ -146,7 +148,7 @@ export function PortEventsCalculator() {
               <p className="text-sm">
                 <span className="font-semibold">Blowdown: </span>
                 <span className="font-mono" data-testid="blowdown">
-                  {result.blowdownDeg === null ? '—' : formatDeg(result.blowdownDeg, 1)}
+                  {result.blowdownDeg === null ? '—' : formatDeg(result.blowdownDeg, locale, { places: 1 })}
                 </span>{' '}
                 <span className="text-xs text-steel-500">{result.blowdownNote}</span>
               </p>
@@ -163,8 +165,8 @@ export function PortEventsCalculator() {
 }
 
 /** The port's note in the unit on screen. */
-function portNote(port: PortTiming, unit: LengthUnit): string {
-  const drop = formatLength(port.openingDropMm, unit);
+function portNote(port: PortTiming, unit: LengthUnit, locale: string): string {
+  const drop = formatLength(port.openingDropMm, unit, locale);
   if (port.status === 'opens') return `Opens ${drop} below TDC`;
   if (port.status === 'open-at-tdc') return 'Open at TDC: the edge is level with or above the crown at TDC';
   return `Never opens: the edge is ${drop} below the crown at TDC, at or past the stroke`;

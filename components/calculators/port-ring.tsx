@@ -1,3 +1,5 @@
+import { useReaderLocale } from '@/components/format/reader-locale';
+import { formatDeg } from '@/lib/format/number-format';
 import { arc } from 'd3-shape'; // d3-shape takes radians: converted with lib/angle at the call
 import { cosDeg, degToRad, sinDeg } from '@/lib/angle';
 import type { PortTiming } from '@/lib/engine/port-events';
@@ -16,12 +18,13 @@ const HATCHES = ['', 'url(#port-hatch)', '', 'url(#port-hatch)', '', 'url(#port-
  * bands are numbered like the table beside it.
  */
 export function PortRing({ ports }: { ports: PortTiming[] }) {
+  const locale = useReaderLocale();
   const outer = 100;
   const band = Math.min(14, 70 / Math.max(ports.length, 1));
   const shape = arc<{ innerRadius: number; outerRadius: number; startAngle: number; endAngle: number }>().digits(3);
   const summary = ports
     .map((port) =>
-      port.opensDegATDC === null ? `${port.name} never opens` : `${port.name} open ${port.opensDegATDC.toFixed(1)}° to ${(port.closesDegATDC as number).toFixed(1)}°`,
+      port.opensDegATDC === null ? `${port.name} never opens` : `${port.name} open ${formatDeg(port.opensDegATDC, locale)} to ${formatDeg(port.closesDegATDC as number, locale)}`,
     )
     .join('; ');
   return (

@@ -1,3 +1,5 @@
+import { useReaderLocale } from '@/components/format/reader-locale';
+import { formatDeg } from '@/lib/format/number-format';
 import { cosDeg, sinDeg } from '@/lib/angle';
 import { signedTurnDeg } from '@/lib/engine/tdc-from-stops';
 import { svgRound } from './svg-round';
@@ -15,6 +17,7 @@ function point(deg: number, radius: number) {
  * the sweep across TDC between them and the midpoint where true TDC reads.
  */
 export function StopSketch({ stopACrankDeg, stopBCrankDeg, tdcCrankDeg }: StopSketchProps) {
+  const locale = useReaderLocale();
   const turn = signedTurnDeg(stopACrankDeg, stopBCrankDeg);
   const from = turn >= 0 ? stopACrankDeg : stopBCrankDeg;
   const sweep = Math.abs(turn);
@@ -23,7 +26,7 @@ export function StopSketch({ stopACrankDeg, stopBCrankDeg, tdcCrankDeg }: StopSk
   const tdc = point(tdcCrankDeg, R + 2);
   const tdcInner = point(tdcCrankDeg, R - 26);
   return (
-    <svg viewBox="-110 -110 220 220" className="h-auto w-full max-w-[16rem]" role="img" aria-label={`Wheel sketch: stops at ${stopACrankDeg.toFixed(1)}° and ${stopBCrankDeg.toFixed(1)}° in crank order, true TDC at ${tdcCrankDeg.toFixed(1)}°`}>
+    <svg viewBox="-110 -110 220 220" className="h-auto w-full max-w-[16rem]" role="img" aria-label={`Wheel sketch: stops at ${formatDeg(stopACrankDeg, locale)} and ${formatDeg(stopBCrankDeg, locale)} in crank order, true TDC at ${formatDeg(tdcCrankDeg, locale)}`}>
       <title>Stop readings on the wheel</title>
       <circle r={R} fill="none" stroke="currentColor" strokeWidth="1.2" className="text-steel-400" />
       {Array.from({ length: 36 }, (_, i) => i * 10).map((deg) => {

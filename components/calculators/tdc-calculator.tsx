@@ -7,7 +7,8 @@ import { ChoiceGroup, NumberField } from '@/components/generator/fields';
 import { crankOrderDeg, tdcFromStops, type TdcResult } from '@/lib/engine/tdc-from-stops';
 import { tdcSchema, type TdcInput, type TdcRequest } from '@/lib/engine/tdc-schema';
 import { tdcNoteHref } from '@/lib/engine/wheel-links';
-import { formatDeg } from './length-unit';
+import { formatDeg } from '@/lib/format/number-format';
+import { useReaderLocale } from '@/components/format/reader-locale';
 import { ResultFigure, ResultPanel, WaitingForInput } from './result-panel';
 import { StopSketch } from './stop-sketch';
 import { useLiveResult } from './use-live-result';
@@ -84,11 +85,12 @@ export function TdcCalculator() {
 }
 
 function TdcAnswer({ result }: { result: TdcResult }) {
+  const locale = useReaderLocale();
   const reading =
     result.tdcReadingSide === null || result.tdcReadingSide === 'TDC'
-      ? formatDeg(result.tdcReadingDeg, 1)
-      : `${formatDeg(result.tdcReadingDeg, 1)} ${result.tdcReadingSide}`;
-  const amount = formatDeg(Math.abs(result.correctionDeg), 1);
+      ? formatDeg(result.tdcReadingDeg, locale, { places: 1 })
+      : `${formatDeg(result.tdcReadingDeg, locale, { places: 1 })} ${result.tdcReadingSide}`;
+  const amount = formatDeg(Math.abs(result.correctionDeg), locale, { places: 1 });
   const correction =
     result.correctionDeg === 0
       ? 'None: the wheel already reads 0 at TDC.'
@@ -99,8 +101,8 @@ function TdcAnswer({ result }: { result: TdcResult }) {
       <ResultFigure label="Correction" value={`${result.correctionDeg > 0 ? '+' : result.correctionDeg < 0 ? '−' : ''}${amount}`} detail={correction} testId="tdc-correction" />
       <ResultFigure
         label="Stop touches the piston at"
-        value={`${formatDeg(result.stopAngleDeg, 1)} either side`}
-        detail={`Sweep across TDC ${formatDeg(result.sweepDeg, 1)}, halved.`}
+        value={`${formatDeg(result.stopAngleDeg, locale, { places: 1 })} either side`}
+        detail={`Sweep across TDC ${formatDeg(result.sweepDeg, locale, { places: 1 })}, halved.`}
         testId="tdc-stop-angle"
       />
       <WheelLink href={tdcNoteHref(result)}>Put this on a wheel as a note</WheelLink>

@@ -1,4 +1,5 @@
 import { withUnit } from '@/lib/fields/range-text';
+import { formatDecimal, formatDecimalList } from '@/lib/format/number-format';
 import { TEMPLATE_FIELD_LIST, templateFields, type TemplateFieldName } from '@/lib/templates/template-fields';
 
 /** How each template field is named on screen (history, detail, list): its label in the field table. */
@@ -13,8 +14,11 @@ type Port = { name: string; opensCrankDeg: number; closesCrankDeg: number };
 
 const CHOICE_WORDS: Record<string, string> = { cw: 'clockwise', ccw: 'counter-clockwise' };
 
-/** A field's value as text: units from the field table, lists, and "—" for unknown. */
-export function formatFieldValue(field: string, value: unknown): string {
+/** Template figures are kept to a thousandth of their unit (a dial gauge's resolution in mm). */
+const SHOWN_PLACES = 3;
+
+/** A field's value as text in the reader's locale: units from the field table, lists, and "—" for unknown. */
+export function formatFieldValue(field: string, value: unknown, locale: string): string {
   if (value === null || value === undefined || value === '') return '—';
   const info = templateFields[field as TemplateFieldName];
   const unit = info?.unit ?? '';
@@ -22,8 +26,9 @@ export function formatFieldValue(field: string, value: unknown): string {
   if (info?.kind === 'choice') return CHOICE_WORDS[String(value)] ?? String(value);
   if (Array.isArray(value)) {
     if (value.length === 0) return '—';
-    if (unit === '') return (value as Port[]).map((p) => `${p.name} ${p.opensCrankDeg}°→${p.closesCrankDeg}°`).join('; ');
-    return withUnit(value.join(', '), unit);
+    const deg = (d: number) => `${formatDecimal(d, locale, { maxPlaces: SHOWN_PLACES })}°`;
+    if (unit === '') return (value as Port[]).map((p) => `${p.name} ${deg(p.opensCrankDeg)}→${deg(p.closesCrankDeg)}`).join('; ');
+    return withUnit(formatDecimalList(value as number[], locale, SHOWN_PLACES), unit);
   }
-  return typeof value === 'number' ? withUnit(value, unit) : String(value);
+  return typeof value === 'number' ? withUnit(formatDecimal(value, locale, { maxPlaces: SHOWN_PLACES }), unit) : String(value);
 }

@@ -2,12 +2,10 @@
 
 import { zodResolver } from '@hookform/resolvers/zod';
 import Link from 'next/link';
-import { useRouter } from 'next/navigation';
-import { useState } from 'react';
 import { FormProvider, useFieldArray, useForm, useFormContext, type UseFormRegister } from 'react-hook-form';
 import type { z } from 'zod';
 import { FormMessage, SubmitButton } from '@/components/account/form-controls';
-import { applyIssues, submitJson } from '@/components/account/submit-json';
+import { ConflictLink, useRecordSave } from '@/components/records/use-record-save';
 import { FieldErrorText, FormSection, LabelledField, SelectField, TextField, fieldId, inputClass, useFieldError } from '@/components/generator/fields';
 import type { Field } from '@/lib/fields/field';
 import type { Template } from '@/lib/templates/template';
@@ -161,25 +159,13 @@ function PortCell({ index, part, label, register }: { index: number; part: 'name
  * and says who saved in between, with a link to reload.
  */
 export function TemplateForm({ slug, template }: { slug: string; template: Template | null }) {
-  const router = useRouter();
   const form = useForm<Input, unknown, Output>({ resolver: zodResolver(templateFormSchema), defaultValues: defaults(template) });
-  const [outcome, setOutcome] = useState<{ tone: 'info' | 'error'; message: string; conflict?: boolean }>();
+  const { outcome, save } = useRecordSave({ collectionUrl: `/api/v1/workspaces/${slug}/templates`, record: template, answerKey: 'template', pageOf: (id) => `/w/${slug}/templates/${id}`, setError: form.setError });
 
-  const onValid = async (values: Output) => {
-    const { version, ...fields } = values;
-    const result = template
-      ? await submitJson(`/api/v1/workspaces/${slug}/templates/${template.id}`, 'PATCH', { ...fields, version: version ?? template.version })
-      : await submitJson(`/api/v1/workspaces/${slug}/templates`, 'POST', fields);
-    if (result.status === 409) return setOutcome({ tone: 'error', message: String(result.body.error), conflict: true });
-    if (!result.ok) return setOutcome({ tone: 'error', message: applyIssues(result, form.setError) });
-    const saved = result.body.template as Template;
-    router.push(`/w/${slug}/templates/${saved.id}`);
-    router.refresh();
-  };
 
   return (
     <FormProvider {...form}>
-      <form noValidate onSubmit={form.handleSubmit(onValid)} aria-label={template ? 'Edit template' : 'New template'} className="space-y-4">
+      <form noValidate onSubmit={form.handleSubmit(save)} aria-label={template ? 'Edit template' : 'New template'} className="space-y-4">
         {SECTIONS.map((section) => (
           <FormSection key={section.title} title={section.title}>
             {runsOf(section.fields).map((run) =>
@@ -203,11 +189,7 @@ export function TemplateForm({ slug, template }: { slug: string; template: Templ
           >
             Cancel
           </Link>
-          {outcome?.conflict ? (
-            <a href={`/w/${slug}/templates/${template?.id}`} target="_blank" rel="noreferrer" className="text-sm text-gauge-700 underline">
-              Open the current version (your edits stay here)
-            </a>
-          ) : null}
+          <ConflictLink outcome={outcome} href={`/w/${slug}/templates/${template?.id}`} />
         </div>
         <FormMessage tone={outcome?.tone} message={outcome?.message} />
       </form>

@@ -44,7 +44,7 @@ export function TemplateHistory({ revisions, currentVersion, restoreUrl, canEdit
               {r.changes.map((c) => (
                 <li key={c.field}>
                   <span className="font-medium">{FIELD_LABELS[c.field as TemplateFieldName] ?? c.field}</span>:{' '}
-                  <del className="text-steel-500">{formatFieldValue(c.field, c.from)}</del> → <ins className="no-underline">{formatFieldValue(c.field, c.to)}</ins>
+                  <del className="text-steel-500">{formatFieldValue(c.field, c.from, dateFormat.locale)}</del> → <ins className="no-underline">{formatFieldValue(c.field, c.to, dateFormat.locale)}</ins>
                 </li>
               ))}
             </ul>

@@ -1,24 +1,16 @@
 import { BUILD_FIELD_LIST, type BuildFields } from '@/lib/builds/build-fields';
 import type { Build, BuildSend } from '@/lib/builds/build';
 import type { BuildResults } from '@/lib/builds/build-results';
+import type { VersionedRow } from '@/db/versioned-row';
 
 /**
  * A row of the builds table and its mapping to the record's fields, read from the field
  * table: each field's `column`, lists stored as JSON text.
  */
-export type BuildRow = Record<string, unknown> & {
-  id: number;
-  workspace_id: number;
+export type BuildRow = Record<string, unknown> & VersionedRow & {
   finished_on: string | null;
   handed_over_on: string | null;
   results_json: string;
-  version: number;
-  created_by: number | null;
-  updated_by: number | null;
-  created_at: string;
-  updated_at: string;
-  created_by_name?: string | null;
-  updated_by_name?: string | null;
   technician_name?: string | null;
   template_name?: string | null;
 };

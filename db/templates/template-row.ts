@@ -2,23 +2,14 @@ import { TEMPLATE_SORT_KEYS, type TemplateSortKey } from '@/lib/templates/list-q
 import type { Template } from '@/lib/templates/template';
 import { TEMPLATE_FIELD_LIST, type TemplateFieldName } from '@/lib/templates/template-fields';
 import type { TemplateFields } from '@/lib/templates/template-schema';
+import type { VersionedRow } from '@/db/versioned-row';
 
 /**
  * A row of the templates table, joined with the names of its creator and last
- * editor: the bookkeeping columns below, plus one column per field of the field
+ * editor: the bookkeeping columns of db/versioned-row.ts, plus one column per field of the field
  * table (lib/templates/template-fields.ts), read and written through `column`.
  */
-export type TemplateRow = {
-  id: number;
-  workspace_id: number;
-  version: number;
-  created_by: number | null;
-  updated_by: number | null;
-  created_at: string;
-  updated_at: string;
-  created_by_name?: string | null;
-  updated_by_name?: string | null;
-} & Record<string, unknown>;
+export type TemplateRow = VersionedRow & Record<string, unknown>;
 
 /** API field → SQL column, from the field table; the whitelist for sorting and for writes. */
 export const FIELD_COLUMNS = Object.fromEntries(TEMPLATE_FIELD_LIST.map((field) => [field.key, field.column!])) as Record<TemplateFieldName, string>;

@@ -2,6 +2,7 @@ import type { SheetRequestInput } from '@/lib/sheet/sheet-request';
 import type { Template } from '@/lib/templates/template';
 import { availableSheetKinds, templateSheetRequest, type TemplateSheetKind } from '@/lib/templates/template-sheet';
 import type { Build } from './build';
+import { SHEET_NUMERALS_LOCALE } from '@/lib/format/number-format';
 import { signedDegText } from './customer-copy';
 
 /**
@@ -22,7 +23,7 @@ export function buildSheetRequest(template: Template, build: Build, kind: Templa
     kind,
   );
   if (!request) return null;
-  const note = build.tdc ? `TDC found with a positive stop: pointer corrected by ${signedDegText(build.tdc.correctionDeg)}` : template.description;
+  const note = build.tdc ? `TDC found with a positive stop: pointer corrected by ${signedDegText(build.tdc.correctionDeg, SHEET_NUMERALS_LOCALE)}` : template.description;
   return { ...request, note: note.slice(0, 200) };
 }
 

@@ -1,11 +1,13 @@
 import type { Build } from './build';
 import { buildFields, type BuildStatus } from './build-fields';
 import { DEFAULT_DATE_FORMAT, formatDate, type DateFormat } from '@/lib/format/date-format';
+import { formatDecimal } from '@/lib/format/number-format';
 
 /**
  * The words and figures of the customer's copy of a build record, in the order the page
  * shows them: plain strings, so the PDF only lays them out. Angles to 0.1°, lengths to
- * 0.01 mm (what a dial gauge and a printed wheel resolve; common practice).
+ * 0.01 mm (what a dial gauge and a printed wheel resolve; common practice), written in the
+ * reader's locale (lib/format/number-format.ts).
  */
 
 export type CopyRow = { label: string; value: string };
@@ -45,39 +47,40 @@ export const CAUTIONS = [
   'The engine maker’s manual and local regulations come first.',
 ];
 
-export function degText(value: number | null | undefined, suffix = '°'): string {
-  return value === null || value === undefined ? '—' : `${value.toFixed(1)}${suffix}`;
+export function degText(value: number | null | undefined, locale: string, suffix = '°'): string {
+  return value === null || value === undefined ? '—' : `${formatDecimal(value, locale, { places: 1 })}${suffix}`;
 }
 
-export function signedDegText(value: number | null | undefined): string {
+/** "+1.5°", "−0.5°", "±0.0°": a correction or a deviation, its sign always written (a true minus sign). */
+export function signedDegText(value: number | null | undefined, locale: string): string {
   if (value === null || value === undefined) return '—';
-  const rounded = Number(value.toFixed(1));
-  return `${rounded > 0 ? '+' : rounded < 0 ? '−' : '±'}${Math.abs(rounded).toFixed(1)}°`;
+  const rounded = Math.round(value * 10) / 10;
+  return `${rounded > 0 ? '+' : rounded < 0 ? '−' : '±'}${formatDecimal(Math.abs(rounded), locale, { places: 1 })}°`;
 }
 
-export function mmText(value: number | null | undefined): string {
-  return value === null || value === undefined ? '—' : `${value.toFixed(2)} mm`;
+export function mmText(value: number | null | undefined, locale: string): string {
+  return value === null || value === undefined ? '—' : `${formatDecimal(value, locale, { places: 2 })} mm`;
 }
 
-function tdcRows(build: Build): CopyRow[] {
+function tdcRows(build: Build, locale: string): CopyRow[] {
   if (!build.stops || !build.tdc) return [{ label: 'Method', value: 'Not recorded' }];
   const { readingADeg, readingBDeg, numbering, readingASide, readingBSide } = build.stops;
   const side = (s: string | undefined) => (numbering === 'split' && s ? ` ${s}` : '');
   const tdcSide = build.tdc.tdcReadingSide && build.tdc.tdcReadingSide !== 'TDC' ? ` ${build.tdc.tdcReadingSide}` : '';
   return [
     { label: 'Method', value: `Positive stop, ${numbering === 'full' ? '0–360°' : '0–180° each side'} wheel` },
-    { label: 'Stop readings', value: `A ${degText(readingADeg)}${side(readingASide)}, B ${degText(readingBDeg)}${side(readingBSide)}` },
-    { label: 'TDC found at', value: `${degText(build.tdc.tdcReadingDeg)}${tdcSide} on the wheel` },
-    { label: 'Pointer corrected by', value: signedDegText(build.tdc.correctionDeg) },
+    { label: 'Stop readings', value: `A ${degText(readingADeg, locale)}${side(readingASide)}, B ${degText(readingBDeg, locale)}${side(readingBSide)}` },
+    { label: 'TDC found at', value: `${degText(build.tdc.tdcReadingDeg, locale)}${tdcSide} on the wheel` },
+    { label: 'Pointer corrected by', value: signedDegText(build.tdc.correctionDeg, locale) },
   ];
 }
 
-function timingRows(build: Build): CopyRow[] {
+function timingRows(build: Build, locale: string): CopyRow[] {
   if (build.timingSetDegBTDC === null && build.timingSetMmBTDC === null) return [{ label: 'Ignition timing', value: 'Not recorded' }];
   const rows: CopyRow[] = [
-    { label: 'Set at', value: `${degText(build.timingSetDegBTDC, '° BTDC')}  =  ${build.timingSetMmBTDC === null ? '—' : `${mmText(build.timingSetMmBTDC)} BTDC`}` },
+    { label: 'Set at', value: `${degText(build.timingSetDegBTDC, locale, '° BTDC')}  =  ${build.timingSetMmBTDC === null ? '—' : `${mmText(build.timingSetMmBTDC, locale)} BTDC`}` },
   ];
-  if (build.advanceDeg !== null) rows.push({ label: 'Specified', value: degText(build.advanceDeg, '° BTDC') });
+  if (build.advanceDeg !== null) rows.push({ label: 'Specified', value: degText(build.advanceDeg, locale, '° BTDC') });
   if (build.timingCheck)
     rows.push({
       label: 'Checked',
@@ -86,15 +89,15 @@ function timingRows(build: Build): CopyRow[] {
   return rows;
 }
 
-function portRows(build: Build): CopyPortRow[] {
+function portRows(build: Build, locale: string): CopyPortRow[] {
   return build.ports.map((p) => ({
     name: p.name,
-    heightMm: mmText(p.heightMm),
-    opens: p.status === 'opens' ? degText(p.opensDegATDC, '° ATDC') : '—',
-    closes: p.status === 'opens' ? degText(p.closesDegATDC, '° ATDC') : '—',
-    duration: p.status === 'never-opens' ? 'never opens' : degText(p.durationDeg),
-    target: p.targetDurationDeg === undefined ? '—' : degText(p.targetDurationDeg),
-    deviation: signedDegText(p.deviationDeg),
+    heightMm: mmText(p.heightMm, locale),
+    opens: p.status === 'opens' ? degText(p.opensDegATDC, locale, '° ATDC') : '—',
+    closes: p.status === 'opens' ? degText(p.closesDegATDC, locale, '° ATDC') : '—',
+    duration: p.status === 'never-opens' ? 'never opens' : degText(p.durationDeg, locale),
+    target: p.targetDurationDeg === undefined ? '—' : degText(p.targetDurationDeg, locale),
+    deviation: signedDegText(p.deviationDeg, locale),
     verdict: p.withinTolerance === undefined ? '' : p.withinTolerance ? 'within' : 'OUTSIDE',
   }));
 }
@@ -110,31 +113,32 @@ function jobRows(build: Build): CopyRow[] {
   return rows;
 }
 
-function otherRows(build: Build): CopyRow[] {
+function otherRows(build: Build, locale: string): CopyRow[] {
   const rows: CopyRow[] = [];
-  if (build.deckMm !== null) rows.push({ label: buildFields.deckMm.label, value: mmText(build.deckMm) });
-  if (build.squishMm !== null) rows.push({ label: buildFields.squishMm.label, value: mmText(build.squishMm) });
+  if (build.deckMm !== null) rows.push({ label: buildFields.deckMm.label, value: mmText(build.deckMm, locale) });
+  if (build.squishMm !== null) rows.push({ label: buildFields.squishMm.label, value: mmText(build.squishMm, locale) });
   for (const m of build.otherMeasurements) rows.push({ label: m.name, value: [m.value, m.unit].filter(Boolean).join(' ') });
   return rows;
 }
 
 /** `dateFormat` writes the copy's date for its reader (DEVELOPERS.md, "Dates"). */
 export function customerCopy(build: Build, shopName: string, dateFormat: DateFormat = DEFAULT_DATE_FORMAT): CustomerCopy {
+  const { locale } = dateFormat;
   const notes = build.notes.length > COPY_NOTES_MAX ? `${build.notes.slice(0, COPY_NOTES_MAX).trimEnd()} … (the full notes are kept in the shop’s record)` : build.notes;
   const portNotes = build.ports.filter((p) => p.status !== 'opens').map((p) => `${p.name}: ${p.note}`);
-  if (build.blowdownDeg !== null) portNotes.unshift(`Blowdown (exhaust opens before the transfers): ${degText(build.blowdownDeg)}`);
+  if (build.blowdownDeg !== null) portNotes.unshift(`Blowdown (exhaust opens before the transfers): ${degText(build.blowdownDeg, locale)}`);
   return {
     shopName,
     title: 'Engine timing record',
     reference: `Record ${build.id}, version ${build.version}`,
     date: formatDate(build.handedOverOn ?? build.finishedOn ?? build.openedOn, dateFormat),
     job: jobRows(build),
-    tdc: tdcRows(build),
-    timing: timingRows(build),
-    ports: portRows(build),
+    tdc: tdcRows(build, locale),
+    timing: timingRows(build, locale),
+    ports: portRows(build, locale),
     portNotes,
-    toleranceText: `Deviation is the measured duration minus the target; within means no more than ±${build.toleranceDeg}° (the shop’s tolerance; ±2° is common practice).`,
-    other: otherRows(build),
+    toleranceText: `Deviation is the measured duration minus the target; within means no more than ±${formatDecimal(build.toleranceDeg, locale, { maxPlaces: 1 })}° (the shop’s tolerance; ±2° is common practice).`,
+    other: otherRows(build, locale),
     notes,
     cautions: CAUTIONS,
   };

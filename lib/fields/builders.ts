@@ -1,6 +1,6 @@
 import { z } from 'zod';
 import { Field, type FieldOptions } from './field';
-import { rangedNumber } from './ranged-number';
+import { rangedNumber, rangedNumberFromText } from './ranged-number';
 
 /** Builders for each kind of field; each returns a required field, made optional/nullable/defaulted by its methods. */
 
@@ -12,6 +12,15 @@ export function numberField(options: FieldOptions & Range & { unit?: string }): 
   return new Field(
     { ...options, kind: 'number', unit, required: true },
     rangedNumber({ label: options.label, min: options.min, max: options.max, unit, hint: options.hint }),
+  );
+}
+
+/** A whole number read from a URL's query string (a page, a page size, an id); no `max` means no upper limit. */
+export function queryNumberField(options: FieldOptions & { min: number; max?: number }): Field<z.ZodCoercedNumber<unknown>> {
+  const max = options.max ?? Number.POSITIVE_INFINITY;
+  return new Field(
+    { ...options, kind: 'number', unit: '', required: true, max },
+    rangedNumberFromText({ label: options.label, min: options.min, max, unit: '', hint: options.hint, whole: true }),
   );
 }
 

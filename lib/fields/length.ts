@@ -1,3 +1,4 @@
+import { formatDecimal } from '@/lib/format/number-format';
 import { rangeMessage, type RangeProblem } from './range-text';
 
 /**
@@ -33,9 +34,9 @@ export function lengthText(mm: number, unit: LengthUnit): string {
   return String(Number(mmToUnit(mm, unit).toFixed(SHOWN_PLACES[unit])));
 }
 
-/** A length for reading: "12.700 mm", "0.5000 in". */
-export function formatLength(mm: number, unit: LengthUnit): string {
-  return `${mmToUnit(mm, unit).toFixed(SHOWN_PLACES[unit])} ${unit}`;
+/** A length for reading in the reader's locale: "12.700 mm", "0.5000 in" (en-GB), "12,700 mm" (de-DE). */
+export function formatLength(mm: number, unit: LengthUnit, locale: string): string {
+  return `${formatDecimal(mmToUnit(mm, unit), locale, { places: SHOWN_PLACES[unit] })} ${unit}`;
 }
 
 export type RangeMm = { readonly min: number; readonly max: number };

@@ -16,7 +16,7 @@ import { stripLayout } from './strip-layout';
 import { formatDeg } from './scale-marks';
 import { howToSteps } from './how-to';
 
-/** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"). */
+/** `date` is printed in the title block in `dateFormat` (the reader's locale and time zone; DEVELOPERS.md, "Dates"), and the title block's lengths in its locale ("Numbers"). */
 export type BuildOptions = { date?: Date; dateFormat?: DateFormat; marginMm?: number };
 
 /** One scale piece (wheel, ring, strip rows, table chunks) plus what the title block should say about it. */
@@ -186,14 +186,16 @@ function sheetNotes(layout: ScaleLayout): string[] {
 /** Pieces, info panel and their arrangement on one orientation, before anything is placed. */
 function planSheet(request: SheetRequest, options: BuildOptions) {
   const page: PageSpec = { sizeMm: pageSizeMm(request.paper, request.orientation), marginMm: Math.max(options.marginMm ?? DEFAULT_MARGIN_MM, MIN_MARGIN_MM) };
-  const title = sheetTitle(request);
+  const dateFormat = options.dateFormat ?? DEFAULT_DATE_FORMAT;
+  const title = sheetTitle(request, dateFormat.locale);
   const contentFor = (layout?: ScaleLayout): InfoContent => ({
     title,
     request,
     notes: layout ? sheetNotes(layout) : [],
     howTo: layout?.howToOnPiece ? [] : howToSteps(request),
     lines: titleBlockLines(request, {
-      date: formatDate(options.date ?? new Date(), options.dateFormat ?? DEFAULT_DATE_FORMAT),
+      date: formatDate(options.date ?? new Date(), dateFormat),
+      locale: dateFormat.locale,
       ...(layout?.keptLevels ? { keptLevels: layout.keptLevels } : {}),
       ...(layout?.stripLengthMm !== undefined ? { stripLengthMm: layout.stripLengthMm } : {}),
       ...(layout?.strobeSummary ? { strobeSummary: layout.strobeSummary } : {}),

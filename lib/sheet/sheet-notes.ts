@@ -3,6 +3,7 @@ import type { SheetKind, SheetRequest } from './sheet-request';
 import { describeCorrection } from './printer-correction';
 import type { GraduationLevel } from './drawing';
 import { btdcToCrankDeg, wheelAngleDeg } from './scale-direction';
+import { formatMm } from '@/lib/format/number-format';
 
 /** The words printed on every sheet: title block lines, the print line, cautions and the "which way" note. */
 
@@ -28,40 +29,44 @@ const KIND_NAMES: Record<SheetKind, string> = {
   check: 'Scale check',
 };
 
-export function mm(value: number): string {
-  return `${Math.round(value * 100) / 100} mm`;
+/**
+ * A length in the title block, to 0.01 mm in the sheet's locale ("120.5 mm", "120,5 mm"; DEVELOPERS.md, "Numbers").
+ * Degrees stay with '.', like the scale's own numerals.
+ */
+function mm(value: number, locale: string): string {
+  return formatMm(value, locale, { maxPlaces: 2 });
 }
 
-export function defaultTitle(req: SheetRequest): string {
-  if (req.kind === 'ring') return `${KIND_NAMES.ring} ${mm(req.innerDiameterMm ?? 0)} / ${mm(req.outerDiameterMm ?? 0)}`;
+function defaultTitle(req: SheetRequest, locale: string): string {
+  if (req.kind === 'ring') return `${KIND_NAMES.ring} ${mm(req.innerDiameterMm ?? 0, locale)} / ${mm(req.outerDiameterMm ?? 0, locale)}`;
   if (req.kind === 'check') return `${KIND_NAMES.check} sheet`;
-  return `${KIND_NAMES[req.kind]} ${mm(req.diameterMm ?? 0)}`;
+  return `${KIND_NAMES[req.kind]} ${mm(req.diameterMm ?? 0, locale)}`;
 }
 
-export function sheetTitle(req: SheetRequest): string {
-  return req.title.trim() || defaultTitle(req);
+export function sheetTitle(req: SheetRequest, locale: string): string {
+  return req.title.trim() || defaultTitle(req, locale);
 }
 
-function dimensionsLine(req: SheetRequest, stripLengthMm?: number): string {
+function dimensionsLine(req: SheetRequest, locale: string, stripLengthMm?: number): string {
   switch (req.kind) {
     case 'wheel':
-      return `Disc diameter ${mm(req.diameterMm ?? 0)}${req.hubHoleMm > 0 ? ` · hub hole ${mm(req.hubHoleMm)}` : ''}`;
+      return `Disc diameter ${mm(req.diameterMm ?? 0, locale)}${req.hubHoleMm > 0 ? ` · hub hole ${mm(req.hubHoleMm, locale)}` : ''}`;
     case 'ring':
-      return `Ring inner diameter ${mm(req.innerDiameterMm ?? 0)} (ticks read here) · outer ${mm(req.outerDiameterMm ?? 0)}`;
+      return `Ring inner diameter ${mm(req.innerDiameterMm ?? 0, locale)} (ticks read here) · outer ${mm(req.outerDiameterMm ?? 0, locale)}`;
     case 'strip':
-      return `Rim diameter ${mm(req.diameterMm ?? 0)} + paper ${mm(req.paperThicknessMm)} → strip ${stripLengthMm === undefined ? '' : mm(stripLengthMm)} · width ${mm(req.stripWidthMm)}${windowWords(req, stripLengthMm)}`;
+      return `Rim diameter ${mm(req.diameterMm ?? 0, locale)} + paper ${mm(req.paperThicknessMm, locale)} → strip ${stripLengthMm === undefined ? '' : mm(stripLengthMm, locale)} · width ${mm(req.stripWidthMm, locale)}${windowWords(req, locale, stripLengthMm)}`;
     case 'scribe':
-      return `Rim diameter ${mm(req.diameterMm ?? 0)} · ${req.fromDeg}° to ${req.toDeg}° every ${req.stepDeg}°`;
+      return `Rim diameter ${mm(req.diameterMm ?? 0, locale)} · ${req.fromDeg}° to ${req.toDeg}° every ${req.stepDeg}°`;
     case 'check':
       return 'Scale check bars and ID-1 card outline only';
   }
 }
 
 /** A window strip's own length: its crank span of the whole strip's π·(D + t). */
-function windowWords(req: SheetRequest, stripLengthMm?: number): string {
+function windowWords(req: SheetRequest, locale: string, stripLengthMm?: number): string {
   if (!req.windowCrankDeg || stripLengthMm === undefined) return '';
   const span = windowSpanDeg(req.windowCrankDeg);
-  return ` · window ${Math.round(span * 100) / 100}° long = ${mm((stripLengthMm * span) / 360)}`;
+  return ` · window ${Math.round(span * 100) / 100}° long = ${mm((stripLengthMm * span) / 360, locale)}`;
 }
 
 export function carrierLine(req: SheetRequest): string {
@@ -76,12 +81,12 @@ export function rotationWord(req: SheetRequest): string {
 
 export function titleBlockLines(
   req: SheetRequest,
-  facts: { date: string; keptLevels?: GraduationLevel[]; stripLengthMm?: number; strobeSummary?: string },
+  facts: { date: string; locale: string; keptLevels?: GraduationLevel[]; stripLengthMm?: number; strobeSummary?: string },
 ): string[] {
   // The scale-check sheet has no scale: carrier, rotation and numbering mean nothing there.
-  if (req.kind === 'check') return [dimensionsLine(req), `Date ${facts.date} · paper ${req.paper} ${req.orientation}`, `Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`, ...(req.note ? [`Note: ${req.note}`] : [])];
+  if (req.kind === 'check') return [dimensionsLine(req, facts.locale), `Date ${facts.date} · paper ${req.paper} ${req.orientation}`, `Printer profile: ${req.printerProfileName?.trim() || 'none'} · correction ${describeCorrection(req)}`, ...(req.note ? [`Note: ${req.note}`] : [])];
   const lines = [
-    dimensionsLine(req, facts.stripLengthMm),
+    dimensionsLine(req, facts.locale, facts.stripLengthMm),
     carrierLine(req),
     `Rotation: ${rotationWord(req)} as seen from the side the scale is on`,
     `Numbering: ${req.numbering === 'split' ? 'split (0 at TDC to 180 at BDC both ways, BTDC / ATDC)' : 'full (0–359 in crank order)'}`,

@@ -1,20 +1,10 @@
+import { diffFields } from '@/lib/fields/field-diff';
 import { TEMPLATE_FIELD_NAMES, type TemplateFields } from './template-schema';
 import type { FieldChange } from './template';
 
-function sameValue(a: unknown, b: unknown): boolean {
-  return JSON.stringify(a ?? null) === JSON.stringify(b ?? null);
-}
-
 /** The fields that differ between two states of a template, in schema order, old → new. */
 export function diffTemplateFields(before: Partial<TemplateFields>, after: Partial<TemplateFields>): FieldChange[] {
-  const changes: FieldChange[] = [];
-  for (const field of TEMPLATE_FIELD_NAMES) {
-    if (!(field in after)) continue;
-    const from = before[field] ?? null;
-    const to = after[field] ?? null;
-    if (!sameValue(from, to)) changes.push({ field, from, to });
-  }
-  return changes;
+  return diffFields(TEMPLATE_FIELD_NAMES, before, after);
 }
 
 /** The changes that record a template's creation: every field that is set, from nothing. */

@@ -40,6 +40,8 @@ test('templates: the Updated column shows whole at 1280 px, the form has Cancel,
 
   // "piston port" finds the demo engines described as "piston-port".
   await page.getByLabel('Search name and engine').fill('piston port');
+  // The search reaches the URL after a pause; wait for it, or it would replace the template page opened below.
+  await expect(page).toHaveURL(/[?&]q=piston\+port/);
   await expect(page.getByRole('status').filter({ hasText: /^\d+ templates?$/ })).not.toHaveText('0 templates');
 
   // A seeded template with port targets offers the full-circle wheel that shows them, as a link and as a PDF.

@@ -14,3 +14,15 @@ export async function callRoute<P extends Record<string, string>>(
   const text = await response.text();
   return { status: response.status, json: text ? JSON.parse(text) : {} };
 }
+
+/** A request as a browser's fetch sends JSON: the content type only when there is a body. */
+export function jsonRequest(method: string, url: string, body?: unknown): Request {
+  return new Request(url, {
+    method,
+    headers: body === undefined ? {} : { 'content-type': 'application/json' },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
+}
+
+/** The second argument Next hands a route handler: its dynamic segments, as a promise. */
+export const routeParams = <T>(value: T) => ({ params: Promise.resolve(value) });

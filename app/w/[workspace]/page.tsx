@@ -103,7 +103,7 @@ export default async function WorkspaceHomePage({ params, searchParams }: Props)
             <div id="activity" className="space-y-2">
               <h3 className="font-medium">Recent activity</h3>
               <ActivityList
-                lines={audit.map((record) => activityLine(record, workspace.slug))}
+                lines={audit.map((record) => activityLine(record, workspace.slug, dateFormat.locale))}
                 group={group}
                 dateFormat={dateFormat}
                 hrefFor={(g) => (g === 'all' ? `/w/${workspace.slug}#activity` : `/w/${workspace.slug}?activity=${g}#activity`)}

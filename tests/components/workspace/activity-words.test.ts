@@ -27,7 +27,7 @@ afterEach(() => {
 });
 
 async function lines() {
-  return (await workspaceActivity(world.shop.id)).map((record) => activityLine(record, world.shop.slug));
+  return (await workspaceActivity(world.shop.id)).map((record) => activityLine(record, world.shop.slug, 'en-GB'));
 }
 
 describe('workspace activity in words', () => {
@@ -88,9 +88,15 @@ describe('workspace activity in words', () => {
 describe('build records in the activity', () => {
   it('says who opened and who edited which record, old → new, and links to it', () => {
     const base = { source: 'build-revision' as const, at: '2026-12-03T08:00:00.000Z', actorName: 'Teo Lindqvist', buildId: 7, buildName: 'Jo Harker, 125 scooter' };
-    const opened = activityLine({ ...base, id: 1, action: 'create', changes: [] }, 'harbour-lane');
+    const opened = activityLine({ ...base, id: 1, action: 'create', changes: [] }, 'harbour-lane', 'en-GB');
     expect(opened).toMatchObject({ group: 'builds', text: 'Teo Lindqvist opened the build record Jo Harker, 125 scooter', href: '/w/harbour-lane/builds/7' });
-    const edited = activityLine({ ...base, id: 2, action: 'update', changes: [{ field: 'customerPhone', from: '', to: '0400 000' }] }, 'harbour-lane');
+    const edited = activityLine({ ...base, id: 2, action: 'update', changes: [{ field: 'customerPhone', from: '', to: '0400 000' }] }, 'harbour-lane', 'en-GB');
     expect(edited.text).toBe('Teo Lindqvist edited the build record Jo Harker, 125 scooter: customer phone — → 0400 000');
+  });
+
+  it('writes changed figures in the reader’s locale (de-DE: decimal comma, CLDR via Node’s Intl)', () => {
+    const base = { source: 'build-revision' as const, at: '2026-12-03T08:00:00.000Z', actorName: 'Teo Lindqvist', buildId: 7, buildName: 'Jo Harker, 125 scooter' };
+    const edited = activityLine({ ...base, id: 3, action: 'update', changes: [{ field: 'squishMm', from: 1.2, to: 0.95 }] }, 'harbour-lane', 'de-DE');
+    expect(edited.text).toBe('Teo Lindqvist edited the build record Jo Harker, 125 scooter: squish clearance 1,2 → 0,95');
   });
 });

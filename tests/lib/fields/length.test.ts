@@ -66,8 +66,10 @@ describe('lengthText / formatLength', () => {
     expect(lengthText(Number.NaN, 'mm')).toBe('');
   });
 
-  it('formats for reading with 3 places in mm and 4 in inches', () => {
-    expect(formatLength(12.7, 'mm')).toBe('12.700 mm');
-    expect(formatLength(12.7, 'in')).toBe('0.5000 in');
+  it('formats for reading with 3 places in mm and 4 in inches, in the reader’s locale', () => {
+    expect(formatLength(12.7, 'mm', 'en-GB')).toBe('12.700 mm');
+    expect(formatLength(12.7, 'in', 'en-GB')).toBe('0.5000 in');
+    // de-DE writes a decimal comma (CLDR, through Node's Intl); 25.4 mm per inch exactly (NIST).
+    expect(formatLength(12.7, 'in', 'de-DE')).toBe('0,5000 in');
   });
 });

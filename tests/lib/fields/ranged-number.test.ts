@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { rangedNumber } from '@/lib/fields/ranged-number';
+import { rangedNumber, rangedNumberFromText } from '@/lib/fields/ranged-number';
 
 const messageOf = (result: { success: boolean; error?: { issues: Array<{ message: string }> } }) => result.error?.issues[0]?.message;
 
@@ -38,5 +38,19 @@ describe('rangedNumber', () => {
   it('writes a unitless range plainly', () => {
     const scale = rangedNumber({ label: 'Printer scale X', min: 0.9, max: 1.1, unit: '' });
     expect(messageOf(scale.safeParse(2))).toBe('Printer scale X must be at most 1.1 (allowed 0.9–1.1)');
+  });
+
+  it('asks for a whole number when the field counts, and reads text from a query string', () => {
+    const pageSize = rangedNumberFromText({ label: 'Page size', min: 1, max: 100, unit: '', whole: true });
+    expect(pageSize.safeParse('25')).toMatchObject({ success: true, data: 25 });
+    expect(messageOf(pageSize.safeParse('2.5'))).toBe('Page size must be a whole number (allowed 1–100)');
+    expect(messageOf(pageSize.safeParse('lots'))).toBe('Page size must be a whole number, 1–100');
+    expect(messageOf(pageSize.safeParse('0'))).toBe('Page size must be at least 1 (allowed 1–100)');
+  });
+
+  it('writes a range with no upper limit as "or more" and checks no upper limit', () => {
+    const page = rangedNumberFromText({ label: 'Page', min: 1, max: Number.POSITIVE_INFINITY, unit: '', whole: true });
+    expect(page.safeParse('100000')).toMatchObject({ success: true, data: 100000 });
+    expect(messageOf(page.safeParse('-3'))).toBe('Page must be at least 1 (allowed 1 or more)');
   });
 });

@@ -24,6 +24,23 @@ describe('the sheet date', () => {
   });
 });
 
+describe('the title block figures', () => {
+  it('write lengths in the sheet\'s locale and keep degrees, like the scale\'s numerals, with a decimal point', () => {
+    // de-DE writes a decimal comma (CLDR, through Node's Intl); DEVELOPERS.md, "Numbers", says which figures follow it.
+    const words = (locale: string) =>
+      parseSvg(renderSvg(buildDrawing(req({ kind: 'wheel', diameterMm: 118.5, hubHoleMm: 12.25, advanceMarksDeg: [17.5] }), { date: FIXED_DATE, dateFormat: { locale, timeZone: 'UTC' } })))
+        .all('text')
+        .map((t) => t.textContent)
+        .join(' ');
+    const german = words('de-DE');
+    expect(german).toContain('Degree wheel 118,5 mm');
+    expect(german).toContain('Disc diameter 118,5 mm · hub hole 12,25 mm');
+    expect(german).toContain('Advance marks: 17.5° BTDC');
+    const english = words('en-GB');
+    expect(english).toContain('Disc diameter 118.5 mm · hub hole 12.25 mm');
+  });
+});
+
 describe('every sheet says what it is and how to print it', () => {
   it.each(['wheel', 'ring', 'strip', 'scribe', 'check'] as const)('%s: title block, print line, cautions and which-way note', (kind) => {
     const { words } = sheetText({

@@ -95,12 +95,16 @@ describe('the template field table', () => {
       'staticAdvanceDeg',
       'advanceMarksDeg',
     ]);
-    expect(formatFieldValue('boreMm', 40)).toBe('40 mm');
-    expect(formatFieldValue('staticAdvanceDeg', 17)).toBe('17° BTDC');
-    expect(formatFieldValue('advanceMarksDeg', [16, 18])).toBe('16, 18° BTDC');
-    expect(formatFieldValue('rotation', 'ccw')).toBe('counter-clockwise');
-    expect(formatFieldValue('archived', false)).toBe('no');
-    expect(formatFieldValue('portTargets', [{ name: 'exhaust', opensCrankDeg: 92, closesCrankDeg: 268 }])).toBe('exhaust 92°→268°');
-    expect(formatFieldValue('faceDiameterMm', null)).toBe('—');
+    expect(formatFieldValue('boreMm', 40, 'en-GB')).toBe('40 mm');
+    expect(formatFieldValue('staticAdvanceDeg', 17, 'en-GB')).toBe('17° BTDC');
+    expect(formatFieldValue('advanceMarksDeg', [16, 18], 'en-GB')).toBe('16, 18° BTDC');
+    expect(formatFieldValue('rotation', 'ccw', 'en-GB')).toBe('counter-clockwise');
+    expect(formatFieldValue('archived', false, 'en-GB')).toBe('no');
+    expect(formatFieldValue('portTargets', [{ name: 'exhaust', opensCrankDeg: 92, closesCrankDeg: 268 }], 'en-GB')).toBe('exhaust 92°→268°');
+    expect(formatFieldValue('faceDiameterMm', null, 'en-GB')).toBe('—');
+    // de-DE writes a decimal comma (CLDR, via Node's Intl); a list of such numbers is then split by semicolons.
+    expect(formatFieldValue('boreMm', 40.25, 'de-DE')).toBe('40,25 mm');
+    expect(formatFieldValue('advanceMarksDeg', [16, 18.5], 'de-DE')).toBe('16; 18,5° BTDC');
+    expect(formatFieldValue('portTargets', [{ name: 'exhaust', opensCrankDeg: 92.5, closesCrankDeg: 267.5 }], 'de-DE')).toBe('exhaust 92,5°→267,5°');
   });
 });

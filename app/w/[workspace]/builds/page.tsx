@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { ListPageHeader } from '@/components/lists/list-page-header';
 import { buildPageData } from '@/app/lib/build-page-data';
 import { pageAction } from '@/app/lib/page-access';
 import { BuildList } from '@/components/builds/build-list';
@@ -17,27 +18,16 @@ export default async function BuildsPage({ params }: Props) {
   const { templates, technicians } = await buildPageData(access.workspace.id);
   return (
     <section className="space-y-4">
-      <div className="flex flex-wrap items-baseline justify-between gap-3">
-        <div>
-          <h1 className="text-2xl font-bold">Build records</h1>
-          <p className="text-sm text-steel-600 dark:text-steel-300">
-            <Link href={`/w/${slug}`} className="underline">
-              {access.workspace.name}
-            </Link>{' '}
-            · one record per engine set up for a customer
-          </p>
-        </div>
-        <div className="flex gap-3 text-sm">
-          {can(access.role, 'build.edit') ? (
-            <Link href={`/w/${slug}/builds/new`} className="rounded-md bg-gauge-600 px-3 py-1.5 font-semibold text-white">
-              New record
-            </Link>
-          ) : null}
-          <a href={`/api/v1/workspaces/${slug}/builds/export`} className="rounded-md border border-steel-300 px-3 py-1.5">
-            Export CSV
-          </a>
-        </div>
-      </div>
+      <ListPageHeader title="Build records" workspace={{ slug, name: access.workspace.name }} tagline="one record per engine set up for a customer">
+        {can(access.role, 'build.edit') ? (
+          <Link href={`/w/${slug}/builds/new`} className="rounded-md bg-gauge-600 px-3 py-1.5 font-semibold text-white">
+            New record
+          </Link>
+        ) : null}
+        <a href={`/api/v1/workspaces/${slug}/builds/export`} className="rounded-md border border-steel-300 px-3 py-1.5">
+          Export CSV
+        </a>
+      </ListPageHeader>
       <BuildList slug={slug} technicians={technicians} templates={templates.map((t) => ({ id: t.id, name: t.name }))} dateFormat={await requestDateFormat()} />
     </section>
   );

@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
+import { ListPageHeader } from '@/components/lists/list-page-header';
 import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
 import { can } from '@/lib/access-policy';
@@ -17,32 +18,21 @@ export default async function TemplatesPage({ params }: Props) {
   const canImport = can(access.role, 'template.import');
   return (
     <section className="space-y-4">
-      <div className="flex flex-wrap items-baseline justify-between gap-3">
-        <div>
-          <h1 className="text-2xl font-bold">Engine templates</h1>
-          <p className="text-sm text-steel-600 dark:text-steel-300">
-            <Link href={`/w/${slug}`} className="underline">
-              {access.workspace.name}
-            </Link>{' '}
-            · measured once, printed by anyone in the workspace
-          </p>
-        </div>
-        <div className="flex gap-3 text-sm">
-          {canEdit ? (
-            <Link href={`/w/${slug}/templates/new`} className="rounded-md bg-gauge-600 px-3 py-1.5 font-semibold text-white">
-              New template
-            </Link>
-          ) : null}
-          {canImport ? (
-            <Link href={`/w/${slug}/templates/import`} className="rounded-md border border-steel-300 px-3 py-1.5">
-              Import CSV
-            </Link>
-          ) : null}
-          <a href={`/api/v1/workspaces/${slug}/templates/export`} className="rounded-md border border-steel-300 px-3 py-1.5">
-            Export CSV
-          </a>
-        </div>
-      </div>
+      <ListPageHeader title="Engine templates" workspace={{ slug, name: access.workspace.name }} tagline="measured once, printed by anyone in the workspace">
+        {canEdit ? (
+          <Link href={`/w/${slug}/templates/new`} className="rounded-md bg-gauge-600 px-3 py-1.5 font-semibold text-white">
+            New template
+          </Link>
+        ) : null}
+        {canImport ? (
+          <Link href={`/w/${slug}/templates/import`} className="rounded-md border border-steel-300 px-3 py-1.5">
+            Import CSV
+          </Link>
+        ) : null}
+        <a href={`/api/v1/workspaces/${slug}/templates/export`} className="rounded-md border border-steel-300 px-3 py-1.5">
+          Export CSV
+        </a>
+      </ListPageHeader>
       <TemplateList slug={slug} dateFormat={await requestDateFormat()} />
     </section>
   );

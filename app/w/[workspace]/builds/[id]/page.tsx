@@ -9,7 +9,9 @@ import { ActionButton } from '@/components/templates/template-actions';
 import { findStoredBuild } from '@/db/builds/find-build';
 import { listBuildRevisions } from '@/db/builds/revisions';
 import { listBuildPhotos } from '@/db/builds/photos';
-import { PhotoUpload } from '@/components/templates/photo-upload';
+import { PhotoGallery } from '@/components/photos/photo-gallery';
+import { EditLink, RecordHeader } from '@/components/records/record-header';
+import { RecordSection } from '@/components/records/record-section';
 import { defaultProfileOf } from '@/db/printer-profiles';
 import { findTemplate } from '@/db/templates/find-template';
 import { can } from '@/lib/access-policy';
@@ -54,62 +56,54 @@ export default async function BuildPage({ params }: Props) {
 
   return (
     <article className="space-y-8">
-      <header className="flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <p className="text-sm">
-            <Link href={`/w/${slug}/builds`} className="text-gauge-700 underline dark:text-gauge-300">
-              Build records
-            </Link>
-          </p>
-          <h1 className="text-2xl font-bold">
+      <RecordHeader
+        back={{ href: `/w/${slug}/builds`, label: 'Build records' }}
+        title={
+          <>
             {build.customerName} <StatusBadge status={build.status} />
-          </h1>
-          <p className="text-steel-600 dark:text-steel-300">
-            {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
-          </p>
+          </>
+        }
+        actions={
+          <>
+            {canEdit ? <EditLink href={`/w/${slug}/builds/${build.id}/edit`} /> : null}
+            {canEdit
+              ? STATUS_ACTIONS.filter((a) => a.to !== build.status && !statusChangeProblem(build.status, a.to)).map((a) => (
+                  <ActionButton key={a.to} url={api} method="PATCH" body={{ version: build.version, status: a.to }} label={a.label} busyLabel="Saving…" />
+                ))
+              : null}
+            {can(access.role, 'build.delete') ? (
+              <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={{
+                  title: `Delete the record of ${build.customerName}?`,
+                  message: `The build record of ${build.customerName} is deleted with its history and sends. This cannot be undone.`,
+                  confirmLabel: 'Delete record',
+                  danger: true,
+                }} after={`/w/${slug}/builds`} />
+            ) : null}
+          </>
+        }
+      >
+        <p className="text-steel-600 dark:text-steel-300">
+          {[build.engineDescription, build.engineNumber && `engine ${build.engineNumber}`, build.frameNumber && `frame ${build.frameNumber}`].filter(Boolean).join(' · ')}
+        </p>
+        <p className="text-xs text-steel-500">
+          Opened {formatDate(build.openedOn, dateFormat)}
+          {build.finishedOn ? ` · finished ${formatDate(build.finishedOn, dateFormat)}` : ''}
+          {build.handedOverOn ? ` · handed over ${formatDate(build.handedOverOn, dateFormat)}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
+          {build.updatedBy?.name ?? 'a removed user'} at {formatDateTime(build.updatedAt, dateFormat)}
+        </p>
+        {build.template ? (
           <p className="text-xs text-steel-500">
-            Opened {formatDate(build.openedOn, dateFormat)}
-            {build.finishedOn ? ` · finished ${formatDate(build.finishedOn, dateFormat)}` : ''}
-            {build.handedOverOn ? ` · handed over ${formatDate(build.handedOverOn, dateFormat)}` : ''} · technician {build.technician?.name ?? '—'} · version {build.version}, last changed by{' '}
-            {build.updatedBy?.name ?? 'a removed user'} at {formatDateTime(build.updatedAt, dateFormat)}
+            From template{' '}
+            <Link href={`/w/${slug}/templates/${build.template.id}`} className="underline">
+              {build.template.name}
+            </Link>{' '}
+            version {build.template.version}
           </p>
-          {build.template ? (
-            <p className="text-xs text-steel-500">
-              From template{' '}
-              <Link href={`/w/${slug}/templates/${build.template.id}`} className="underline">
-                {build.template.name}
-              </Link>{' '}
-              version {build.template.version}
-            </p>
-          ) : null}
-          {finalForMe ? <p className="mt-1 text-sm">Handed over to the customer: only an owner can change or reopen this record.</p> : null}
-        </div>
-        <div className="flex flex-wrap items-start gap-2">
-          {canEdit ? (
-            <Link href={`/w/${slug}/builds/${build.id}/edit`} className="rounded-md bg-gauge-600 px-3 py-1.5 text-sm font-semibold text-white">
-              Edit
-            </Link>
-          ) : null}
-          {canEdit
-            ? STATUS_ACTIONS.filter((a) => a.to !== build.status && !statusChangeProblem(build.status, a.to)).map((a) => (
-                <ActionButton key={a.to} url={api} method="PATCH" body={{ version: build.version, status: a.to }} label={a.label} busyLabel="Saving…" />
-              ))
-            : null}
-          {can(access.role, 'build.delete') ? (
-            <ActionButton url={api} method="DELETE" label="Delete" busyLabel="Deleting…" confirm={{
-                title: `Delete the record of ${build.customerName}?`,
-                message: `The build record of ${build.customerName} is deleted with its history and sends. This cannot be undone.`,
-                confirmLabel: 'Delete record',
-                danger: true,
-              }} after={`/w/${slug}/builds`} />
-          ) : null}
-        </div>
-      </header>
+        ) : null}
+        {finalForMe ? <p className="mt-1 text-sm">Handed over to the customer: only an owner can change or reopen this record.</p> : null}
+      </RecordHeader>
 
-      <section aria-labelledby="copy-heading" className="space-y-2">
-        <h2 id="copy-heading" className="text-lg font-semibold">
-          Customer’s copy
-        </h2>
+      <RecordSection id="copy" title="Customer’s copy">
         <div className="flex flex-wrap items-start gap-3 text-sm">
           <a href={`${api}/record?format=pdf`} className="rounded-md border border-steel-300 px-3 py-1.5">
             Download PDF (A4)
@@ -140,40 +134,31 @@ export default async function BuildPage({ params }: Props) {
         ) : (
           <p className="text-sm text-steel-600">Not sent yet.</p>
         )}
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="tdc-heading" className="space-y-1">
-        <h2 id="tdc-heading" className="text-lg font-semibold">
-          Top dead centre
-        </h2>
+      <RecordSection id="tdc" title="Top dead centre" className="space-y-1">
         {build.stops ? (
           <p className="text-sm">
-            {F.stops.label}: A <span className="font-mono">{degText(build.stops.readingADeg)}</span>
-            {build.stops.readingASide ? ` ${build.stops.readingASide}` : ''}, B <span className="font-mono">{degText(build.stops.readingBDeg)}</span>
+            {F.stops.label}: A <span className="font-mono">{degText(build.stops.readingADeg, dateFormat.locale)}</span>
+            {build.stops.readingASide ? ` ${build.stops.readingASide}` : ''}, B <span className="font-mono">{degText(build.stops.readingBDeg, dateFormat.locale)}</span>
             {build.stops.readingBSide ? ` ${build.stops.readingBSide}` : ''} ({build.stops.numbering === 'full' ? '0–360° wheel' : '0–180° each side'})
           </p>
         ) : null}
-        <TdcResult tdc={build.tdc} />
-      </section>
+        <TdcResult tdc={build.tdc} locale={dateFormat.locale} />
+      </RecordSection>
 
-      <section aria-labelledby="timing-heading" className="space-y-1">
-        <h2 id="timing-heading" className="text-lg font-semibold">
-          Ignition timing
-        </h2>
-        <TimingResult results={build} />
+      <RecordSection id="timing" title="Ignition timing" className="space-y-1">
+        <TimingResult results={build} locale={dateFormat.locale} />
         <p className="text-sm text-steel-600 dark:text-steel-300">
           Entered in {build.timingEnteredAs === 'mm' ? 'mm' : 'degrees'}
-          {build.advanceDeg !== null ? ` · specified ${degText(build.advanceDeg, '° BTDC')}` : ''}
+          {build.advanceDeg !== null ? ` · specified ${degText(build.advanceDeg, dateFormat.locale, '° BTDC')}` : ''}
           {build.timingCheck ? ` · checked ${build.timingCheck}${build.timingCheck === 'strobe' && build.timingCheckRpm ? ` at ${build.timingCheckRpm} rpm` : ''}` : ' · not checked yet'}
         </p>
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="ports-heading" className="space-y-2">
-        <h2 id="ports-heading" className="text-lg font-semibold">
-          Port timing
-        </h2>
+      <RecordSection id="ports" title="Port timing">
         <p className="text-sm">
-          Stroke {mmText(build.strokeMm)} · rod {mmText(build.rodMm)} · pin offset {mmText(build.pinOffsetMm)} · deck {mmText(build.deckMm)}
+          Stroke {mmText(build.strokeMm, dateFormat.locale)} · rod {mmText(build.rodMm, dateFormat.locale)} · pin offset {mmText(build.pinOffsetMm, dateFormat.locale)} · deck {mmText(build.deckMm, dateFormat.locale)}
         </p>
         {build.ports.length === 0 ? (
           <p className="text-sm text-steel-600">No ports measured.</p>
@@ -190,27 +175,24 @@ export default async function BuildPage({ params }: Props) {
               {build.ports.map((port, i) => (
                 <tr key={i}>
                   <td className="pr-6">{port.name}</td>
-                  <td className="pr-6 font-mono">{mmText(port.heightMm)}</td>
+                  <td className="pr-6 font-mono">{mmText(port.heightMm, dateFormat.locale)}</td>
                   <td>
-                    <PortResult port={port} toleranceDeg={build.toleranceDeg} />
+                    <PortResult port={port} toleranceDeg={build.toleranceDeg} locale={dateFormat.locale} />
                   </td>
                 </tr>
               ))}
             </tbody>
           </table>
         )}
-        <BlowdownResult results={build} />
-        <ToleranceNote toleranceDeg={build.toleranceDeg} />
-      </section>
+        <BlowdownResult results={build} locale={dateFormat.locale} />
+        <ToleranceNote toleranceDeg={build.toleranceDeg} locale={dateFormat.locale} />
+      </RecordSection>
 
-      <section aria-labelledby="other-heading" className="space-y-1">
-        <h2 id="other-heading" className="text-lg font-semibold">
-          Other measurements and notes
-        </h2>
+      <RecordSection id="other" title="Other measurements and notes" className="space-y-1">
         <ul className="text-sm">
           {build.squishMm !== null ? (
             <li>
-              {F.squishMm.label}: <span className="font-mono">{mmText(build.squishMm)}</span>
+              {F.squishMm.label}: <span className="font-mono">{mmText(build.squishMm, dateFormat.locale)}</span>
             </li>
           ) : null}
           {build.otherMeasurements.map((m, i) => (
@@ -220,39 +202,17 @@ export default async function BuildPage({ params }: Props) {
           ))}
         </ul>
         {build.notes ? <p className="whitespace-pre-line text-sm">{build.notes}</p> : null}
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="photos-heading" className="space-y-3">
-        <h2 id="photos-heading" className="text-lg font-semibold">
-          Photos
-        </h2>
-        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
-        <ul className="flex flex-wrap gap-4">
-          {photos.map((photo) => (
-            <li key={photo.id} className="space-y-1">
-              <a href={`${api}/photos/${photo.id}`}>
-                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
-                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of the engine of ${build.customerName}`} className="h-40 rounded border border-steel-200 object-contain" />
-              </a>
-              <p className="max-w-60 text-xs">{photo.caption}</p>
-              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm={{ title: 'Delete this photo?', message: `The photo is removed from the record of ${build.customerName} for everyone in the workspace.`, confirmLabel: 'Delete photo', danger: true }} /> : null}
-            </li>
-          ))}
-        </ul>
-        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
-      </section>
+      <RecordSection id="photos" title="Photos" className="space-y-3">
+        <PhotoGallery photosUrl={`${api}/photos`} photos={photos} canEdit={canEdit} altOf={`of the engine of ${build.customerName}`} removedFrom={`the record of ${build.customerName}`} />
+      </RecordSection>
 
-      <section aria-labelledby="print-heading" className="space-y-2">
-        <h2 id="print-heading" className="text-lg font-semibold">
-          Print the sheets for this build
-        </h2>
+      <RecordSection id="print" title="Print the sheets for this build">
         <BuildPrintLinks template={template} build={build} sheetUrl={`${api}/sheet`} profileName={profile?.name ?? null} workspaceSlug={slug} />
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="history-heading" className="space-y-2">
-        <h2 id="history-heading" className="text-lg font-semibold">
-          History
-        </h2>
+      <RecordSection id="history" title="History">
         <ol className="space-y-1 text-sm">
           {revisions.map((r) => (
             <li key={r.id}>
@@ -261,7 +221,7 @@ export default async function BuildPage({ params }: Props) {
             </li>
           ))}
         </ol>
-      </section>
+      </RecordSection>
     </article>
   );
 }

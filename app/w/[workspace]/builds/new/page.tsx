@@ -1,5 +1,6 @@
 import type { Metadata } from 'next';
 import { buildPageData } from '@/app/lib/build-page-data';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
 import { BuildForm } from '@/components/builds/build-form';
 import { emptyBuild } from '@/lib/builds/build-schema';
@@ -25,7 +26,7 @@ export default async function NewBuildPage({ params, searchParams }: Props) {
   return (
     <section className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-bold">New build record{template ? `: ${template.name}` : ''}</h1>
-      <BuildForm slug={slug} build={null} fields={fields} templates={data.templates} technicians={data.technicians} toleranceDeg={data.toleranceDeg} />
+      <BuildForm slug={slug} build={null} fields={fields} templates={data.templates} technicians={data.technicians} toleranceDeg={data.toleranceDeg} locale={(await requestDateFormat()).locale} />
     </section>
   );
 }

@@ -1,13 +1,14 @@
 import { parsePathId } from '@/lib/path-id';
 import type { Metadata } from 'next';
-import Link from 'next/link';
 import { notFound } from 'next/navigation';
 import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
 import { formatDateTime } from '@/lib/format/date-format';
 import { can } from '@/lib/access-policy';
 import { FIELD_LABELS, FIGURE_FIELDS, formatFieldValue } from '@/components/templates/field-labels';
-import { PhotoUpload } from '@/components/templates/photo-upload';
+import { PhotoGallery } from '@/components/photos/photo-gallery';
+import { EditLink, RecordHeader } from '@/components/records/record-header';
+import { RecordSection } from '@/components/records/record-section';
 import { PrintLinks } from '@/components/templates/print-links';
 import { ActionButton } from '@/components/templates/template-actions';
 import { TemplateHistory } from '@/components/templates/template-history';
@@ -43,55 +44,49 @@ export default async function TemplatePage({ params }: Props) {
 
   return (
     <article className="space-y-8">
-      <header className="flex flex-wrap items-start justify-between gap-4">
-        <div>
-          <p className="text-sm">
-            <Link href={`/w/${slug}/templates`} className="text-gauge-700 underline dark:text-gauge-300">
-              Engine templates
-            </Link>
-          </p>
-          <h1 className="text-2xl font-bold">
+      <RecordHeader
+        back={{ href: `/w/${slug}/templates`, label: 'Engine templates' }}
+        title={
+          <>
             {template.name} {template.archived ? <span className="ml-2 rounded bg-steel-200 px-2 py-0.5 text-sm font-medium text-steel-700">archived</span> : null}
-          </h1>
-          <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
-          <p className="text-xs text-steel-500">
-            Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
-          </p>
-        </div>
-        {canEdit ? (
-          <div className="flex flex-wrap gap-2">
-            <Link href={`/w/${slug}/templates/${template.id}/edit`} className="inline-flex min-h-11 items-center rounded-md bg-gauge-600 px-3 text-sm font-semibold text-white">
-              Edit
-            </Link>
-            <ActionButton
-              url={`${api}/archive`}
-              body={{ version: template.version, archived: !template.archived }}
-              label={template.archived ? 'Un-archive' : 'Archive'}
-              busyLabel="Saving…"
-            />
-            {can(access.role, 'template.delete') ? (
+          </>
+        }
+        actions={
+          canEdit ? (
+            <>
+              <EditLink href={`/w/${slug}/templates/${template.id}/edit`} />
               <ActionButton
-                url={api}
-                method="DELETE"
-                label="Delete"
-                busyLabel="Deleting…"
-                confirm={{
-                  title: `Delete ${template.name}?`,
-                  message: `${template.name} is deleted with its photos and its history. This cannot be undone; Archive keeps it out of the list instead.`,
-                  confirmLabel: 'Delete template',
-                  danger: true,
-                }}
-                after={`/w/${slug}/templates`}
+                url={`${api}/archive`}
+                body={{ version: template.version, archived: !template.archived }}
+                label={template.archived ? 'Un-archive' : 'Archive'}
+                busyLabel="Saving…"
               />
-            ) : null}
-          </div>
-        ) : null}
-      </header>
+              {can(access.role, 'template.delete') ? (
+                <ActionButton
+                  url={api}
+                  method="DELETE"
+                  label="Delete"
+                  busyLabel="Deleting…"
+                  confirm={{
+                    title: `Delete ${template.name}?`,
+                    message: `${template.name} is deleted with its photos and its history. This cannot be undone; Archive keeps it out of the list instead.`,
+                    confirmLabel: 'Delete template',
+                    danger: true,
+                  }}
+                  after={`/w/${slug}/templates`}
+                />
+              ) : null}
+            </>
+          ) : null
+        }
+      >
+        <p className="text-steel-600 dark:text-steel-300">{template.description}</p>
+        <p className="text-xs text-steel-500">
+          Version {template.version} · last changed by {template.updatedBy?.name ?? 'a removed user'} at {formatDateTime(template.updatedAt, dateFormat)}
+        </p>
+      </RecordHeader>
 
-      <section aria-labelledby="print-heading" className="space-y-2">
-        <h2 id="print-heading" className="text-lg font-semibold">
-          Print from this template
-        </h2>
+      <RecordSection id="print" title="Print from this template">
         <PrintLinks template={template} sheetUrl={`${api}/sheet`} workspaceSlug={slug} />
         <p className="text-xs text-steel-500">
           {profile ? `PDF and SVG are corrected for “${profile.name}”, the workspace’s default printer profile; the title block names it.` : 'The workspace has no default printer profile: sheets are not corrected.'}
@@ -99,19 +94,16 @@ export default async function TemplatePage({ params }: Props) {
         <p className="text-xs text-steel-500">
           Take the plug lead off before turning the engine; turn a positive stop only by hand and remove it before starting. The engine maker’s manual comes first.
         </p>
-      </section>
+      </RecordSection>
 
       {builds ? <TemplateBuilds slug={slug} templateId={template.id} page={builds} canCreate={can(access.role, 'build.edit')} dateFormat={dateFormat} /> : null}
 
-      <section aria-labelledby="figures-heading" className="space-y-2">
-        <h2 id="figures-heading" className="text-lg font-semibold">
-          Figures
-        </h2>
+      <RecordSection id="figures" title="Figures">
         <dl className="grid gap-x-6 gap-y-1 text-sm sm:grid-cols-[12rem_1fr]">
           {FIGURE_FIELDS.map((field) => (
             <div key={field} className="contents">
               <dt className="text-steel-600 dark:text-steel-300">{FIELD_LABELS[field]}</dt>
-              <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field])}</dd>
+              <dd className="font-mono tabular-nums">{formatFieldValue(field, template[field], dateFormat.locale)}</dd>
             </div>
           ))}
         </dl>
@@ -139,34 +131,15 @@ export default async function TemplatePage({ params }: Props) {
           </table>
         ) : null}
         {template.notes ? <p className="whitespace-pre-line text-sm">{template.notes}</p> : null}
-      </section>
+      </RecordSection>
 
-      <section aria-labelledby="photos-heading" className="space-y-3">
-        <h2 id="photos-heading" className="text-lg font-semibold">
-          Photos
-        </h2>
-        {photos.length === 0 ? <p className="text-sm text-steel-600">No photos yet.</p> : null}
-        <ul className="flex flex-wrap gap-4">
-          {photos.map((photo) => (
-            <li key={photo.id} className="space-y-1">
-              <a href={`${api}/photos/${photo.id}`}>
-                {/* eslint-disable-next-line @next/next/no-img-element -- private, session-checked images */}
-                <img src={`${api}/photos/${photo.id}?size=thumb`} alt={photo.caption || `Photo ${photo.id} of ${template.name}`} className="h-40 rounded border border-steel-200 object-contain" />
-              </a>
-              <p className="max-w-60 text-xs">{photo.caption}</p>
-              {canEdit ? <ActionButton url={`${api}/photos/${photo.id}`} method="DELETE" label="Delete photo" busyLabel="Deleting…" confirm={{ title: 'Delete this photo?', message: `The photo is removed from ${template.name} for everyone in the workspace.`, confirmLabel: 'Delete photo', danger: true }} /> : null}
-            </li>
-          ))}
-        </ul>
-        {canEdit ? <PhotoUpload url={`${api}/photos`} /> : null}
-      </section>
+      <RecordSection id="photos" title="Photos" className="space-y-3">
+        <PhotoGallery photosUrl={`${api}/photos`} photos={photos} canEdit={canEdit} altOf={`of ${template.name}`} removedFrom={template.name} />
+      </RecordSection>
 
-      <section aria-labelledby="history-heading" className="space-y-2">
-        <h2 id="history-heading" className="text-lg font-semibold">
-          History
-        </h2>
+      <RecordSection id="history" title="History">
         <TemplateHistory revisions={revisions} currentVersion={template.version} restoreUrl={(v) => `${api}/revisions/${v}/restore`} canEdit={canEdit} dateFormat={dateFormat} />
-      </section>
+      </RecordSection>
     </article>
   );
 }

@@ -1,6 +1,7 @@
 import type { Metadata } from 'next';
 import { notFound } from 'next/navigation';
 import { buildPageData } from '@/app/lib/build-page-data';
+import { requestDateFormat } from '@/app/lib/date-format';
 import { pageAction } from '@/app/lib/page-access';
 import { BuildForm } from '@/components/builds/build-form';
 import { findStoredBuild } from '@/db/builds/find-build';
@@ -21,7 +22,7 @@ export default async function EditBuildPage({ params }: Props) {
   return (
     <section className="max-w-4xl space-y-4">
       <h1 className="text-2xl font-bold">Edit the record of {stored.build.customerName}</h1>
-      <BuildForm slug={slug} build={stored.build} fields={stored.fields} templates={data.templates} technicians={data.technicians} toleranceDeg={data.toleranceDeg} />
+      <BuildForm slug={slug} build={stored.build} fields={stored.fields} templates={data.templates} technicians={data.technicians} toleranceDeg={data.toleranceDeg} locale={(await requestDateFormat()).locale} />
     </section>
   );
 }

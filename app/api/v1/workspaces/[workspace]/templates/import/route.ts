@@ -2,6 +2,7 @@ import { createHash } from 'node:crypto';
 import { jsonError } from '@/app/lib/api';
 import { requireAction } from '@/app/lib/authz';
 import { readBodyBytes } from '@/app/lib/request-body';
+import { dateFormatOf } from '@/app/lib/date-format';
 import { guarded } from '@/app/lib/route-handler';
 import { recordAudit } from '@/db/audit-log';
 import { findImportReceipt, saveImportReceipt, type ImportReceipt } from '@/db/import-receipts';
@@ -48,7 +49,7 @@ type Choices = { preview: boolean; onMatch: OnMatch | null; expectedVersions?: R
 function readChoices(fields: URLSearchParams): Choices | Response {
   const onMatch = fields.get('onMatch');
   if (onMatch !== null && onMatch !== 'skip' && onMatch !== 'update')
-    return jsonError(400, 'Some fields are not valid', [{ path: 'onMatch', message: 'On a name match (onMatch) must be one of: skip, update' }]);
+    return jsonError(400, 'Some fields are not valid', [{ path: 'onMatch', message: 'On a name match must be one of: skip, update' }]);
   const versions = fields.get('matchVersions');
   let expectedVersions: Record<string, number> | undefined;
   if (versions) {
@@ -56,7 +57,7 @@ function readChoices(fields: URLSearchParams): Choices | Response {
       expectedVersions = JSON.parse(versions) as Record<string, number>;
       if (typeof expectedVersions !== 'object' || expectedVersions === null || Object.values(expectedVersions).some((v) => !Number.isInteger(v))) throw new Error();
     } catch {
-      return jsonError(400, 'Some fields are not valid', [{ path: 'matchVersions', message: 'Versions seen in the preview (matchVersions) must be a JSON object of template id → version' }]);
+      return jsonError(400, 'Some fields are not valid', [{ path: 'matchVersions', message: 'Versions seen in the preview must be a JSON object of template id → version' }]);
     }
   }
   return { preview: ['1', 'true'].includes(fields.get('preview') ?? ''), onMatch, expectedVersions };
@@ -70,11 +71,11 @@ function idempotencyKey(request: Request): string | null | Response {
   return jsonError(400, 'The Idempotency-Key header is not valid', [{ path: '(header)', message: 'Idempotency-Key must be 1–255 visible ASCII characters' }]);
 }
 
-function problemsResponse(problems: CsvProblem[]): Response {
+function problemsResponse(problems: CsvProblem[], locale: string): Response {
   const shown = problems.slice(0, 500);
   return Response.json(
     {
-      error: importProblemsMessage(problems.length),
+      error: importProblemsMessage(problems.length, locale),
       issues: shown.map((p) => ({ path: `row ${p.row}.${p.column}`, message: p.message })),
       problems: shown,
       problemCount: problems.length,
@@ -91,7 +92,7 @@ function replay(receipt: ImportReceipt, bodySha256: string): Response {
   return Response.json(receipt.body, { status: receipt.status, headers: { 'Idempotent-Replayed': 'true' } });
 }
 
-const doneBody = (counts: ImportCounts) => ({ imported: counts.created + counts.updated, ...counts, message: importDoneMessage(counts) });
+const doneBody = (counts: ImportCounts, locale: string) => ({ imported: counts.created + counts.updated, ...counts, message: importDoneMessage(counts, locale) });
 
 /**
  * POST …/templates/import — template.import. The CSV as text/csv (charset= honoured) or as the
@@ -107,6 +108,7 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
   return guarded(incoming, { accepts: ['csv', 'multipart'], maxBytes: MAX_IMPORT_BYTES + MULTIPART_OVERHEAD_BYTES, tooLarge }, async (request) => {
     const { workspace } = await params;
     const access = await requireAction(workspace, 'template.import');
+    const { locale } = dateFormatOf(request);
     const key = idempotencyKey(request);
     if (key instanceof Response) return key;
     const upload = await readUpload(request);
@@ -115,9 +117,9 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
     if (choices instanceof Response) return choices;
 
     const decoded = decodeCsvBytes(upload.bytes, upload.charset);
-    if (!decoded.ok) return problemsResponse([{ row: decoded.row, column: '(encoding)', message: decoded.message }]);
+    if (!decoded.ok) return problemsResponse([{ row: decoded.row, column: '(encoding)', message: decoded.message }], locale);
     const parsed = parseTemplatesCsv(decoded.text);
-    if (!parsed.ok) return problemsResponse(parsed.problems);
+    if (!parsed.ok) return problemsResponse(parsed.problems, locale);
 
     const plan = await planImport(access.workspace.id, parsed.templates);
     const planBody = { rows: plan.rows, newRows: plan.newRows, matchingRows: plan.matches.length, matches: plan.matches.slice(0, 500) };
@@ -126,7 +128,7 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
         preview: true,
         separatedBy: DELIMITER_NAMES[parsed.delimiter],
         ...planBody,
-        message: importPreviewMessage(plan.rows, plan.newRows, plan.matches.length),
+        message: importPreviewMessage(plan.rows, plan.newRows, plan.matches.length, locale),
       });
 
     const bodySha256 = createHash('sha256')
@@ -137,7 +139,7 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
       const receipt = await findImportReceipt(access.workspace.id, key);
       if (receipt) return replay(receipt, bodySha256);
     }
-    if (plan.matches.length > 0 && !choices.onMatch) return Response.json({ error: importChoiceNeededMessage(plan.matches.length), issues: [], ...planBody }, { status: 409 });
+    if (plan.matches.length > 0 && !choices.onMatch) return Response.json({ error: importChoiceNeededMessage(plan.matches.length, locale), issues: [], ...planBody }, { status: 409 });
 
     let outcome;
     try {
@@ -146,7 +148,7 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
         fields: parsed.fields,
         expectedVersions: choices.expectedVersions,
         afterWrite: key
-          ? (trx, counts) => saveImportReceipt(trx, { workspaceId: access.workspace.id, key, userId: access.user.id, bodySha256, status: 201, body: doneBody(counts) })
+          ? (trx, counts) => saveImportReceipt(trx, { workspaceId: access.workspace.id, key, userId: access.user.id, bodySha256, status: 201, body: doneBody(counts, locale) })
           : undefined,
       });
     } catch (err) {
@@ -162,9 +164,9 @@ export async function POST(incoming: Request, { params }: WorkspaceParams): Prom
         workspaceId: access.workspace.id,
         detail: { count: outcome.counts.created, updated: outcome.counts.updated },
       });
-      return Response.json(doneBody(outcome.counts), { status: 201 });
+      return Response.json(doneBody(outcome.counts, locale), { status: 201 });
     }
-    if (outcome.reason === 'invalid') return problemsResponse(outcome.problems);
+    if (outcome.reason === 'invalid') return problemsResponse(outcome.problems, locale);
     const names = outcome.conflicts.map((c) => `${c.name} (row ${c.row})`).join(', ');
     return Response.json(
       { error: `Changed by someone since the preview: ${names}. Check the file again; nothing was imported.`, issues: [], conflicts: outcome.conflicts },

@@ -5,19 +5,13 @@ import * as record from '@/app/api/v1/workspaces/[workspace]/builds/[id]/record/
 import * as send from '@/app/api/v1/workspaces/[workspace]/builds/[id]/send/route';
 import * as photos from '@/app/api/v1/workspaces/[workspace]/builds/[id]/photos/route';
 import * as photo from '@/app/api/v1/workspaces/[workspace]/builds/[id]/photos/[photoId]/route';
+import { jsonRequest, routeParams } from '@/tests/support/call-route';
 
 /** Calls the build record route handlers directly, as Next would, with JSON helpers. */
 const BASE = 'http://test.local/api/v1/workspaces';
 
-function json(method: string, url: string, body?: unknown): Request {
-  return new Request(url, {
-    method,
-    headers: body === undefined ? {} : { 'content-type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-}
-
-const p = <T>(value: T) => ({ params: Promise.resolve(value) });
+const json = jsonRequest;
+const p = routeParams;
 const idParams = (ws: string, id: number | string) => p({ workspace: ws, id: String(id) });
 
 export const buildApi = {

@@ -260,6 +260,14 @@ describe('build records: status, roles, concurrency and history', () => {
     expect(page2.items.map((b: { customerName: string }) => b.customerName)).toEqual(['Cora Vantwell']);
     const bad = await buildApi.list(ws, '?status=lost');
     expect(bad.status).toBe(400);
-    expect((await bad.json()).issues[0].message).toMatch(/Status \(status\) must be one of: open, done, handed-over, all/);
+    expect((await bad.json()).issues[0]).toEqual({ path: 'status', message: 'Status must be one of: open, done, handed-over, all' });
+    const badIds = await (await buildApi.list(ws, '?technician=0&template=x&pageSize=101')).json();
+    expect(badIds.issues).toEqual(
+      expect.arrayContaining([
+        { path: 'technician', message: 'Technician must be at least 1 (allowed 1 or more)' },
+        { path: 'template', message: 'Template must be a whole number, 1 or more' },
+        { path: 'pageSize', message: 'Page size must be at most 100 (allowed 1–100)' },
+      ]),
+    );
   });
 });

@@ -261,10 +261,15 @@ describe('list: search, sort and server-side pages', () => {
     expect(page2.items.map((t: { name: string }) => t.name)).toEqual(['Delta 100% test_1']);
   });
 
-  it('refuses bad query parameters by name', async () => {
-    const response = await api.list(ws, '?sort=colour&pageSize=1000');
+  it('refuses bad query parameters: the path names the parameter, the message its label and range', async () => {
+    const response = await api.list(ws, '?sort=colour&pageSize=1000&page=1.5');
     expect(response.status).toBe(400);
-    const paths = (await response.json()).issues.map((i: { path: string }) => i.path);
-    expect(paths).toEqual(expect.arrayContaining(['sort', 'pageSize']));
+    const issues = (await response.json()).issues as Array<{ path: string; message: string }>;
+    expect(issues.map((i) => i.path)).toEqual(expect.arrayContaining(['sort', 'pageSize', 'page']));
+    const messageOf = (path: string) => issues.find((i) => i.path === path)?.message;
+    expect(messageOf('pageSize')).toBe('Page size must be at most 100 (allowed 1–100)');
+    expect(messageOf('page')).toBe('Page must be a whole number (allowed 1 or more)');
+    expect(messageOf('sort')).toMatch(/^Sort must be one of: name, /);
+    for (const issue of issues) expect(issue.message).not.toMatch(/\(\w+\)/); // no code key in brackets
   });
 });

@@ -7,19 +7,13 @@ import * as photos from '@/app/api/v1/workspaces/[workspace]/templates/[id]/phot
 import * as photo from '@/app/api/v1/workspaces/[workspace]/templates/[id]/photos/[photoId]/route';
 import * as importRoute from '@/app/api/v1/workspaces/[workspace]/templates/import/route';
 import * as exportRoute from '@/app/api/v1/workspaces/[workspace]/templates/export/route';
+import { jsonRequest, routeParams } from '@/tests/support/call-route';
 
 /** Calls the template route handlers directly, as Next would, with JSON helpers. */
 const BASE = 'http://test.local/api/v1/workspaces';
 
-function json(method: string, url: string, body?: unknown): Request {
-  return new Request(url, {
-    method,
-    headers: body === undefined ? {} : { 'content-type': 'application/json' },
-    body: body === undefined ? undefined : JSON.stringify(body),
-  });
-}
-
-const p = <T>(value: T) => ({ params: Promise.resolve(value) });
+const json = jsonRequest;
+const p = routeParams;
 
 export const api = {
   list: (ws: string, query = '') => list.GET(json('GET', `${BASE}/${ws}/templates${query}`), p({ workspace: ws })),

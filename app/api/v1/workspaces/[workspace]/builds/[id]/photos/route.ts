@@ -1,7 +1,6 @@
-import { randomUUID } from 'node:crypto';
-import { PHOTO_EXTENSIONS, PHOTO_UPLOAD_OPTIONS, readPhotoUpload } from '@/app/lib/photo-upload';
+import { storePhotoFiles } from '@/app/lib/photo-files';
+import { PHOTO_UPLOAD_OPTIONS, readPhotoUpload } from '@/app/lib/photo-upload';
 import { guarded } from '@/app/lib/route-handler';
-import { deleteObject, putObject } from '@/app/lib/storage';
 import { insertBuildPhoto, listBuildPhotos, publicBuildPhoto } from '@/db/builds/photos';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 
@@ -23,28 +22,9 @@ export async function POST(incoming: Request, { params }: BuildParams): Promise<
     const upload = await readPhotoUpload(request);
     if (!upload.ok) return upload.response;
     const { photo, caption } = upload;
-    const base = `builds/${build.id}/${randomUUID()}`;
-    const storageKey = `${base}.${PHOTO_EXTENSIONS[photo.contentType]}`;
-    const thumbKey = `${base}-thumb.webp`;
-    await putObject(storageKey, photo.data);
-    await putObject(thumbKey, photo.thumbnail);
-    try {
-      const stored = await insertBuildPhoto({
-        buildId: build.id,
-        storageKey,
-        thumbKey,
-        contentType: photo.contentType,
-        widthPx: photo.widthPx,
-        heightPx: photo.heightPx,
-        bytes: photo.data.length,
-        caption,
-        createdBy: access.user.id,
-      });
-      return Response.json({ photo: publicBuildPhoto(stored) }, { status: 201 });
-    } catch (err) {
-      // The record may have been deleted meanwhile: leave no orphan files.
-      await Promise.all([deleteObject(storageKey), deleteObject(thumbKey)]);
-      throw err;
-    }
+    const stored = await storePhotoFiles(`builds/${build.id}`, photo, (keys) =>
+      insertBuildPhoto({ ...keys, buildId: build.id, contentType: photo.contentType, widthPx: photo.widthPx, heightPx: photo.heightPx, bytes: photo.data.length, caption, createdBy: access.user.id }),
+    );
+    return Response.json({ photo: publicBuildPhoto(stored) }, { status: 201 });
   });
 }

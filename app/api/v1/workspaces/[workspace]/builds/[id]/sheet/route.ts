@@ -7,15 +7,14 @@ import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { findTemplate } from '@/db/templates/find-template';
 import { buildSheetKinds, buildSheetRequest } from '@/lib/builds/build-sheet';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
-import { TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
+import { storedSheetQueryShape } from '@/lib/templates/sheet-query';
 import { buildFor, type BuildParams } from '../../_shared/build-responses';
 
 export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
 
 const querySchema = z.object({
-  kind: z.enum(TEMPLATE_SHEET_KINDS, { error: `Sheet kind (kind) must be one of: ${TEMPLATE_SHEET_KINDS.join(', ')}` }).optional(),
-  format: z.enum(['pdf', 'svg'], { error: 'Format (format) must be one of: pdf, svg' }).default('pdf'),
+  ...storedSheetQueryShape,
   profile: profileChoiceSchema,
 });
 

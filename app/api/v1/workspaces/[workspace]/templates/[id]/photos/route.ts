@@ -1,8 +1,7 @@
-import { randomUUID } from 'node:crypto';
-import { deleteObject, putObject } from '@/app/lib/storage';
 import { recordAudit } from '@/db/audit-log';
 import { insertPhoto, listPhotos, publicPhoto } from '@/db/templates/photos';
-import { PHOTO_EXTENSIONS, PHOTO_UPLOAD_OPTIONS, readPhotoUpload } from '@/app/lib/photo-upload';
+import { storePhotoFiles } from '@/app/lib/photo-files';
+import { PHOTO_UPLOAD_OPTIONS, readPhotoUpload } from '@/app/lib/photo-upload';
 import { guarded } from '@/app/lib/route-handler';
 import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
@@ -26,35 +25,11 @@ export async function POST(incoming: Request, { params }: TemplateParams): Promi
     const upload = await readPhotoUpload(request);
     if (!upload.ok) return upload.response;
     const { photo, caption } = upload;
-
-    const base = `templates/${template.id}/${randomUUID()}`;
-    const storageKey = `${base}.${PHOTO_EXTENSIONS[photo.contentType]}`;
-    const thumbKey = `${base}-thumb.webp`;
-    await putObject(storageKey, photo.data, photo.contentType);
-    await putObject(thumbKey, photo.thumbnail, 'image/webp');
-    try {
-      const stored = await insertPhoto({
-        templateId: template.id,
-        storageKey,
-        thumbKey,
-        contentType: photo.contentType,
-        widthPx: photo.widthPx,
-        heightPx: photo.heightPx,
-        bytes: photo.data.length,
-        caption,
-        createdBy: access.user.id,
-      });
-      await recordAudit({
-        action: 'photo-added',
-        actorUserId: access.user.id,
-        workspaceId: access.workspace.id,
-        detail: { templateId: template.id, name: template.name },
-      });
-      return Response.json({ photo: publicPhoto(stored) }, { status: 201 });
-    } catch (err) {
-      // The template may have been deleted meanwhile: leave no orphan files.
-      await Promise.all([deleteObject(storageKey), deleteObject(thumbKey)]);
-      throw err;
-    }
+    const stored = await storePhotoFiles(`templates/${template.id}`, photo, async (keys) => {
+      const row = await insertPhoto({ ...keys, templateId: template.id, contentType: photo.contentType, widthPx: photo.widthPx, heightPx: photo.heightPx, bytes: photo.data.length, caption, createdBy: access.user.id });
+      await recordAudit({ action: 'photo-added', actorUserId: access.user.id, workspaceId: access.workspace.id, detail: { templateId: template.id, name: template.name } });
+      return row;
+    });
+    return Response.json({ photo: publicPhoto(stored) }, { status: 201 });
   });
 }

@@ -3,8 +3,10 @@ import { jsonError } from '@/app/lib/api';
 import { dateFormatOf } from '@/app/lib/date-format';
 import { sheetDownloadResponse } from '@/app/lib/sheet-response';
 import { profileChoiceSchema, sheetCorrection } from '@/app/lib/sheet-printer-profile';
+import { sheetRequestFields } from '@/lib/sheet/sheet-request-fields';
 import { sheetRequestSchema, toFieldIssues } from '@/lib/sheet/sheet-request';
-import { availableSheetKinds, sheetNeeds, templateSheetRequest, TEMPLATE_SHEET_KINDS } from '@/lib/templates/template-sheet';
+import { storedSheetQueryShape } from '@/lib/templates/sheet-query';
+import { availableSheetKinds, sheetNeeds, templateSheetRequest } from '@/lib/templates/template-sheet';
 import { guarded } from '@/app/lib/route-handler';
 import { type TemplateParams } from '../../_shared/template-params';
 import { templateFor } from '../../_shared/template-for';
@@ -13,12 +15,10 @@ export const runtime = 'nodejs';
 export const dynamic = 'force-dynamic';
 
 const querySchema = z.object({
-  kind: z.enum(TEMPLATE_SHEET_KINDS, { error: `Sheet kind must be one of: ${TEMPLATE_SHEET_KINDS.join(', ')}` }).optional(),
-  format: z.enum(['pdf', 'svg'], { error: 'Format must be one of: pdf, svg' }).default('pdf'),
-  numbering: z.enum(['split', 'full'], { error: 'Numbering must be one of: split, full' }).default('split'),
+  ...storedSheetQueryShape,
+  numbering: sheetRequestFields.numbering.schema,
   profile: profileChoiceSchema,
 });
-
 
 /**
  * GET …/templates/[id]/sheet?kind=wheel|ring|strip&format=pdf|svg&numbering=split|full&profile=default|none|id — a sheet

@@ -82,6 +82,13 @@ describe('CSV import', () => {
     expect(await templateCount()).toBe(1);
   });
 
+  it('writes the counts of its answer in the language of the request (de-DE groups thousands with ".", CLDR via Node’s Intl)', async () => {
+    const rows = Array.from({ length: 1200 }, (_, i) => GOOD_ROW.replace('Kart reed 100', `Preview ${String(i).padStart(4, '0')}`));
+    const response = await api.importCsv(ws, [HEADER, ...rows].join('\r\n'), { query: '?preview=1', headers: { 'accept-language': 'de-DE,de;q=0.9' } });
+    expect(response.status).toBe(200);
+    expect((await response.json()).message).toBe('1.200 rows checked: 1.200 new. Nothing in the file has the name of an existing template.');
+  });
+
   it('imports 10,000 rows (batched, one transaction)', async () => {
     const rows = Array.from({ length: 10_000 }, (_, i) => GOOD_ROW.replace('Kart reed 100', `Bulk ${String(i).padStart(5, '0')}`));
     const started = performance.now();

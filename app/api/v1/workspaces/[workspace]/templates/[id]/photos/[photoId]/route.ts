@@ -1,8 +1,8 @@
 import type { Action } from '@/lib/access-policy';
 import { parsePathId } from '@/lib/path-id';
-import { deleteObject, getObject } from '@/app/lib/storage';
 import { recordAudit } from '@/db/audit-log';
 import { deletePhotoRow, findPhoto } from '@/db/templates/photos';
+import { deletePhotoFiles, photoFileResponse } from '@/app/lib/photo-files';
 import { guarded } from '@/app/lib/route-handler';
 import { templateNotFound } from '../../../_shared/template-params';
 import { templateFor } from '../../../_shared/template-for';
@@ -19,29 +19,18 @@ async function locate(params: Params['params'], action: Action) {
 export async function GET(request: Request, { params }: Params): Promise<Response> {
   return guarded(async () => {
     const { photo } = await locate(params, 'template.read');
-    if (!photo) return templateNotFound();
-    const thumb = new URL(request.url).searchParams.get('size') === 'thumb';
-    const data = await getObject(thumb ? photo.thumbKey : photo.storageKey);
-    if (!data) return templateNotFound();
-    return new Response(new Uint8Array(data), {
-      headers: {
-        'Content-Type': thumb ? 'image/webp' : photo.contentType,
-        'Content-Length': String(data.length),
-        'Cache-Control': 'private, max-age=3600',
-        'X-Content-Type-Options': 'nosniff',
-      },
-    });
+    return (photo && (await photoFileResponse(request, photo))) ?? templateNotFound();
   });
 }
 
-/** DELETE …/photos/[photoId] — template.edit; removes the row and both files. */
+/** DELETE …/photos/[photoId] — template.edit; removes the row, both files, and says so in the activity. */
 export async function DELETE(incoming: Request, { params }: Params): Promise<Response> {
   return guarded(incoming, {}, async () => {
     const { access, template, photo } = await locate(params, 'template.edit');
     if (!photo) return templateNotFound();
     await deletePhotoRow(photo.id);
     await recordAudit({ action: 'photo-deleted', actorUserId: access.user.id, workspaceId: access.workspace.id, detail: { templateId: template.id, name: template.name } });
-    await Promise.all([deleteObject(photo.storageKey), deleteObject(photo.thumbKey)]);
+    await deletePhotoFiles(photo);
     return new Response(null, { status: 204 });
   });
 }
