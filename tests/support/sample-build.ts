@@ -4,27 +4,35 @@ import { buildResults } from '@/lib/builds/build-results';
 import { emptyBuild } from '@/lib/builds/build-schema';
 
 /**
+ * An invented customer's engine with the figures worked by hand in tests/lib/builds/build-results.test.ts
+ * (stroke 40 mm, rod 80 mm, Heywood eq. 2.5): what a technician types for a build.
+ */
+export const SAMPLE_ENGINE = {
+  customerName: 'Avery Quillfeather',
+  customerEmail: 'avery@customer.test',
+  engineNumber: 'QX-0042',
+  engineDescription: 'Invented 50 cc single',
+  strokeMm: 40,
+  rodMm: 80,
+  deckMm: 0.5,
+  stops: { numbering: 'full' as const, readingADeg: 340, readingBDeg: 24 },
+  timingSetDegBTDC: 18,
+  ports: [
+    { name: 'Exhaust', heightMm: 17.5 },
+    { name: 'Transfer', heightMm: 29.5 },
+  ],
+};
+
+/**
  * A build record as the API would answer it, made without a database: invented customer,
  * stroke 40 mm, rod 80 mm (the figures worked by hand in tests/lib/builds/build-results.test.ts).
  */
 export function sampleBuild(overrides: Partial<BuildFields> = {}, extra: Partial<Build> = {}): Build {
   const fields: BuildFields = {
     ...emptyBuild('2026-12-03'),
-    customerName: 'Avery Quillfeather',
-    customerEmail: 'avery@customer.test',
-    engineNumber: 'QX-0042',
-    engineDescription: 'Invented 50 cc single',
-    strokeMm: 40,
-    rodMm: 80,
-    deckMm: 0.5,
-    stops: { numbering: 'full', readingADeg: 340, readingBDeg: 24 },
-    timingSetDegBTDC: 18,
+    ...SAMPLE_ENGINE,
     timingCheck: 'strobe',
     timingCheckRpm: 3000,
-    ports: [
-      { name: 'Exhaust', heightMm: 17.5 },
-      { name: 'Transfer', heightMm: 29.5 },
-    ],
     portTargets: [
       { name: 'Exhaust', opensCrankDeg: 75, closesCrankDeg: 285 },
       { name: 'Transfer', opensCrankDeg: 114, closesCrankDeg: 246 },

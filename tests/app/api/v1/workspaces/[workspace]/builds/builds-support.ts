@@ -6,6 +6,7 @@ import * as send from '@/app/api/v1/workspaces/[workspace]/builds/[id]/send/rout
 import * as photos from '@/app/api/v1/workspaces/[workspace]/builds/[id]/photos/route';
 import * as photo from '@/app/api/v1/workspaces/[workspace]/builds/[id]/photos/[photoId]/route';
 import { jsonRequest, routeParams } from '@/tests/support/call-route';
+import { SAMPLE_ENGINE } from '@/tests/support/sample-build';
 
 /** Calls the build record route handlers directly, as Next would, with JSON helpers. */
 const BASE = 'http://test.local/api/v1/workspaces';
@@ -32,23 +33,5 @@ export const buildApi = {
   send: (ws: string, id: number | string) => send.POST(json('POST', `${BASE}/${ws}/builds/${id}/send`), idParams(ws, id)),
 };
 
-/**
- * An invented customer's engine with the figures worked by hand in tests/lib/builds/build-results.test.ts
- * (stroke 40 mm, rod 80 mm, Heywood eq. 2.5).
- */
-export const BUILD_SAMPLE = {
-  customerName: 'Avery Quillfeather',
-  customerEmail: 'avery@customer.test',
-  engineNumber: 'QX-0042',
-  engineDescription: 'Invented 50 cc single',
-  strokeMm: 40,
-  rodMm: 80,
-  deckMm: 0.5,
-  stops: { numbering: 'full', readingADeg: 340, readingBDeg: 24 },
-  timingSetDegBTDC: 18,
-  timingCheck: 'static-light',
-  ports: [
-    { name: 'Exhaust', heightMm: 17.5 },
-    { name: 'Transfer', heightMm: 29.5 },
-  ],
-};
+/** The sample engine as a technician sends it, checked with a static light. */
+export const BUILD_SAMPLE = { ...SAMPLE_ENGINE, timingCheck: 'static-light' };
