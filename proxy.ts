@@ -3,12 +3,13 @@ import { NextResponse, type NextFetchEvent, type NextRequest } from 'next/server
 import { authSecret } from '@/app/lib/auth-secret';
 import { sessionCookieName } from '@/lib/session-cookie';
 import { contentSecurityPolicy } from '@/lib/content-security-policy';
+import { PAGE_PATH_HEADER } from '@/app/lib/page-path-header';
 
 const PRIVATE_PATHS = [/^\/w(\/|$)/, /^\/account(\/|$)/];
 
 /**
  * Gives every page a Content-Security-Policy with a fresh nonce (on the request too, where
- * Next reads it to mark its inline scripts), and sends signed-out visitors of private pages to
+ * Next reads it to mark its inline scripts) and the page's path (for app/forbidden.tsx), and sends signed-out visitors of private pages to
  * /sign-in. It grants nothing: every page, route handler and server action checks the session
  * and role itself.
  */
@@ -18,6 +19,8 @@ function withPolicy(request: NextRequest): NextResponse {
   const headers = new Headers(request.headers);
   headers.set('x-nonce', nonce);
   headers.set('Content-Security-Policy', policy);
+  // Whatever a client sent under this name is replaced: the 403 page reads it to say what was refused.
+  headers.set(PAGE_PATH_HEADER, request.nextUrl.pathname);
   const response = NextResponse.next({ request: { headers } });
   response.headers.set('Content-Security-Policy', policy);
   return response;

@@ -1,12 +1,12 @@
 import type { Metadata } from 'next';
 import Link from 'next/link';
-import { forbiddenReason } from '@/app/lib/forbidden-reason';
+import { pageRefusal } from '@/app/lib/page-access';
 
 export const metadata: Metadata = { title: 'Not allowed' };
 
 /** The 403 page: what was refused, and what the visitor can do instead. */
-export default function Forbidden() {
-  const { message, workspaceSlug } = forbiddenReason();
+export default async function Forbidden() {
+  const { message, workspaceSlug } = await pageRefusal();
   const shop = workspaceSlug ? `/w/${workspaceSlug}` : '';
   return (
     <section className="mx-auto max-w-2xl space-y-4 py-12">

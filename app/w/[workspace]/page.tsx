@@ -31,7 +31,7 @@ function activityGroup(value: string | string[] | undefined): ActivityGroup {
 export default async function WorkspaceHomePage({ params, searchParams }: Props) {
   const { workspace: slug } = await params;
   const group = activityGroup((await searchParams).activity);
-  const access = await pageAction(slug, 'workspace.read', `/w/${slug}`);
+  const access = await pageAction(`/w/${slug}`);
   const { workspace, role, user } = access;
   const may = {
     manageMembers: can(role, 'members.manage'),

@@ -14,7 +14,7 @@ type Props = { params: Promise<{ workspace: string }> };
 
 export default async function BuildsPage({ params }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageAction(slug, 'build.read', `/w/${slug}/builds`);
+  const access = await pageAction(`/w/${slug}/builds`);
   const { templates, technicians } = await buildPageData(access.workspace.id);
   return (
     <section className="space-y-4">

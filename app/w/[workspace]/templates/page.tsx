@@ -13,7 +13,7 @@ type Props = { params: Promise<{ workspace: string }> };
 
 export default async function TemplatesPage({ params }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageAction(slug, 'template.read', `/w/${slug}/templates`);
+  const access = await pageAction(`/w/${slug}/templates`);
   const canEdit = can(access.role, 'template.edit');
   const canImport = can(access.role, 'template.import');
   return (

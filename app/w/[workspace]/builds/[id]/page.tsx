@@ -37,7 +37,7 @@ const F = buildFields;
 
 export default async function BuildPage({ params }: Props) {
   const { workspace: slug, id } = await params;
-  const access = await pageAction(slug, 'build.read', `/w/${slug}/builds/${id}`);
+  const access = await pageAction(`/w/${slug}/builds/${id}`);
   const buildId = parsePathId(id);
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();

@@ -15,7 +15,7 @@ type Props = { params: Promise<{ workspace: string }>; searchParams: Promise<{ t
 /** A new record; `?template=ID` starts it from that template's figures. */
 export default async function NewBuildPage({ params, searchParams }: Props) {
   const { workspace: slug } = await params;
-  const access = await pageAction(slug, 'build.edit', `/w/${slug}/builds/new`);
+  const access = await pageAction(`/w/${slug}/builds/new`);
   const data = await buildPageData(access.workspace.id);
   const templateId = parsePathId((await searchParams).template ?? '');
   const template = data.templates.find((t) => t.id === templateId);

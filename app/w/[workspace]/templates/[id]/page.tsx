@@ -26,7 +26,7 @@ type Props = { params: Promise<{ workspace: string; id: string }> };
 
 export default async function TemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
-  const access = await pageAction(slug, 'template.read', `/w/${slug}/templates/${id}`);
+  const access = await pageAction(`/w/${slug}/templates/${id}`);
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();

@@ -14,7 +14,7 @@ Sample 50 moped,50 cc piston-port,40,39.2,85,ccw,112,104,130,22,17,16;17;18,exha
 
 export default async function ImportTemplatesPage({ params }: Props) {
   const { workspace: slug } = await params;
-  await pageAction(slug, 'template.import', `/w/${slug}/templates/import`);
+  await pageAction(`/w/${slug}/templates/import`);
   return (
     <section className="max-w-4xl space-y-6">
       <div>

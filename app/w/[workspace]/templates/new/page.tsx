@@ -9,7 +9,7 @@ type Props = { params: Promise<{ workspace: string }> };
 
 export default async function NewTemplatePage({ params }: Props) {
   const { workspace: slug } = await params;
-  await pageAction(slug, 'template.edit', `/w/${slug}/templates/new`);
+  await pageAction(`/w/${slug}/templates/new`);
   return (
     <section className="max-w-3xl space-y-4">
       <h1 className="text-2xl font-bold">New engine template</h1>

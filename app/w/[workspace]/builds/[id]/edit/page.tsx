@@ -14,7 +14,7 @@ type Props = { params: Promise<{ workspace: string; id: string }> };
 
 export default async function EditBuildPage({ params }: Props) {
   const { workspace: slug, id } = await params;
-  const access = await pageAction(slug, 'build.edit', `/w/${slug}/builds/${id}/edit`);
+  const access = await pageAction(`/w/${slug}/builds/${id}/edit`);
   const buildId = parsePathId(id);
   const stored = buildId ? await findStoredBuild(access.workspace.id, buildId) : null;
   if (!stored) notFound();

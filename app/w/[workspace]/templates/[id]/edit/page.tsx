@@ -12,7 +12,7 @@ type Props = { params: Promise<{ workspace: string; id: string }> };
 
 export default async function EditTemplatePage({ params }: Props) {
   const { workspace: slug, id } = await params;
-  const access = await pageAction(slug, 'template.edit', `/w/${slug}/templates/${id}/edit`);
+  const access = await pageAction(`/w/${slug}/templates/${id}/edit`);
   const templateId = parsePathId(id);
   const template = templateId ? await findTemplate(access.workspace.id, templateId) : null;
   if (!template) notFound();
