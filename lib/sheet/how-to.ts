@@ -2,7 +2,7 @@ import type { Shape } from './drawing';
 import type { SheetRequest } from './sheet-request';
 import { text } from './shapes';
 import { TEXT_MM } from './sheet-style';
-import { wrapText } from './text-wrap';
+import { paragraphsOf, wrappedLineCount, wrapText } from './text-wrap';
 
 /**
  * "How to use this sheet": a few numbered steps per kind of sheet, in the trade's words
@@ -110,11 +110,12 @@ export function howToInCircle(steps: readonly string[], centreMm: [number, numbe
   if (!steps.length || radiusMm < 20) return undefined;
   const [cx, cy] = centreMm;
   const size = IN_CIRCLE_MM;
+  const stepWords = steps.map(paragraphsOf);
   for (let share = 0.95; share >= 0.5; share -= 0.05) {
     const widthMm = 2 * radiusMm * share;
     const fits = (heightMm: number) => Math.hypot(widthMm / 2, clearMm + heightMm) <= radiusMm;
-    // Each step wrapped once per width; the splits below only add up its row counts (as howToRows would).
-    const stepRows = steps.map((step) => wrapText(step, size, widthMm).length);
+    // Each step's rows counted once per width; the splits below only add them up (as howToRows would).
+    const stepRows = stepWords.map((words) => wrappedLineCount(words, size, widthMm));
     const rowsOf = (from: number, to: number) => stepRows.slice(from, to).reduce((sum, n) => sum + n, 0);
     const all = rowsHeightMm(rowsOf(0, steps.length), size);
     if (fits(all)) return howToShapes(steps, widthMm, cx - widthMm / 2, cy + clearMm, size);

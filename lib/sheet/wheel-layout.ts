@@ -185,11 +185,17 @@ export function ringLayout(req: SheetRequest): PolarLayout {
 
 /** How near to the centre (0, 0) any of the scale's ink comes. */
 function nearestInkMm(shapes: readonly Shape[]): number {
-  let nearest = Infinity;
+  let nearestSq = Infinity;
+  const consider = (x: number, y: number) => {
+    const sq = x * x + y * y;
+    if (sq < nearestSq) nearestSq = sq;
+  };
   for (const shape of shapes) {
-    const points: Array<readonly [number, number]> =
-      shape.type === 'text' ? textCornersMm(shape) : shape.type === 'line' ? [[shape.x1Mm, shape.y1Mm], [shape.x2Mm, shape.y2Mm]] : shape.type === 'path' ? shape.pointsMm : [];
-    for (const [x, y] of points) nearest = Math.min(nearest, Math.hypot(x, y));
+    if (shape.type === 'line') {
+      consider(shape.x1Mm, shape.y1Mm);
+      consider(shape.x2Mm, shape.y2Mm);
+    } else if (shape.type === 'text') for (const [x, y] of textCornersMm(shape)) consider(x, y);
+    else if (shape.type === 'path') for (const [x, y] of shape.pointsMm) consider(x, y);
   }
-  return nearest;
+  return Math.sqrt(nearestSq);
 }

@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { textWidthMm } from '@/lib/sheet/sheet-style';
-import { wrapText } from '@/lib/sheet/text-wrap';
+import fc from 'fast-check';
+import { paragraphsOf, wrappedLineCount, wrapText } from '@/lib/sheet/text-wrap';
 
 // Greedy ("first fit") line breaking, as in Knuth & Plass, "Breaking Paragraphs into Lines" (1981), §1: each line
 // takes words while the next one still fits.
@@ -37,3 +38,18 @@ describe('wrapText', () => {
     expect(wrapText('', 2, 100)).toEqual(['']);
   });
 });
+
+describe('wrappedLineCount', () => {
+  it('counts the lines wrapText gives, for any words, sizes and widths', () => {
+    const word = fc.stringMatching(/^[a-z0-9.,:%°’]{1,40}$/);
+    const paragraph = fc.array(word, { maxLength: 30 }).map((words) => words.join(' '));
+    fc.assert(
+      fc.property(fc.array(paragraph, { minLength: 1, maxLength: 4 }), fc.double({ min: 1, max: 5, noNaN: true }), fc.double({ min: 2, max: 200, noNaN: true }), (paragraphs, sizeMm, widthMm) => {
+        const content = paragraphs.join('\n');
+        expect(wrappedLineCount(paragraphsOf(content), sizeMm, widthMm)).toBe(wrapText(content, sizeMm, widthMm).length);
+      }),
+      { numRuns: 500 },
+    );
+  });
+});
+
