@@ -10,11 +10,8 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
-import { buildDrawing } from '@/lib/sheet/build-drawing';
-import { renderSvg, shapeToSvg } from '@/lib/sheet/render-svg';
-import { sheetRequestSchema } from '@/lib/sheet/sheet-request';
-import { wheelLayout } from '@/lib/sheet/wheel-layout';
-import { bareWheelSvg } from './load/bare-svg';
+import { pathToFileURL } from 'node:url';
+import { bundleServerCode } from '../scripts/server-bundle.mjs';
 import { drive, type LoadFigures, type LoadRequest } from './load/cannon';
 import { drivePolitely, type PoliteFigures } from './load/polite-client';
 import { assertBuilt, peakRssMb, removeFolder, rssMb, startServer, temporaryDatabase, type RunningServer } from './load/server';
@@ -171,13 +168,13 @@ async function listFigures(baseUrl: string, cookie: string) {
 
 /** Layout + SVG of a wheel's scale (the app's code) against the bare writer of the same ticks. */
 async function svgRatio() {
-  const request = sheetRequestSchema.parse({ kind: 'wheel', diameterMm: 128.4 });
-  const layoutAndSvg = () => wheelLayout(request).shapes.map(shapeToSvg).join('\n');
-  const bare = () => bareWheelSvg(128.4);
-  const [app, yardstick] = await timeAlternating(layoutAndSvg, bare, { warmup: 200, runs: 1000 });
-  const whole = await timeAlternating(() => renderSvg(buildDrawing(request, { date: new Date('2026-01-01') })), bare, { warmup: 50, runs: 300 });
+  // The sheet code as the server runs it: bundled (scripts/server-bundle.mjs), beside the PDF worker in build/.
+  const file = await bundleServerCode('bench/load/svg-ratio-code.ts', 'build/bench-svg-ratio.mjs');
+  const code = (await import(pathToFileURL(file).href)) as typeof import('./load/svg-ratio-code');
+  const [app, yardstick] = await timeAlternating(code.layoutAndSvg, code.bareSvg, { warmup: 200, runs: 1000 });
+  const whole = await timeAlternating(code.wholeSheetSvg, code.bareSvg, { warmup: 50, runs: 300 });
   const ratio = app.medianMs / yardstick.medianMs;
-  console.log(`\nlayout + SVG of a 128.4 mm wheel's scale: median ${app.medianMs.toFixed(3)} ms; bare string-built SVG of the same ticks: ${yardstick.medianMs.toFixed(3)} ms; ratio ${ratio.toFixed(2)}×`);
+  console.log(`\nlayout + SVG of a ${code.RATIO_DIAMETER_MM} mm wheel's scale: median ${app.medianMs.toFixed(3)} ms; bare string-built SVG of the same ticks: ${yardstick.medianMs.toFixed(3)} ms; ratio ${ratio.toFixed(2)}×`);
   console.log(`(the whole sheet, title block and scale checks included: ${whole[0].medianMs.toFixed(3)} ms)`);
   check('layout + SVG / bare string-built SVG', ratio, '×', '≤ 1.3', ratio <= 1.3);
   return { layoutAndSvgMs: app.medianMs, bareSvgMs: yardstick.medianMs, ratio, wholeSheetMs: whole[0].medianMs };

@@ -48,7 +48,10 @@ export type Tick = { alongIndex: number; crankIndex: number; crankDeg: number; a
 export function ticksInAlongRange(fromIndex: number, toIndex: number, finestLevel: GraduationLevel, carrier: Carrier): Tick[] {
   const ticks: Tick[] = [];
   const last = Math.min(toIndex, fromIndex + 4 * HALF_DEG_PER_TURN); // hard cap
-  for (let alongIndex = fromIndex; alongIndex <= last; alongIndex += 1) {
+  // Only every (2 × finestLevel)-th half degree can carry a kept tick: a crank index is ± the along
+  // index modulo 720, which every step divides, so the two are multiples of the step together.
+  const step = finestLevel * 2;
+  for (let alongIndex = Math.ceil(fromIndex / step) * step + 0; alongIndex <= last; alongIndex += step) {
     const crankIndex = crankIndexFromAlongIndex(alongIndex, carrier);
     const level = levelOfHalfDegIndex(crankIndex);
     if (level < finestLevel) continue;

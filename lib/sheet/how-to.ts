@@ -1,8 +1,8 @@
 import type { Shape } from './drawing';
 import type { SheetRequest } from './sheet-request';
 import { text } from './shapes';
-import { TEXT_MM } from './sheet-style';
-import { paragraphsOf, wrappedLineCount, wrapText } from './text-wrap';
+import { lengthWidthMm, TEXT_MM } from './sheet-style';
+import { paragraphsOf, wrappedLineCount, wrapText, type Paragraphs } from './text-wrap';
 
 /**
  * "How to use this sheet": a few numbered steps per kind of sheet, in the trade's words
@@ -101,6 +101,12 @@ export function howToShapes(steps: readonly string[], widthMm: number, x: number
 
 const IN_CIRCLE_MM = 1.8;
 
+function letterCount(paragraphs: Paragraphs): number {
+  let letters = 0;
+  for (const words of paragraphs) for (const word of words) letters += word.length;
+  return letters;
+}
+
 /**
  * The steps inside a free circle of `radiusMm` about `centreMm` (the blank middle of a wheel's
  * scale, or a ring's hole), kept `clearMm` above and below its centre (the centre cross or hub):
@@ -111,9 +117,16 @@ export function howToInCircle(steps: readonly string[], centreMm: [number, numbe
   const [cx, cy] = centreMm;
   const size = IN_CIRCLE_MM;
   const stepWords = steps.map(paragraphsOf);
+  const stepLetters = stepWords.map(letterCount);
   for (let share = 0.95; share >= 0.5; share -= 0.05) {
     const widthMm = 2 * radiusMm * share;
     const fits = (heightMm: number) => Math.hypot(widthMm / 2, clearMm + heightMm) <= radiusMm;
+    // A line holds no more letters than fit the width, so no step takes fewer rows than this. Both halves of a split
+    // must fit above and below the centre: when even these rows are more than the two together hold, skip the width.
+    const lettersPerRow = Math.floor(widthMm / lengthWidthMm(1, size)) + 1; // + 1: rounding never makes it too few
+    const fewestRows = stepLetters.reduce((sum, letters) => sum + Math.ceil(letters / lettersPerRow), 0);
+    const roomEachSideMm = Math.sqrt(Math.max(0, radiusMm ** 2 - (widthMm / 2) ** 2)) - clearMm;
+    if (rowsHeightMm(fewestRows, size) > 2 * roomEachSideMm) continue;
     // Each step's rows counted once per width; the splits below only add them up (as howToRows would).
     const stepRows = stepWords.map((words) => wrappedLineCount(words, size, widthMm));
     const rowsOf = (from: number, to: number) => stepRows.slice(from, to).reduce((sum, n) => sum + n, 0);

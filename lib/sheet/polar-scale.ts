@@ -42,8 +42,10 @@ const STROBE_TICK_MM = TICK_DEPTH_MM[10] + 1;
  * The depths of a scale (at full size): the usual ones, or with a strobe zone `strobeZoneMm` deep
  * after the ticks, which pushes the band, labels, side labels and arrow that much deeper.
  */
+const PLAIN_DEPTHS: PolarDepths = Object.freeze({ ...POLAR_DEPTH_MM, strobeFrom: 0, strobeTo: 0 });
+
 export function polarDepths(strobeZoneMm = 0): PolarDepths {
-  if (strobeZoneMm <= 0) return { ...POLAR_DEPTH_MM, strobeFrom: 0, strobeTo: 0 };
+  if (strobeZoneMm <= 0) return PLAIN_DEPTHS;
   const strobeFrom = STROBE_TICK_MM + 0.4;
   const strobeTo = strobeFrom + strobeZoneMm;
   const shift = Math.max(0, strobeTo + 0.8 - POLAR_DEPTH_MM.bandFrom);
@@ -88,7 +90,7 @@ export function polarScaleShapes(o: PolarScaleOptions): Shape[] {
       shapes.push(path(piece.pointsMm, piece.closed, o.bandFill, STROKE_MM.fine, { role: 'advance-band' }));
   }
 
-  tickShapes(o, radius, angle, shapes);
+  tickShapes(o, radius, shapes);
 
   const numeralSize = o.depths.numeralSize * f;
   const numeralBaseline =
@@ -193,25 +195,45 @@ function strobeShapes(o: PolarScaleOptions, radius: (depthMm: number) => number,
 
 /**
  * The graduations: the hot loop of every wheel (up to 720 ticks), kept small so it compiles on its own.
- * Each tick's sine and cosine once for both ends, and each level's inner radius once per scale
- * (polarPointMm's arithmetic, so the same numbers).
+ * Each tick's sine and cosine from the half-degree table, once for both ends, and each level's inner
+ * radius once per scale (polarPointMm's arithmetic, so the same numbers).
  */
-function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, angle: (alongDeg: number) => number, into: Shape[]): void {
+function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, into: Shape[]): void {
   const [cx, cy] = o.centreMm;
   const edge = radius(0);
   const inner10 = radius(TICK_DEPTH_MM[10]);
   const inner5 = radius(TICK_DEPTH_MM[5]);
   const inner1 = radius(TICK_DEPTH_MM[1]);
   const inner05 = radius(TICK_DEPTH_MM[0.5]);
+  const trig = halfDegreeTrig();
+  // The wheel angle in half degrees, as wheelAngleFromAlongDeg gives it for alongIndex / 2, in whole numbers.
+  const sense = o.rotation === 'cw' ? 1 : -1;
   for (const tick of o.marks.ticks) {
-    const theta = angle(tick.alongDeg);
-    const sin = sinDeg(theta);
-    const cos = cosDeg(theta);
+    const wrapped = (sense * tick.alongIndex) % 720;
+    const index = wrapped < 0 ? wrapped + 720 : wrapped;
+    const sin = trig[2 * index]!;
+    const cos = trig[2 * index + 1]!;
     const level = tick.level;
     const inner = level === 10 ? inner10 : level === 5 ? inner5 : level === 1 ? inner1 : inner05;
     into.push(line(cx + edge * sin, cy - edge * cos, cx + inner * sin, cy - inner * cos, level >= 5 ? STROKE_MM.outline : STROKE_MM.tick, { crankDeg: tick.crankDeg, level }));
   }
 }
+
+// Ticks sit on half degrees: the sine and cosine of each, [sin, cos] pairs, made on the first wheel and shared
+// (the very numbers sinDeg and cosDeg give, so the drawing does not change).
+let halfDegreeTable: Float64Array | undefined;
+
+function halfDegreeTrig(): Float64Array {
+  if (!halfDegreeTable) {
+    halfDegreeTable = new Float64Array(2 * 720);
+    for (let i = 0; i < 720; i += 1) {
+      halfDegreeTable[2 * i] = sinDeg(i * 0.5);
+      halfDegreeTable[2 * i + 1] = cosDeg(i * 0.5);
+    }
+  }
+  return halfDegreeTable;
+}
+
 type Labeller = (alongDeg: number, label: string, data: Shape['data']) => Shape[];
 
 /** What either labeller needs: the labelled marks, the longest label, the depth it may use and the polar mapping. */

@@ -186,16 +186,13 @@ export function ringLayout(req: SheetRequest): PolarLayout {
 /** How near to the centre (0, 0) any of the scale's ink comes. */
 function nearestInkMm(shapes: readonly Shape[]): number {
   let nearestSq = Infinity;
-  const consider = (x: number, y: number) => {
-    const sq = x * x + y * y;
-    if (sq < nearestSq) nearestSq = sq;
-  };
   for (const shape of shapes) {
     if (shape.type === 'line') {
-      consider(shape.x1Mm, shape.y1Mm);
-      consider(shape.x2Mm, shape.y2Mm);
-    } else if (shape.type === 'text') for (const [x, y] of textCornersMm(shape)) consider(x, y);
-    else if (shape.type === 'path') for (const [x, y] of shape.pointsMm) consider(x, y);
+      nearestSq = Math.min(nearestSq, shape.x1Mm * shape.x1Mm + shape.y1Mm * shape.y1Mm, shape.x2Mm * shape.x2Mm + shape.y2Mm * shape.y2Mm);
+      continue;
+    }
+    const points = shape.type === 'text' ? textCornersMm(shape) : shape.type === 'path' ? shape.pointsMm : [];
+    for (const [x, y] of points) nearestSq = Math.min(nearestSq, x * x + y * y);
   }
   return Math.sqrt(nearestSq);
 }

@@ -41,6 +41,13 @@ describe('renderSvg', () => {
     expect(() => num(Infinity)).toThrow(/non-finite/);
   });
 
+  it('writes every number as String() writes it rounded to 4 decimals, signs and whole parts included', () => {
+    // ECMAScript Number::toString (ECMA-262 §6.1.6.1.20) is the independent writer here.
+    const values = [-0.0005, -0.5, -1, -12.04, 1023.9999, 1024.5, -1023.25, -4096.0001, 0.1, 7, 63.8483, -63.8483];
+    for (let i = 0; i < 2000; i += 1) values.push((i * 7919) % 20000 / 9.7 - 1000);
+    for (const value of values) expect(num(value), String(value)).toBe(String(Math.round(value * 1e4) / 1e4));
+  });
+
   it('the builder guard names the bad field instead of emitting NaN', () => {
     const bad = tiny([{ type: 'line', x1Mm: 0, y1Mm: 0, x2Mm: Number.NaN, y2Mm: 1, strokeMm: 0.2 }]);
     expect(() => assertFiniteDrawing(bad)).toThrow('shapes[0] (line).x2Mm');
