@@ -10,15 +10,17 @@ import { readFileSync, writeFileSync } from 'node:fs';
 import http from 'node:http';
 import os from 'node:os';
 import path from 'node:path';
-import { pathToFileURL } from 'node:url';
+import { execFile } from 'node:child_process';
+import { promisify } from 'node:util';
 import { bundleServerCode } from '../scripts/server-bundle.mjs';
 import { drive, type LoadFigures, type LoadRequest } from './load/cannon';
 import { drivePolitely, type PoliteFigures } from './load/polite-client';
 import { assertBuilt, peakRssMb, removeFolder, rssMb, startServer, temporaryDatabase, type RunningServer } from './load/server';
 import { signIn } from './load/sign-in';
 import { addListRows, LIST_ROWS, LOAD_USER, LOAD_WORKSPACE } from './load/workspace-rows';
-import { timeAlternating } from './stats';
+import type { SvgRatioTiming } from './load/svg-ratio-timing';
 
+const run = promisify(execFile);
 const RUN_S = Number(process.env.BENCH_LOAD_SECONDS) || 20;
 const SHORT_S = Math.max(5, Math.round(RUN_S / 2));
 const MANY = 16;
@@ -167,17 +169,16 @@ async function listFigures(baseUrl: string, cookie: string) {
 }
 
 /** Layout + SVG of a wheel's scale (the app's code) against the bare writer of the same ticks. */
+/** Layout + SVG against the bare writer, timed in a fresh process (bench/load/svg-ratio-timing.ts) with the server stopped. */
 async function svgRatio() {
-  // The sheet code as the server runs it: bundled (scripts/server-bundle.mjs), beside the PDF worker in build/.
-  const file = await bundleServerCode('bench/load/svg-ratio-code.ts', 'build/bench-svg-ratio.mjs');
-  const code = (await import(pathToFileURL(file).href)) as typeof import('./load/svg-ratio-code');
-  const [app, yardstick] = await timeAlternating(code.layoutAndSvg, code.bareSvg, { warmup: 200, runs: 1000 });
-  const whole = await timeAlternating(code.wholeSheetSvg, code.bareSvg, { warmup: 50, runs: 300 });
-  const ratio = app.medianMs / yardstick.medianMs;
-  console.log(`\nlayout + SVG of a ${code.RATIO_DIAMETER_MM} mm wheel's scale: median ${app.medianMs.toFixed(3)} ms; bare string-built SVG of the same ticks: ${yardstick.medianMs.toFixed(3)} ms; ratio ${ratio.toFixed(2)}×`);
-  console.log(`(the whole sheet, title block and scale checks included: ${whole[0].medianMs.toFixed(3)} ms)`);
+  const file = await bundleServerCode('bench/load/svg-ratio-timing.ts', 'build/bench-svg-ratio.mjs');
+  const { stdout } = await run(process.execPath, [file], { env: { ...process.env, NODE_ENV: 'production' } });
+  const timing = JSON.parse(stdout) as SvgRatioTiming;
+  const ratio = timing.layoutAndSvgMs / timing.bareSvgMs;
+  console.log(`\nlayout + SVG of a ${timing.diameterMm} mm wheel's scale (distinct diameters from there on, both sides): median ${timing.layoutAndSvgMs.toFixed(3)} ms; bare string-built SVG of the same ticks: ${timing.bareSvgMs.toFixed(3)} ms; ratio ${ratio.toFixed(2)}×`);
+  console.log(`(the block with the median ratio of ${timing.blockRatios.length}: ${timing.blockRatios.map((r) => r.toFixed(2)).join(', ')}; the whole sheet, title block and scale checks included: ${timing.wholeSheetMs.toFixed(3)} ms)`);
   check('layout + SVG / bare string-built SVG', ratio, '×', '≤ 1.3', ratio <= 1.3);
-  return { layoutAndSvgMs: app.medianMs, bareSvgMs: yardstick.medianMs, ratio, wholeSheetMs: whole[0].medianMs };
+  return { ...timing, ratio };
 }
 
 function writeResults(load: object): void {
@@ -211,6 +212,8 @@ async function main(): Promise<void> {
     const lists = await listFigures(server.baseUrl, cookie);
     const peakMb = peakRssMb(server.pid);
     check('peak RSS of the server', peakMb, 'MB', '≤ 450', peakMb <= 450);
+    await server.stop();
+    server = undefined;
     const svgVsBare = await svgRatio();
 
     console.log('\ntarget                                                   measured     target  result');

@@ -50,8 +50,9 @@ export function ticksInAlongRange(fromIndex: number, toIndex: number, finestLeve
   const last = Math.min(toIndex, fromIndex + 4 * HALF_DEG_PER_TURN); // hard cap
   // Only every (2 × finestLevel)-th half degree can carry a kept tick: a crank index is ± the along
   // index modulo 720, which every step divides, so the two are multiples of the step together.
-  const step = finestLevel * 2;
-  for (let alongIndex = Math.ceil(fromIndex / step) * step + 0; alongIndex <= last; alongIndex += step) {
+  // `| 0` keeps the indices small integers: as doubles, every % below would be a floating-point remainder.
+  const step = (finestLevel * 2) | 0;
+  for (let alongIndex = (Math.ceil(fromIndex / step) * step) | 0; alongIndex <= last; alongIndex += step) {
     const crankIndex = crankIndexFromAlongIndex(alongIndex, carrier);
     const level = levelOfHalfDegIndex(crankIndex);
     if (level < finestLevel) continue;

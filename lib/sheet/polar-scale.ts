@@ -209,8 +209,7 @@ function tickShapes(o: PolarScaleOptions, radius: (depthMm: number) => number, i
   // The wheel angle in half degrees, as wheelAngleFromAlongDeg gives it for alongIndex / 2, in whole numbers.
   const sense = o.rotation === 'cw' ? 1 : -1;
   for (const tick of o.marks.ticks) {
-    const wrapped = (sense * tick.alongIndex) % 720;
-    const index = wrapped < 0 ? wrapped + 720 : wrapped;
+    const index = ((((sense * tick.alongIndex) | 0) % 720) + 720) % 720;
     const sin = trig[2 * index]!;
     const cos = trig[2 * index + 1]!;
     const level = tick.level;

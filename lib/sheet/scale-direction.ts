@@ -47,7 +47,7 @@ export function btdcToCrankDeg(btdcDeg: number): number {
 
 /** Integer crank index in half degrees [0, 720) for an along index in half degrees. */
 export function crankIndexFromAlongIndex(alongIndex: number, carrier: Carrier): number {
-  const raw = carrier === 'rotating' ? -alongIndex : alongIndex;
-  const wrapped = raw % 720;
-  return wrapped < 0 ? wrapped + 720 : wrapped + 0;
+  // Whole-number arithmetic throughout (no −0, no floating remainder): the hot loops of every scale call this.
+  const raw = (carrier === 'rotating' ? -alongIndex : alongIndex) | 0;
+  return ((raw % 720) + 720) % 720;
 }
