@@ -17,8 +17,8 @@ const request = sheetRequestSchema.parse({ kind: 'wheel', diameterMm: DIAMETER_M
 /**
  * Both sides draw a wheel no earlier call drew, 128.4 mm plus a new hundred-thousandth each time (the
  * same marks and labels throughout), as a server drawing its callers' wheels does and as the load runs
- * ask (distinct diameters). Drawing one wheel over and over would let the runtime's number-to-string
- * cache answer the bare writer's String() calls, which no server sees.
+ * ask (distinct diameters). Drawing one wheel over and over lets the runtime's number-to-string cache
+ * answer part of the bare writer's String() calls (about 6 % of its time here), which no server sees.
  */
 function distinctDiameters(): () => number {
   let calls = 0;

@@ -16,18 +16,24 @@ function grow(box: Box, x: number, y: number, pad = 0): void {
 
 /** Corners of the box a text occupies (estimated advance width, ascent ≈ 0.8 em, descent ≈ 0.25 em), rotated. */
 export function textCornersMm(shape: Extract<Shape, { type: 'text' }>): Array<[number, number]> {
+  const corners: Array<[number, number]> = [];
+  forEachTextCornerMm(shape, (x, y) => corners.push([x, y]));
+  return corners;
+}
+
+/** textCornersMm's corners, in the same order, handed to `visit` one by one (nothing allocated per text). */
+export function forEachTextCornerMm(shape: Extract<Shape, { type: 'text' }>, visit: (xMm: number, yMm: number) => void): void {
   const width = textWidthMm(shape.text, shape.sizeMm);
   const start = shape.anchor === 'start' ? 0 : shape.anchor === 'middle' ? -width / 2 : -width;
   const top = -0.8 * shape.sizeMm;
   const bottom = 0.25 * shape.sizeMm;
   const c = cosDeg(shape.rotateDeg);
   const s = sinDeg(shape.rotateDeg);
-  return [
-    [start, top],
-    [start + width, top],
-    [start + width, bottom],
-    [start, bottom],
-  ].map(([u, v]) => [shape.xMm + u! * c - v! * s, shape.yMm + u! * s + v! * c] as [number, number]);
+  const corner = (u: number, v: number) => visit(shape.xMm + u * c - v * s, shape.yMm + u * s + v * c);
+  corner(start, top);
+  corner(start + width, top);
+  corner(start + width, bottom);
+  corner(start, bottom);
 }
 
 /** The box a shape inks, strokes included, after `map` (positions mapped, text sizes kept). */

@@ -2,7 +2,7 @@ import type { Shape } from './drawing';
 import type { SheetRequest } from './sheet-request';
 import { text } from './shapes';
 import { lengthWidthMm, TEXT_MM } from './sheet-style';
-import { paragraphsOf, wrappedLineCount, wrapText, type Paragraphs } from './text-wrap';
+import { wordLengthsOf, wrappedLineCount, wrapText, type WordLengths } from './text-wrap';
 
 /**
  * "How to use this sheet": a few numbered steps per kind of sheet, in the trade's words
@@ -101,9 +101,9 @@ export function howToShapes(steps: readonly string[], widthMm: number, x: number
 
 const IN_CIRCLE_MM = 1.8;
 
-function letterCount(paragraphs: Paragraphs): number {
+function letterCount(paragraphs: WordLengths): number {
   let letters = 0;
-  for (const words of paragraphs) for (const word of words) letters += word.length;
+  for (const words of paragraphs) for (const length of words) letters += length;
   return letters;
 }
 
@@ -116,7 +116,7 @@ export function howToInCircle(steps: readonly string[], centreMm: [number, numbe
   if (!steps.length || radiusMm < 20) return undefined;
   const [cx, cy] = centreMm;
   const size = IN_CIRCLE_MM;
-  const stepWords = steps.map(paragraphsOf);
+  const stepWords = steps.map(wordLengthsOf);
   const stepLetters = stepWords.map(letterCount);
   for (let share = 0.95; share >= 0.5; share -= 0.05) {
     const widthMm = 2 * radiusMm * share;

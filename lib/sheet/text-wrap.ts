@@ -24,26 +24,16 @@ export function fitTitle(title: string, widthMm: number, sizeMm: number, minSize
   return { rows: wrapText(title, size, wrapWidthMm), sizeMm: size, wrapWidthMm };
 }
 
-/** The words of each paragraph of a text, split once so a caller can try many widths. */
-export type Paragraphs = readonly (readonly string[])[];
-
-export function paragraphsOf(content: string): Paragraphs {
-  return content.split('\n').map((paragraph) => paragraph.split(/\s+/).filter(Boolean));
-}
-
 /**
  * Greedy word wrap to a width in mm, using the sheet's glyph-width estimate; over-long words are cut.
  * Widths come from character counts (lengthWidthMm), so no candidate line is built just to be measured.
  */
 export function wrapText(content: string, sizeMm: number, widthMm: number): string[] {
-  return wrapParagraphs(paragraphsOf(content), sizeMm, widthMm);
-}
-
-export function wrapParagraphs(paragraphs: Paragraphs, sizeMm: number, widthMm: number): string[] {
   const lines: string[] = [];
-  for (const words of paragraphs) {
+  for (const paragraph of content.split('\n')) {
     let current = '';
-    for (const whole of words) {
+    for (const whole of paragraph.split(/\s+/)) {
+      if (!whole) continue;
       const pieces = lengthWidthMm(whole.length, sizeMm) > widthMm ? splitLongWord(whole, sizeMm, widthMm) : [whole];
       for (const word of pieces) {
         if (current && lengthWidthMm(current.length + 1 + word.length, sizeMm) > widthMm) {
@@ -57,18 +47,44 @@ export function wrapParagraphs(paragraphs: Paragraphs, sizeMm: number, widthMm: 
   return lines;
 }
 
+/** The lengths of a text's words, paragraph by paragraph, as wrapText splits them ('\n' between paragraphs, any /\s/ between words). */
+export type WordLengths = readonly (readonly number[])[];
+
+/** What /\s/ matches (ECMA-262 WhiteSpace and LineTerminator), by UTF-16 code unit. */
+function isSpace(code: number): boolean {
+  if (code < 0x80) return code === 32 || (code >= 9 && code <= 13);
+  return code === 0xa0 || code === 0x1680 || (code >= 0x2000 && code <= 0x200a) || code === 0x2028 || code === 0x2029 || code === 0x202f || code === 0x205f || code === 0x3000 || code === 0xfeff;
+}
+
+/** One pass over the text, nothing split out: what a layout trying width after width needs. */
+export function wordLengthsOf(content: string): WordLengths {
+  let words: number[] = [];
+  const paragraphs: number[][] = [words];
+  let length = 0;
+  for (let i = 0; i < content.length; i += 1) {
+    const code = content.charCodeAt(i);
+    if (code === 10 || isSpace(code)) {
+      if (length) words.push(length);
+      length = 0;
+      if (code === 10) paragraphs.push((words = []));
+    } else length += 1;
+  }
+  if (length) words.push(length);
+  return paragraphs;
+}
+
 /**
- * How many lines wrapParagraphs gives, from the words' lengths alone: what a layout trying
- * width after width needs, without building a line. Tested against wrapParagraphs.
+ * How many lines wrapText gives, from the words' lengths alone, without building a line.
+ * Tested against wrapText.
  */
-export function wrappedLineCount(paragraphs: Paragraphs, sizeMm: number, widthMm: number): number {
+export function wrappedLineCount(paragraphs: WordLengths, sizeMm: number, widthMm: number): number {
   let count = 0;
   const perPiece = Math.max(1, Math.floor(widthMm / textWidthMm('m', sizeMm)));
   for (const words of paragraphs) {
     let current = 0; // characters on the line so far; 0 for an empty line
     for (const word of words) {
-      const long = lengthWidthMm(word.length, sizeMm) > widthMm;
-      for (let left = word.length; left > 0; ) {
+      const long = lengthWidthMm(word, sizeMm) > widthMm;
+      for (let left = word; left > 0; ) {
         const piece = long ? Math.min(perPiece, left) : left;
         left -= piece;
         if (current && lengthWidthMm(current + 1 + piece, sizeMm) > widthMm) {

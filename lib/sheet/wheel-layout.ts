@@ -5,7 +5,7 @@ import { polarDepths, polarScaleShapes, TICK_DEPTH_MM, type PolarDepths, type Po
 import { numberStrideFor, scaleMarks } from './scale-marks';
 import type { SheetRequest } from './sheet-request';
 import { circle, line } from './shapes';
-import { textCornersMm } from './bounds';
+import { forEachTextCornerMm } from './bounds';
 import { howToInCircle, howToSteps } from './how-to';
 import { STROKE_MM, textWidthMm } from './sheet-style';
 import {
@@ -186,13 +186,15 @@ export function ringLayout(req: SheetRequest): PolarLayout {
 /** How near to the centre (0, 0) any of the scale's ink comes. */
 function nearestInkMm(shapes: readonly Shape[]): number {
   let nearestSq = Infinity;
+  const consider = (x: number, y: number) => {
+    nearestSq = Math.min(nearestSq, x * x + y * y);
+  };
   for (const shape of shapes) {
     if (shape.type === 'line') {
-      nearestSq = Math.min(nearestSq, shape.x1Mm * shape.x1Mm + shape.y1Mm * shape.y1Mm, shape.x2Mm * shape.x2Mm + shape.y2Mm * shape.y2Mm);
-      continue;
-    }
-    const points = shape.type === 'text' ? textCornersMm(shape) : shape.type === 'path' ? shape.pointsMm : [];
-    for (const [x, y] of points) nearestSq = Math.min(nearestSq, x * x + y * y);
+      consider(shape.x1Mm, shape.y1Mm);
+      consider(shape.x2Mm, shape.y2Mm);
+    } else if (shape.type === 'text') forEachTextCornerMm(shape, consider);
+    else if (shape.type === 'path') for (const [x, y] of shape.pointsMm) consider(x, y);
   }
   return Math.sqrt(nearestSq);
 }
