@@ -57,9 +57,16 @@ async function waitUntilUp(baseUrl: string, child: ChildProcess): Promise<void> 
   throw new Error('the server did not answer /api/health within 60 s');
 }
 
-/** Extra node flags for the server (BENCH_SERVER_NODE_OPTIONS, e.g. `--cpu-prof --cpu-prof-dir=/tmp/prof` to profile it). */
+/** The node flags `npm start` gives scripts/server.mjs (package.json), so the bench runs the server as it is run. */
+function startScriptNodeFlags(): string[] {
+  const { scripts } = JSON.parse(readFileSync(path.join(process.cwd(), 'package.json'), 'utf8')) as { scripts: Record<string, string> };
+  const words = scripts.start!.split(/\s+/);
+  return words.slice(words.indexOf('node') + 1, words.indexOf('scripts/server.mjs'));
+}
+
+/** npm start's node flags, then any extra (BENCH_SERVER_NODE_OPTIONS, e.g. `--cpu-prof --cpu-prof-dir=/tmp/prof` to profile it). */
 function serverNodeOptions(): string[] {
-  return (process.env.BENCH_SERVER_NODE_OPTIONS ?? '').split(' ').filter(Boolean);
+  return [...startScriptNodeFlags(), ...(process.env.BENCH_SERVER_NODE_OPTIONS ?? '').split(' ').filter(Boolean)];
 }
 
 export async function startServer(dbFile: string, dir: string): Promise<RunningServer> {
