@@ -20,36 +20,45 @@ function decimalsOf(tenThousandths: number): string {
   return (tenThousandths < 10 ? '.000' : tenThousandths < 100 ? '.00' : tenThousandths < 1000 ? '.0' : '.') + tenThousandths;
 }
 
-// '', '.0001', … '.9999', trailing zeros dropped: made on the first SVG, then shared.
-let decimalsTable: string[] | undefined;
+// Whole millimetres below this (every sheet's coordinates) are written from tables, with their sign.
+const WHOLES = 1024;
+
+type NumberTables = { decimals: string[]; wholes: string[]; negativeWholes: string[] };
+let tables: NumberTables | undefined;
+
+/** '', '.0001', … '.9999' (trailing zeros dropped), '0'…'1023' and '-0'…'-1023': made on the first SVG, then shared. */
+function numberTables(): NumberTables {
+  tables ??= {
+    decimals: Array.from({ length: 10000 }, (_, i) => (i === 0 ? '' : decimalsOf(i))),
+    wholes: Array.from({ length: WHOLES }, (_, i) => String(i)),
+    negativeWholes: Array.from({ length: WHOLES }, (_, i) => `-${i}`),
+  };
+  return tables;
+}
 
 /**
  * Fixed small precision (4 decimals ≈ 0.1 µm), no exponent, never NaN. Written from the whole
  * count of ten-thousandths, which gives the digits String(rounded) gives without the
- * float-to-shortest conversion (a third of the SVG's time on a wheel).
+ * float-to-shortest conversion (a third of the SVG's time on a wheel): below 1024 mm, two
+ * table reads and one join.
  */
 export function num(value: number): string {
-  if (!Number.isFinite(value)) throw new Error(`SVG renderer was given a non-finite number (${value})`);
   const scaled = Math.round(value * 1e4);
-  if (scaled === 0) return '0';
   const magnitude = scaled < 0 ? -scaled : scaled;
-  // Past 2^53 the count is no longer exact: the general conversion then.
-  if (magnitude >= 2 ** 53) return String(scaled / 1e4);
-  decimalsTable ??= Array.from({ length: 10000 }, (_, i) => (i === 0 ? '' : decimalsOf(i)));
-  const whole = Math.floor(magnitude / 1e4);
-  const decimals = decimalsTable[magnitude - whole * 1e4]!;
-  if (whole < WHOLES) {
-    wholesTable ??= Array.from({ length: WHOLES }, (_, i) => String(i));
-    negativeWholesTable ??= Array.from({ length: WHOLES }, (_, i) => `-${i}`);
-    return (scaled < 0 ? negativeWholesTable : wholesTable)[whole] + decimals;
-  }
-  return (scaled < 0 ? '-' : '') + whole + decimals;
+  if (!(magnitude < WHOLES * 1e4)) return largeOrBadNum(value, scaled, magnitude); // NaN fails every comparison
+  if (magnitude === 0) return '0';
+  const { decimals, wholes, negativeWholes } = numberTables();
+  const whole = (magnitude / 1e4) | 0;
+  return (scaled < 0 ? negativeWholes : wholes)[whole]! + decimals[magnitude - whole * 1e4]!;
 }
 
-// Whole millimetres below this (every sheet's coordinates) come from tables too, with their sign: one join per number.
-const WHOLES = 1024;
-let wholesTable: string[] | undefined;
-let negativeWholesTable: string[] | undefined;
+function largeOrBadNum(value: number, scaled: number, magnitude: number): string {
+  if (!Number.isFinite(value)) throw new Error(`SVG renderer was given a non-finite number (${value})`);
+  // Past 2^53 the count is no longer exact: the general conversion then.
+  if (magnitude >= 2 ** 53) return String(scaled / 1e4);
+  const whole = Math.floor(magnitude / 1e4);
+  return (scaled < 0 ? '-' : '') + whole + numberTables().decimals[magnitude - whole * 1e4]!;
+}
 
 const ESCAPES: Record<string, string> = { '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' };
 
