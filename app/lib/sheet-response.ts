@@ -1,5 +1,6 @@
 import 'server-only';
 import type { DateFormat } from '@/lib/format/date-format';
+import { dateTimeFormat } from '@/lib/format/intl-formatters';
 import { buildDrawing } from '@/lib/sheet/build-drawing';
 import { strToU8, zipSync } from 'fflate';
 import type { Drawing } from '@/lib/sheet/drawing';
@@ -25,7 +26,7 @@ const CACHE_CONTROL = 'private, no-cache';
 /** Today (YYYY-MM-DD) in the reader's time zone: the date a sheet drawn now carries in its title block. */
 export function sheetDay(dateFormat: DateFormat, now = new Date()): string {
   // en-CA writes the calendar date as YYYY-MM-DD.
-  return new Intl.DateTimeFormat('en-CA', { timeZone: dateFormat.timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
+  return dateTimeFormat('en-CA', { timeZone: dateFormat.timeZone, year: 'numeric', month: '2-digit', day: '2-digit' }).format(now);
 }
 
 /** A sheet drawn for a day: SVG here (a millisecond or two), PDF in the worker pool. */

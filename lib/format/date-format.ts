@@ -4,6 +4,8 @@
  * deployment names another, so the server render, the browser and the printed sheet all say the same.
  */
 
+import { dateTimeFormat, supportedDateLocale } from './intl-formatters';
+
 export type DateFormat = { locale: string; timeZone: string };
 
 /** When the request names no language Intl knows. */
@@ -25,18 +27,10 @@ function acceptedTags(header: string): string[] {
     .map((entry) => entry.tag);
 }
 
-function supportedLocale(tag: string): string | null {
-  try {
-    return Intl.DateTimeFormat.supportedLocalesOf([tag])[0] ?? null;
-  } catch {
-    return null; // not a well-formed language tag
-  }
-}
-
 /** The first language of an Accept-Language header that Intl can write dates in, else DEFAULT_LOCALE. */
 export function localeFromAcceptLanguage(header: string | null | undefined): string {
   for (const tag of acceptedTags(header ?? '')) {
-    const locale = supportedLocale(tag);
+    const locale = supportedDateLocale(tag);
     if (locale) return locale;
   }
   return DEFAULT_LOCALE;
@@ -46,7 +40,7 @@ export function localeFromAcceptLanguage(header: string | null | undefined): str
 export function timeZoneOrUtc(name: string | null | undefined): string {
   if (!name) return DEFAULT_TIME_ZONE;
   try {
-    return new Intl.DateTimeFormat('en', { timeZone: name }).resolvedOptions().timeZone;
+    return dateTimeFormat('en', { timeZone: name }).resolvedOptions().timeZone;
   } catch {
     return DEFAULT_TIME_ZONE;
   }
@@ -73,7 +67,7 @@ const TIME_PARTS: Intl.DateTimeFormatOptions = { hour: '2-digit', minute: '2-dig
 
 function written(value: string | Date, format: DateFormat, parts: Intl.DateTimeFormatOptions): string {
   const date = storedTime(value);
-  return date ? new Intl.DateTimeFormat(format.locale, { ...parts, timeZone: format.timeZone }).format(date) : '';
+  return date ? dateTimeFormat(format.locale, { ...parts, timeZone: format.timeZone }).format(date) : '';
 }
 
 /** The calendar day, e.g. "1 Dec 2026" (en-GB) or "Dec 1, 2026" (en-US); '' for no time. A stored day keeps its date. */

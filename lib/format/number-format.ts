@@ -11,24 +11,14 @@
  *   rules (Intl.PluralRules('en')): French rules call 0 "one" and would write "0 template".
  */
 
+import { numberFormat } from './intl-formatters';
+
 /**
  * Degrees printed on a sheet (the scale's numerals, advance marks, a pointer correction in the note)
  * are written with '.' whatever the reader's locale: they name marks on the scale, and a decimal
  * comma beside the commas of a list of marks would be ambiguous. Lengths on a sheet follow the reader.
  */
 export const SHEET_NUMERALS_LOCALE = 'en';
-
-const formatters = new Map<string, Intl.NumberFormat>();
-
-function formatter(locale: string, options: Intl.NumberFormatOptions): Intl.NumberFormat {
-  const key = `${locale}|${JSON.stringify(options)}`;
-  let found = formatters.get(key);
-  if (!found) {
-    found = new Intl.NumberFormat(locale, options);
-    formatters.set(key, found);
-  }
-  return found;
-}
 
 /** Places after the decimal sign: `places` exactly, or up to `maxPlaces` with trailing zeros dropped. */
 export type Places = { places: number } | { maxPlaces: number };
@@ -40,7 +30,7 @@ export function formatDecimal(value: number, locale: string, places: Places): st
   // Rounded to the shown places first, so -0.001 shown with 2 places is "0.00", not "-0.00".
   const step = 10 ** ('places' in places ? places.places : places.maxPlaces);
   const rounded = Math.round(value * step) / step || 0;
-  return formatter(locale, { ...digits, useGrouping: false }).format(rounded);
+  return numberFormat(locale, { ...digits, useGrouping: false }).format(rounded);
 }
 
 /** "120.5 mm" / "120,5 mm": a length in millimetres, up to two places unless told otherwise. */
@@ -55,7 +45,7 @@ export function formatDeg(valueDeg: number, locale: string, places: Places = { p
 
 /** A whole count, grouped in the reader's locale: "12,000" (en-GB), "12.000" (de-DE). */
 export function formatCount(count: number, locale: string): string {
-  return formatter(locale, { maximumFractionDigits: 0 }).format(count);
+  return numberFormat(locale, { maximumFractionDigits: 0 }).format(count);
 }
 
 const englishPlurals = new Intl.PluralRules('en');
@@ -77,7 +67,7 @@ export function countWithVerb(count: number, noun: [string, string], verb: [stri
 
 /** The reader's decimal sign: "." (en-GB), "," (de-DE). */
 function decimalSign(locale: string): string {
-  return formatter(locale, { minimumFractionDigits: 1 }).formatToParts(1.5).find((part) => part.type === 'decimal')?.value ?? '.';
+  return numberFormat(locale, { minimumFractionDigits: 1 }).formatToParts(1.5).find((part) => part.type === 'decimal')?.value ?? '.';
 }
 
 /**
