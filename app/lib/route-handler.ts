@@ -50,7 +50,7 @@ export async function guarded(
   const maxBytes = options?.maxBytes ?? MAX_JSON_BODY_BYTES;
   const tooLarge = options?.tooLarge ?? (() => bodyTooLarge(maxBytes));
   if (Number(request.headers.get('content-length') ?? '0') > maxBytes) return tooLarge();
-  const limited = bodyLimitedRequest(request, maxBytes);
+  const limited = framedWithin(request, maxBytes) ? { request, exceeded: () => false } : bodyLimitedRequest(request, maxBytes);
   const response = await answerErrors(() => body!(limited.request), (err) => (limited.exceeded() || err instanceof BodyTooLargeError ? tooLarge() : null));
   return limited.exceeded() && response.status !== 413 ? tooLarge() : response;
 }
@@ -81,6 +81,17 @@ function mediaTypeRefusal(request: Request, accepts: BodyKind[]): Response | nul
   return jsonError(415, `This request takes ${expected}${mediaType ? `, not ${mediaType}` : ''}`, [
     { path: '(body)', message: `Content-Type must be ${expected}` },
   ]);
+}
+
+/**
+ * Whether the body's length is fixed by a declared Content-Length within the limit. Without
+ * Transfer-Encoding, Content-Length frames an HTTP/1.1 body (RFC 9112 §6.3), and node's parser ends
+ * the body stream there, so it cannot run past the limit and needs no counting wrapper (a stream and
+ * a Request object per call, measurable under load).
+ */
+function framedWithin(request: Request, maxBytes: number): boolean {
+  const length = request.headers.get('content-length');
+  return length !== null && /^\d+$/.test(length) && Number(length) <= maxBytes && !request.headers.has('transfer-encoding');
 }
 
 function hasBody(request: Request): boolean {

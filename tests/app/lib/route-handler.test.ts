@@ -59,6 +59,19 @@ describe('guarded for a state-changing request', () => {
     expect((await guarded(typeless, {}, ok)).status).toBe(415);
   });
 
+  it('hands a body framed by a Content-Length within the limit to the handler whole', async () => {
+    const body = JSON.stringify({ note: 'x'.repeat(1000) });
+    const response = await guarded(post({ 'content-type': 'application/json', 'content-length': String(body.length) }, body), { maxBytes: 2000 }, ok);
+    expect(response.status).toBe(200);
+    expect(await response.json()).toEqual({ text: body });
+  });
+
+  it('still counts a body that also names a Transfer-Encoding (RFC 9112 §6.3: the length is not the framing then)', async () => {
+    const body = 'x'.repeat(3000);
+    const headers = { 'content-type': 'application/json', 'content-length': '10', 'transfer-encoding': 'chunked' };
+    expect((await guarded(post(headers, body), { maxBytes: 2000 }, ok)).status).toBe(413);
+  });
+
   it('answers 413 for a declared length over the limit without calling the handler', async () => {
     let called = false;
     const response = await guarded(post({ 'content-type': 'application/json', 'content-length': String(65 * 1024) }), {}, async () => {
