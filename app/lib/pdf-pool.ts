@@ -53,8 +53,12 @@ function pool(): Piscina<PdfJob, RenderedPdf> {
     idleTimeout: 60_000,
     // A ceiling on each worker's heap: the largest sheet (a 600 mm wheel at 0.2 mm pitch, tiled) needs ~80 MB.
     // A worker that passes it is ended and replaced, its memory returned, instead of the process growing.
-    // A 16 MB young generation (V8's default is 3 × 16 MB semi-spaces) costs no measurable speed and
-    // keeps ~30 MB less resident per worker (two workers after 200 sheets: 312 MB instead of 372 MB).
+    // A 16 MB young generation (V8's default is 3 × 16 MB semi-spaces) keeps ~30 MB less resident per worker
+    // (two workers after 200 sheets: 312 MB instead of 372 MB). Under `npm start` the process-wide
+    // --max-semi-space-size=8 wins over this limit (V8 flags beat per-isolate limits). The trade, measured with the
+    // load bench's one-caller run for 10 s: with 8 MB semi-spaces the drawing worker ran ~480 scavenges (~3 ms of
+    // pauses per sheet, spread over V8's helper threads); with 32 MB, ~125 (~1.1 ms) and up to 80 sheets/s at 16
+    // callers, but the server's peak resident memory rose from ~375 to ~560 MB, past the 450 MB bound.
     resourceLimits: { maxOldGenerationSizeMb: WORKER_HEAP_MB, maxYoungGenerationSizeMb: WORKER_YOUNG_MB },
   });
   return global[POOL];
