@@ -168,7 +168,6 @@ async function listFigures(baseUrl: string, cookie: string) {
   return { templates, builds };
 }
 
-/** Layout + SVG of a wheel's scale (the app's code) against the bare writer of the same ticks. */
 /** Layout + SVG against the bare writer, timed in a fresh process (bench/load/svg-ratio-timing.ts) with the server stopped. */
 async function svgRatio() {
   const file = await bundleServerCode('bench/load/svg-ratio-timing.ts', 'build/bench-svg-ratio.mjs');

@@ -24,7 +24,7 @@ fi
 # Listens on this machine only (127.0.0.1) unless HOST is set on purpose, e.g. HOST=0.0.0.0 for the shop's network.
 export HOST="${HOST:-127.0.0.1}" PORT="${PORT:-3000}"
 # The server as `npm start` runs it: with the node flags of package.json's start script.
-start_flags=$(node -p "const w = require('./package.json').scripts.start.split(/\\s+/); w.slice(w.indexOf('node') + 1, w.indexOf('scripts/server.mjs')).join(' ')")
+start_flags=$(node scripts/start-flags.mjs)
 # shellcheck disable=SC2086 # the flags are words
 node $start_flags scripts/server.mjs &
 server_pid=$!

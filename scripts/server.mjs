@@ -17,9 +17,10 @@ import next from 'next';
 // holds: the load bench measured the same throughput and a third of the peak. It is no ceiling: a large
 // import still gets the memory it needs. The flag is read at each collection; worker threads share it.
 //   RIMSCALE_HEAP_GROWTH_PERCENT  growth allowed between full collections (default 25; 0: V8's own choice)
-// `npm start` also gives this thread 8 MB semi-spaces (V8's default is 16; node's --max-semi-space-size can only be
+// `npm start` also gives the process 8 MB semi-spaces (V8's default is 16; node's --max-semi-space-size can only be
 // set at start, so it is in package.json): under the load bench the server's peak resident memory was 418–420 MB
-// with them and 431–465 MB without, at the same throughput within the machine's run-to-run spread.
+// with them and 431–465 MB without, at the same throughput within the machine's run-to-run spread. Being a V8 flag,
+// it holds for the PDF worker threads too, over the pool's own young-generation limit (app/lib/pdf-pool.ts).
 const heapGrowthPercent = Number(process.env.RIMSCALE_HEAP_GROWTH_PERCENT ?? 25);
 if (heapGrowthPercent > 0) v8.setFlagsFromString(`--heap-growing-percent=${Math.round(heapGrowthPercent)}`);
 

@@ -10,6 +10,7 @@ import { existsSync, mkdtempSync, readFileSync, readdirSync, rmSync } from 'node
 import net from 'node:net';
 import os from 'node:os';
 import path from 'node:path';
+import { startNodeFlags } from '../../scripts/start-flags.mjs';
 
 export type RunningServer = { baseUrl: string; pid: number; dbFile: string; stop: () => Promise<void> };
 
@@ -57,16 +58,9 @@ async function waitUntilUp(baseUrl: string, child: ChildProcess): Promise<void> 
   throw new Error('the server did not answer /api/health within 60 s');
 }
 
-/** The node flags `npm start` gives scripts/server.mjs (package.json), so the bench runs the server as it is run. */
-function startScriptNodeFlags(): string[] {
-  const { scripts } = JSON.parse(readFileSync(path.join(process.cwd(), 'package.json'), 'utf8')) as { scripts: Record<string, string> };
-  const words = scripts.start!.split(/\s+/);
-  return words.slice(words.indexOf('node') + 1, words.indexOf('scripts/server.mjs'));
-}
-
 /** npm start's node flags, then any extra (BENCH_SERVER_NODE_OPTIONS, e.g. `--cpu-prof --cpu-prof-dir=/tmp/prof` to profile it). */
 function serverNodeOptions(): string[] {
-  return [...startScriptNodeFlags(), ...(process.env.BENCH_SERVER_NODE_OPTIONS ?? '').split(' ').filter(Boolean)];
+  return [...startNodeFlags(), ...(process.env.BENCH_SERVER_NODE_OPTIONS ?? '').split(' ').filter(Boolean)];
 }
 
 export async function startServer(dbFile: string, dir: string): Promise<RunningServer> {
