@@ -2,6 +2,7 @@ import 'server-only';
 import path from 'node:path';
 import { Font } from '@react-pdf/renderer';
 import type { TextShape } from '@/lib/sheet/drawing';
+import { withShapingMemo } from './shaping-memo';
 
 /**
  * The shipped DejaVu TTFs (fonts/, see fonts/LICENSE-DejaVu.txt), registered with
@@ -13,7 +14,7 @@ type Weight = TextShape['weight'];
 /** What the painter needs from a loaded font (a fontkit font object). */
 export type PdfFontData = {
   unitsPerEm: number;
-  layout(text: string): { advanceWidth: number };
+  layout(text: string): { glyphs: unknown[]; positions: Array<{ xAdvance: number; yAdvance: number; xOffset: number; yOffset: number }>; advanceWidth: number };
   hasGlyphForCodePoint(codePoint: number): boolean;
 };
 
@@ -65,12 +66,12 @@ export type SheetFonts = Record<`${FamilyKey}-${Weight}`, PdfFontData>;
 async function loadFont(key: FamilyKey, weight: Weight): Promise<PdfFontData> {
   const descriptor = { fontFamily: PDF_FONT_FAMILY[key], fontWeight: FONT_WEIGHT[weight] };
   await Font.load(descriptor);
-  return Font.getFont(descriptor).data as unknown as PdfFontData;
+  return withShapingMemo(Font.getFont(descriptor).data as unknown as PdfFontData);
 }
 
 let loaded: Promise<SheetFonts> | undefined;
 
-/** Registers (once) and parses (once) every face the sheets use. */
+/** Registers (once) and parses (once) every face the sheets use, each with its shaped words remembered (shaping-memo.ts). */
 export function loadSheetFonts(): Promise<SheetFonts> {
   registerSheetFonts();
   loaded ??= (async () => ({

@@ -1,25 +1,10 @@
 import type { TextShape } from '@/lib/sheet/drawing';
 import { mmToPt } from '@/lib/units';
-import type { PdfFontData, SheetFonts } from './fonts';
+import type { SheetFonts } from './fonts';
 import type { PointMapping } from './page-mapping';
 import type { Painter } from './painter';
 
 const ANCHOR_SHIFT: Record<TextShape['anchor'], number> = { start: 0, middle: -0.5, end: -1 };
-
-// Advance widths in em, per face and string: sheets repeat the same numerals on every render.
-const widthCache = new Map<string, number>();
-const MAX_CACHED_WIDTHS = 5000;
-
-function advanceEm(face: string, font: PdfFontData, text: string): number {
-  const key = `${face}\u0000${text}`;
-  let em = widthCache.get(key);
-  if (em === undefined) {
-    em = font.layout(text).advanceWidth / font.unitsPerEm;
-    if (widthCache.size >= MAX_CACHED_WIDTHS) widthCache.clear();
-    widthCache.set(key, em);
-  }
-  return em;
-}
 
 /**
  * Real text in an embedded DejaVu subset (extractable, searchable), placed on its
@@ -30,7 +15,7 @@ export function paintText(p: Painter, shape: TextShape, at: PointMapping, fonts:
   const face = `${shape.font}-${shape.weight}` as const;
   const font = fonts[face];
   const sizePt = mmToPt(shape.sizeMm);
-  const widthPt = advanceEm(face, font, shape.text) * sizePt;
+  const widthPt = (font.layout(shape.text).advanceWidth / font.unitsPerEm) * sizePt;
   const xPt = at.xPt(shape.xMm);
   const yPt = at.yPt(shape.yMm);
   p.save();
