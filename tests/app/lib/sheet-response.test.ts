@@ -51,6 +51,18 @@ describe('sheet downloads through the worker pool and the cache', () => {
     expect(first.headers.get('etag')).toMatch(/^"[A-Za-z0-9_-]+"$/);
     expect(repeat.headers.get('etag')).toBe(first.headers.get('etag'));
     expect(first.headers.get('cache-control')).toBe('private, no-cache');
+    // RFC 9110 §8.6: the length of the content, so a download can show its progress.
+    expect(first.headers.get('content-length')).toBe(String(direct.byteLength));
+    expect(repeat.headers.get('content-length')).toBe(String(direct.byteLength));
+  });
+
+  it('serves one cached copy many times and leaves it whole: answers read at once and one after another are the same bytes', async () => {
+    const input: SheetRequestInput = { kind: 'wheel', diameterMm: 128.4 };
+    const direct = await directBytes(input);
+    const together = await Promise.all(Array.from({ length: 8 }, async () => bytesOf(await download(input))));
+    const after: Buffer[] = [];
+    for (let i = 0; i < 4; i += 1) after.push(await bytesOf(await download(input)));
+    for (const body of [...together, ...after]) expect(body.equals(direct)).toBe(true);
   });
 
   it('answers If-None-Match with the current ETag as 304 Not Modified without a body (RFC 9110 §13.1.2, §15.4.5)', async () => {
