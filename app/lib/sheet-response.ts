@@ -73,7 +73,6 @@ export async function sheetDownloadResponse(sheet: SheetRequest, dateFormat: Dat
     status: 200,
     headers: {
       ...validators,
-      'Content-Length': String(entry.body.byteLength),
       // A multi-page sheet as SVG is a ZIP of its pages (svgFile).
       ...(sheet.format === 'svg' && isZip(entry.body)
         ? { 'Content-Type': 'application/zip', 'Content-Disposition': `attachment; filename="${sheetFileName(sheet).replace(/\.svg$/, '.zip')}"` }
