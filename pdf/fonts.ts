@@ -2,7 +2,7 @@ import 'server-only';
 import path from 'node:path';
 import { Font } from '@react-pdf/renderer';
 import type { TextShape } from '@/lib/sheet/drawing';
-import { withShapingMemo } from './shaping-memo';
+import { withShapingMemo, type GlyphPosition } from './shaping-memo';
 
 /**
  * The shipped DejaVu TTFs (fonts/, see fonts/LICENSE-DejaVu.txt), registered with
@@ -14,7 +14,7 @@ type Weight = TextShape['weight'];
 /** What the painter needs from a loaded font (a fontkit font object). */
 export type PdfFontData = {
   unitsPerEm: number;
-  layout(text: string): { glyphs: unknown[]; positions: Array<{ xAdvance: number; yAdvance: number; xOffset: number; yOffset: number }>; advanceWidth: number };
+  layout(text: string): { glyphs: unknown[]; positions: GlyphPosition[]; advanceWidth: number };
   hasGlyphForCodePoint(codePoint: number): boolean;
 };
 

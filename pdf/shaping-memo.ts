@@ -9,7 +9,7 @@
  * call hands out fresh position objects; the glyphs are fontkit's own shared objects.
  */
 
-type GlyphPosition = { xAdvance: number; yAdvance: number; xOffset: number; yOffset: number };
+export type GlyphPosition = { xAdvance: number; yAdvance: number; xOffset: number; yOffset: number };
 
 /** The part of a fontkit font this wraps: its `layout`, in the form pdfkit calls it. */
 export type ShapingFont = {
