@@ -9,6 +9,8 @@
  * call hands out fresh position objects; the glyphs are fontkit's own shared objects.
  */
 
+import { boundedMemo } from '@/lib/bounded-memo';
+
 export type GlyphPosition = { xAdvance: number; yAdvance: number; xOffset: number; yOffset: number };
 
 /** The part of a fontkit font this wraps: its `layout`, in the form pdfkit calls it. */
@@ -16,7 +18,7 @@ export type ShapingFont = {
   layout(text: string, features?: unknown, ...rest: unknown[]): { glyphs: unknown[]; positions: GlyphPosition[] };
 };
 
-/** Words kept per font: a sheet shows a few hundred; the rest are names users type. */
+/** Words kept per font: a sheet shows a few hundred; the rest are names users type (the oldest go first). */
 export const MAX_MEMO_WORDS = 5000;
 
 /** A shaped run as fontkit's GlyphRun presents it to pdfkit: the advance follows the positions. */
@@ -43,17 +45,14 @@ function copyPositions(positions: readonly GlyphPosition[]): GlyphPosition[] {
  * through the prototype, so pdfkit embeds and subsets it as before.
  */
 export function withShapingMemo<Font extends ShapingFont>(font: Font): Font {
-  const shaped = new Map<string, { glyphs: unknown[]; positions: GlyphPosition[] }>();
+  const shaped = boundedMemo<{ glyphs: unknown[]; positions: GlyphPosition[] }>(MAX_MEMO_WORDS);
   const memoized = Object.create(font) as Font;
   memoized.layout = (text: string, ...options: unknown[]) => {
     if (options.some((option) => option !== undefined)) return font.layout(text, ...(options as [unknown]));
-    let run = shaped.get(text);
-    if (!run) {
+    const run = shaped(text, () => {
       const fresh = font.layout(text);
-      run = { glyphs: fresh.glyphs, positions: copyPositions(fresh.positions) };
-      if (shaped.size >= MAX_MEMO_WORDS) shaped.clear();
-      shaped.set(text, run);
-    }
+      return { glyphs: fresh.glyphs, positions: copyPositions(fresh.positions) };
+    });
     return new ShapedRun(run.glyphs.slice(), copyPositions(run.positions));
   };
   return memoized;

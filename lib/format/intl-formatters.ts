@@ -6,23 +6,12 @@
  * keeps the MAX_KEPT most recently built and forgets the oldest.
  */
 
+import { boundedMemo } from '../bounded-memo';
+
 const MAX_KEPT = 200;
 
-/** A memo of at most MAX_KEPT values; the first one kept is the first one forgotten. */
-function boundedMemo<T>(): (key: string, make: () => T) => T {
-  const kept = new Map<string, T>();
-  return (key, make) => {
-    const found = kept.get(key);
-    if (found !== undefined) return found;
-    const made = make();
-    if (kept.size >= MAX_KEPT) kept.delete(kept.keys().next().value!);
-    kept.set(key, made);
-    return made;
-  };
-}
-
-const numberFormats = boundedMemo<Intl.NumberFormat>();
-const dateTimeFormats = boundedMemo<Intl.DateTimeFormat>();
+const numberFormats = boundedMemo<Intl.NumberFormat>(MAX_KEPT);
+const dateTimeFormats = boundedMemo<Intl.DateTimeFormat>(MAX_KEPT);
 
 export function numberFormat(locale: string, options: Intl.NumberFormatOptions): Intl.NumberFormat {
   return numberFormats(`${locale}|${JSON.stringify(options)}`, () => new Intl.NumberFormat(locale, options));
@@ -33,7 +22,7 @@ export function dateTimeFormat(locale: string, options: Intl.DateTimeFormatOptio
   return dateTimeFormats(`${locale}|${JSON.stringify(options)}`, () => new Intl.DateTimeFormat(locale, options));
 }
 
-const supportedLocales = boundedMemo<string | null>();
+const supportedLocales = boundedMemo<string | null>(MAX_KEPT);
 
 /** The locale Intl writes dates in for a language tag, or null when it has none or the tag is malformed. */
 export function supportedDateLocale(tag: string): string | null {

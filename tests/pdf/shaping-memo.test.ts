@@ -91,12 +91,12 @@ describe('withShapingMemo', () => {
     expect(calls.map((call) => call.features)).toEqual([undefined, ['smcp'], ['smcp']]);
   });
 
-  it(`keeps at most ${MAX_MEMO_WORDS} words, then starts again and still answers each word right`, () => {
+  it(`keeps at most ${MAX_MEMO_WORDS} words, forgets the oldest first, and still answers each word right`, () => {
     const { font, calls } = countingFont();
     const memo = withShapingMemo(font);
     for (let i = 0; i <= MAX_MEMO_WORDS; i += 1) memo.layout(`w${i}`);
     expect(calls).toHaveLength(MAX_MEMO_WORDS + 1);
-    const again = memo.layout('w0') as Run; // forgotten when the memo was full
+    const again = memo.layout('w0') as Run; // the oldest, forgotten when the memo was full
     expect(calls).toHaveLength(MAX_MEMO_WORDS + 2);
     expect(again.advanceWidth).toBe(2 * 2); // two glyphs, each advancing by the text's length
   });
